@@ -1,0 +1,11 @@
+module saltcast
+
+go 1.26
+
+require (
+	github.com/chromedp/cdproto v0.159.0 // indirect
+	github.com/chromedp/chromedp v0.23.0 // indirect
+	github.com/go-json-experiment/json v0.0.0-20260213210345-44df1a37e875 // indirect
+	github.com/syumai/workers v0.33.0 // indirect
+	honnef.co/go/js/dom/v2 v2.0.0-20231112215516-51f43a291193 // indirect
+)
