@@ -1,0 +1,24 @@
+#!/usr/bin/env bash
+# Makes sure the browser tests can run: Debian's chromium (headless browser driven by chromedp)
+# and binaryen (wasm-opt, used by web/bundle when present). Fast and silent when both are there.
+# As root it installs them with apt-get; otherwise it prints what to install and fails.
+set -euo pipefail
+
+missing=()
+command -v chromium >/dev/null 2>&1 || missing+=(chromium)
+command -v wasm-opt >/dev/null 2>&1 || missing+=(binaryen)
+if [ ${#missing[@]} -eq 0 ]; then
+	exit 0
+fi
+
+if [ "$(id -u)" -ne 0 ]; then
+	echo "deps-chromium: missing ${missing[*]}; the browser tests need them." >&2
+	echo "deps-chromium: install as root:  apt-get update && apt-get install -y ${missing[*]}" >&2
+	exit 1
+fi
+
+echo "deps-chromium: installing ${missing[*]} with apt-get" >&2
+export DEBIAN_FRONTEND=noninteractive
+apt-get update -qq
+apt-get install -y -qq --no-install-recommends "${missing[@]}" >/dev/null
+command -v chromium >/dev/null 2>&1 || { echo "deps-chromium: chromium still missing after apt-get" >&2; exit 1; }
