@@ -17,6 +17,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"slices"
 	"strconv"
 	"strings"
 )
@@ -55,6 +56,8 @@ type Config struct {
 	Version  string // shown in the page and on the batch sheet; "" asks git, then VERSION
 	WasmOpt  string // "" skips wasm-opt; else the optimisation flag such as "-Oz"
 	GoBinary string // "" means "go"
+	// KeepSymbols leaves out -ldflags "-s -w" (only to measure what stripping buys).
+	KeepSymbols bool
 }
 
 // Report gives the sizes of each stage, in bytes.
@@ -81,7 +84,11 @@ func Build(cfg Config) ([]byte, Report, error) {
 	defer os.RemoveAll(tmp)
 
 	out := filepath.Join(tmp, "app.wasm")
-	cmd := exec.Command(gobin, "build", "-trimpath", "-ldflags=-s -w", "-o", out, cfg.Package)
+	args := []string{"build", "-trimpath", "-ldflags=-s -w", "-o", out, cfg.Package}
+	if cfg.KeepSymbols {
+		args = slices.Delete(args, 2, 3)
+	}
+	cmd := exec.Command(gobin, args...)
 	cmd.Dir = cfg.Dir
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if msg, err := cmd.CombinedOutput(); err != nil {

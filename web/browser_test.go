@@ -1,0 +1,234 @@
+package web_test
+
+// Browser tests: headless Debian chromium, driven by chromedp, opens dist/saltcast.html over
+// file:// exactly as a user would. They skip when chromium or the built page is missing,
+// unless SALTCAST_REQUIRE_BROWSER=1 (set by `make test`), when that is a failure.
+
+import (
+	"context"
+	"errors"
+	"net/url"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strconv"
+	"sync"
+	"testing"
+	"time"
+
+	"github.com/chromedp/cdproto/emulation"
+	"github.com/chromedp/cdproto/network"
+	"github.com/chromedp/chromedp"
+)
+
+// pageTimeout bounds one test's conversation with its tab (load, compute, clicks).
+const pageTimeout = 60 * time.Second
+
+var (
+	browserOnce sync.Once
+	browserCtx  context.Context
+	browserErr  error
+	profileDir  string
+)
+
+func TestMain(m *testing.M) {
+	code := m.Run()
+	if browserCtx != nil {
+		chromedp.Cancel(browserCtx)
+	}
+	if profileDir != "" {
+		os.RemoveAll(profileDir)
+	}
+	os.Exit(code)
+}
+
+// need skips (or, under SALTCAST_REQUIRE_BROWSER=1, fails) when a browser test cannot run.
+func need(t testing.TB, why string) {
+	t.Helper()
+	if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
+		t.Fatal(why + " (SALTCAST_REQUIRE_BROWSER=1: run `make build` and `bash scripts/deps-chromium.sh`)")
+	}
+	t.Skip(why + "; run `make test` to build and test for real")
+}
+
+func chromiumPath() string {
+	for _, p := range []string{"chromium", "chromium-browser"} {
+		if path, err := exec.LookPath(p); err == nil {
+			return path
+		}
+	}
+	return ""
+}
+
+// appURL returns the file:// URL of the built page, or skips/fails when it is missing.
+func appURL(t testing.TB) string {
+	t.Helper()
+	path, err := filepath.Abs(filepath.Join("..", "dist", "saltcast.html"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := os.Stat(path); err != nil {
+		need(t, "dist/saltcast.html is not built")
+	}
+	return (&url.URL{Scheme: "file", Path: path}).String()
+}
+
+// browser returns the shared browser context; the first run owns the browser process, so
+// it carries no timeout. Each test opens its own tab from it.
+func browser(t testing.TB) context.Context {
+	t.Helper()
+	exe := chromiumPath()
+	if exe == "" {
+		need(t, "chromium is not installed")
+	}
+	browserOnce.Do(func() {
+		profileDir, browserErr = os.MkdirTemp("", "saltcast-chromium-")
+		if browserErr != nil {
+			return
+		}
+		opts := append(chromedp.DefaultExecAllocatorOptions[:],
+			chromedp.ExecPath(exe),
+			chromedp.UserDataDir(profileDir),
+			chromedp.DisableGPU,
+			chromedp.Flag("disable-background-networking", true),
+			chromedp.Flag("disable-component-update", true),
+			chromedp.Flag("disable-sync", true),
+			chromedp.Flag("no-first-run", true),
+			chromedp.Flag("no-default-browser-check", true),
+			chromedp.WindowSize(1280, 800),
+		)
+		if os.Geteuid() == 0 {
+			opts = append(opts, chromedp.NoSandbox)
+		}
+		alloc, _ := chromedp.NewExecAllocator(context.Background(), opts...)
+		browserCtx, _ = chromedp.NewContext(alloc)
+		browserErr = chromedp.Do(browserCtx)
+	})
+	if browserErr != nil {
+		t.Fatal("starting chromium: " + browserErr.Error())
+	}
+	return browserCtx
+}
+
+// tab opens a new tab at 1280×800 and returns its context, with a timeout, and a cleanup.
+func tab(t testing.TB) context.Context {
+	t.Helper()
+	b := browser(t)
+	ctx, cancel := chromedp.NewContext(b)
+	if err := chromedp.Do(ctx); err != nil {
+		cancel()
+		t.Fatal(err)
+	}
+	tctx, tcancel := context.WithTimeout(ctx, pageTimeout)
+	t.Cleanup(func() { tcancel(); cancel() })
+	return tctx
+}
+
+// open navigates to u and waits until the Go program has shown its first result.
+func open(t testing.TB, ctx context.Context, u string) {
+	t.Helper()
+	if err := chromedp.Do(ctx, chromedp.Navigate(u)); err != nil {
+		t.Fatal("navigate: " + err.Error())
+	}
+	waitReady(t, ctx)
+}
+
+func waitReady(t testing.TB, ctx context.Context) {
+	t.Helper()
+	state, err := chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
+		chromedp.WithPollingInterval(5*time.Millisecond)))
+	if err != nil {
+		t.Fatal("waiting for the first result: " + err.Error())
+	}
+	if state != "1" {
+		msg, _ := eval[string](ctx, `document.getElementById("load-error").textContent`)
+		t.Fatal("the page did not start: " + state + " " + msg)
+	}
+}
+
+// eval runs a JavaScript expression in the page and returns its value.
+func eval[T any](ctx context.Context, expr string) (T, error) {
+	return chromedp.Run(ctx, chromedp.Evaluate[T](expr, chromedp.EvalAwaitPromise))
+}
+
+func mustEval[T any](t testing.TB, ctx context.Context, expr string) T {
+	t.Helper()
+	v, err := eval[T](ctx, expr)
+	if err != nil {
+		t.Fatalf("evaluate %s: %v", expr, err)
+	}
+	return v
+}
+
+// resetStorage empties the page's localStorage (all file:// pages share one) and reloads.
+func resetStorage(t testing.TB, ctx context.Context, u string) {
+	t.Helper()
+	mustEval[bool](t, ctx, `localStorage.clear(), true`)
+	open(t, ctx, u)
+}
+
+// setField types text into a named input of a form as a user would (value, then an input
+// event) and returns once the page has handled it.
+func setField(t testing.TB, ctx context.Context, form, name, text string) {
+	t.Helper()
+	js := `(function(){const el=document.querySelector('#` + form + ` [name="` + name + `"]');` +
+		`if(!el) return false; el.value=` + strconv.Quote(text) + `;` +
+		`el.dispatchEvent(new Event("input",{bubbles:true})); el.dispatchEvent(new Event("change",{bubbles:true})); return true})()`
+	if !mustEval[bool](t, ctx, js) {
+		t.Fatalf("no field %s in #%s", name, form)
+	}
+}
+
+func output(t testing.TB, ctx context.Context, key string) string {
+	t.Helper()
+	return mustEval[string](t, ctx, `(document.querySelector('[data-key="`+key+`"]')||{textContent:"<missing>"}).textContent`)
+}
+
+func outputNumber(t testing.TB, ctx context.Context, key string) float64 {
+	t.Helper()
+	s := output(t, ctx, key)
+	v, err := strconv.ParseFloat(s, 64)
+	if err != nil {
+		t.Fatalf("data-key %s holds %q, not a number", key, s)
+	}
+	return v
+}
+
+func emulatePrint(ctx context.Context) error {
+	return chromedp.Do(ctx, chromedp.Func(func(ctx context.Context, tg *chromedp.Target) error {
+		_, err := chromedp.Call(ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: "print"})
+		return err
+	}))
+}
+
+// requestCounter records every request the tab makes after it is started.
+type requestCounter struct {
+	mu   sync.Mutex
+	urls []string
+}
+
+func countRequests(t testing.TB, ctx context.Context) *requestCounter {
+	t.Helper()
+	rc := &requestCounter{}
+	if err := chromedp.Listen(ctx, func(ev any) {
+		if e, ok := ev.(*network.EventRequestWillBeSent); ok {
+			rc.mu.Lock()
+			rc.urls = append(rc.urls, e.Request.URL)
+			rc.mu.Unlock()
+		}
+	}); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := chromedp.Call(ctx, network.Enable, network.EnableParams{}); err != nil {
+		t.Fatal(err)
+	}
+	return rc
+}
+
+func (rc *requestCounter) list() []string {
+	rc.mu.Lock()
+	defer rc.mu.Unlock()
+	return append([]string(nil), rc.urls...)
+}
+
+var errNoCore = errors.New("core not ready")
