@@ -1,0 +1,143 @@
+package unit
+
+import (
+	"math"
+	"strconv"
+	"strings"
+)
+
+const noThousands = "a number without thousands separators, with one decimal point or comma (e.g. 1234,5 or 1234.5)"
+
+// ParseNumber reads a number as a person types it. See the package documentation for what is
+// accepted. The error, if any, is a *FieldError for field.
+func ParseNumber(field, text string) (float64, error) {
+	s := strings.TrimSpace(text)
+	bad := func(allowed string) (float64, error) {
+		return 0, &FieldError{Field: field, Value: text, Allowed: allowed}
+	}
+	if s == "" {
+		return bad("a number")
+	}
+	// A typographic minus (U+2212) is what word processors put in front of negative numbers.
+	if r := strings.TrimPrefix(s, "−"); r != s {
+		s = "-" + r
+	}
+	var b strings.Builder
+	b.Grow(len(s))
+	i := 0
+	if s[0] == '+' || s[0] == '-' {
+		b.WriteByte(s[0])
+		i++
+	}
+	digits, seps := 0, 0
+	for ; i < len(s); i++ {
+		c := s[i]
+		switch {
+		case c >= '0' && c <= '9':
+			digits++
+			b.WriteByte(c)
+			continue
+		case c == '.' || c == ',':
+			if seps > 0 {
+				return bad(noThousands)
+			}
+			seps++
+			b.WriteByte('.')
+			continue
+		case c == 'e' || c == 'E':
+			if digits == 0 {
+				return bad("a number")
+			}
+			b.WriteByte('e')
+			i++
+			if i < len(s) && (s[i] == '+' || s[i] == '-') {
+				b.WriteByte(s[i])
+				i++
+			}
+			exp := 0
+			for ; i < len(s); i++ {
+				if s[i] < '0' || s[i] > '9' {
+					if isGroupSep(s[i]) {
+						return bad(noThousands)
+					}
+					return bad("a number")
+				}
+				exp++
+				b.WriteByte(s[i])
+			}
+			if exp == 0 {
+				return bad("a number with digits after the exponent (e.g. 1e3)")
+			}
+		case isGroupSep(c):
+			return bad(noThousands)
+		default:
+			return bad("a number")
+		}
+		break
+	}
+	if digits == 0 {
+		return bad("a number")
+	}
+	v, err := strconv.ParseFloat(b.String(), 64)
+	if math.IsInf(v, 0) || math.IsNaN(v) {
+		return bad("a finite number (this one is too large)")
+	}
+	if err != nil {
+		// ParseFloat reports underflow as ErrRange with the result rounded to 0 or a
+		// subnormal; that is a legitimate reading of what was typed.
+		if ne, ok := err.(*strconv.NumError); !ok || ne.Err != strconv.ErrRange {
+			return bad("a number")
+		}
+	}
+	return v, nil
+}
+
+// isGroupSep reports bytes that start a digit-group separator: spaces of every kind
+// (including the UTF-8 lead bytes of no-break and thin spaces), apostrophes and underscores.
+func isGroupSep(c byte) bool {
+	switch c {
+	case ' ', '\t', '\'', '_', 0xC2, 0xE2:
+		return true
+	}
+	return false
+}
+
+// FormatNumber prints v rounded to sig significant figures (1 to 15) in plain decimal
+// notation, switching to an exponent only for magnitudes at or above 1e15 or below 1e-6.
+// It never prints NaN or Inf: a non-finite v prints as "—".
+func FormatNumber(v float64, sig int) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return "—"
+	}
+	sig = max(1, min(sig, 15))
+	if v == 0 {
+		return "0"
+	}
+	a := math.Abs(v)
+	if a >= 1e15 || a < 1e-6 {
+		return strconv.FormatFloat(v, 'g', sig, 64)
+	}
+	exp := int(math.Floor(math.Log10(a)))
+	dec := sig - 1 - exp
+	if dec < 0 {
+		p := math.Pow(10, float64(-dec))
+		v = math.Round(v/p) * p
+		dec = 0
+	}
+	s := strconv.FormatFloat(v, 'f', dec, 64)
+	if strings.Trim(s, "-0.") == "" {
+		return strings.TrimPrefix(s, "-")
+	}
+	return s
+}
+
+// FormatCompact is FormatNumber without trailing zeros after the decimal point ("95", "0.25"),
+// for numbers inside sentences.
+func FormatCompact(v float64, sig int) string {
+	s := FormatNumber(v, sig)
+	if strings.ContainsAny(s, "e—") || !strings.Contains(s, ".") {
+		return s
+	}
+	s = strings.TrimRight(s, "0")
+	return strings.TrimSuffix(s, ".")
+}
