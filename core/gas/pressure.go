@@ -10,7 +10,7 @@ import (
 // Pressure units accepted by PressureKPa. Factors are exact by definition or as given in
 // NIST Special Publication 811 (2008), appendix B.8 (mmHg: "millimeter of mercury,
 // conventional"; inHg: "inch of mercury, conventional", both for mercury at 0 °C and
-// standard gravity).
+// standard gravity; the torr is 1/760 atm exactly).
 const (
 	PaPerAtm  = 101325.0            // standard atmosphere, exact
 	PaPerMmHg = 133.322387415       // conventional mmHg = 13595.1 kg/m³ · 9.80665 m/s² · 1 mm
@@ -21,7 +21,7 @@ const (
 )
 
 // PressureUnits lists the unit names PressureKPa accepts, for messages and menus.
-const PressureUnits = "kPa, hPa, mbar, mmHg, torr, inHg, atm"
+const PressureUnits = "kPa, hPa, mbar, mmHg, Torr, inHg, atm"
 
 // PressureKPa converts a barometric pressure typed in the named unit to kPa. An unknown unit is a
 // *unit.FieldError for field "pressure_unit"; a value that is not finite and positive is a
@@ -33,8 +33,10 @@ func PressureKPa(field string, v float64, unitName string) (float64, error) {
 		paPer = PaPerKPa
 	case "hpa", "mbar", "mb":
 		paPer = PaPerHPa
-	case "mmhg", "torr":
+	case "mmhg":
 		paPer = PaPerMmHg
+	case "torr":
+		paPer = PaPerAtm / 760
 	case "inhg", "in hg":
 		paPer = PaPerInHg
 	case "atm":
