@@ -1,0 +1,33 @@
+// Package chart draws Saltcast's charts as self-contained SVG text.
+//
+// A Chart is plain data: lines (Series), shaded zones (Band) and labelled
+// points (Marker) in the units the reader sees, with axis names and units.
+// Render lays it out in a viewBox 768 units wide that scales to the width of
+// its container (width="100%"), so at 768 px on a tablet the tick labels are
+// 16 px and the data lines 3 px; printed on A4 or Letter they stay above
+// 10 pt. Nothing in the SVG refers to an id, a font file or a URL, so several
+// charts can sit in one page, and the same string works in the live app, on
+// the printed batch sheet and as a file of its own.
+//
+// Colour is never the only cue: each solubility curve has its own dash
+// pattern, each marker its own shape, the batch path is heavy and black with
+// an arrowhead, and the metastable band has a dotted far edge, so a chart
+// printed in black and white reads the same as on screen.
+//
+// Numbers are checked before anything is drawn: a NaN or an infinity
+// anywhere in the data gives a *DataError naming the series and the point,
+// and a chart with nothing to draw gives ErrNoData. Placeholder turns any
+// such error into an SVG message the page can show instead.
+//
+// Every piece of text (titles, labels, compound names typed by a user) is
+// XML-escaped; characters XML cannot hold are replaced by U+FFFD.
+//
+// Solubility and Oxygen build the two charts Saltcast shows from values in
+// °C and g per 100 g water (or mg/L): the solid phases' curves, the
+// metastable band, the batch's path and its points, or the oxygen
+// saturation curve with the day's and a measured point. They convert to the
+// reader's temperature unit (TempUnit) and concentration unit (ConcUnit).
+//
+// The package imports only the standard library's errors, math, strconv,
+// strings and unicode/utf8, so it adds little to the WebAssembly build.
+package chart

@@ -1,0 +1,701 @@
+package chart
+
+import (
+	"math"
+	"strings"
+)
+
+// Render draws c as an SVG document. It returns ErrNoData if c has no
+// points and a *DataError if any number is NaN or infinite; nothing is
+// drawn in either case (see Placeholder).
+func Render(c Chart) (string, error) {
+	if err := c.check(); err != nil {
+		return "", err
+	}
+	l, err := c.layout()
+	if err != nil {
+		return "", err
+	}
+	w := &svgWriter{b: make([]byte, 0, 8192)}
+	l.draw(w)
+	return string(w.b), nil
+}
+
+// layout is a chart placed on the page: scales, ticks and legend rows.
+type layout struct {
+	c                      *Chart
+	xt, yt                 Ticks
+	left, top, plotW       float64
+	height                 float64
+	titleLines             []string
+	legend                 []legendItem
+	legendTop, notesTop    float64
+	bandColour             []string // colour of each band, by index
+	curveOrd               []int    // ordinal of each series among curves (-1 if not a curve)
+	xAxisTitle, yAxisTitle string
+}
+
+type legendItem struct {
+	label      string
+	x, y       float64
+	kind       int // 0 series, 1 band, 2 marker
+	series     *Series
+	ord        int
+	shape      Shape
+	bandColour string
+}
+
+func (c *Chart) layout() (*layout, error) {
+	l := &layout{c: c}
+	// Data bounds.
+	minX, maxX, minY, maxY := math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)
+	add := func(x, y float64) {
+		minX, maxX = math.Min(minX, x), math.Max(maxX, x)
+		minY, maxY = math.Min(minY, y), math.Max(maxY, y)
+	}
+	for _, s := range c.Series {
+		for _, p := range s.Points {
+			add(p.X, p.Y)
+		}
+	}
+	for _, b := range c.Bands {
+		for _, p := range b.Edge {
+			add(p.X, p.Y)
+		}
+		for _, p := range b.Limit {
+			add(p.X, p.Y)
+		}
+	}
+	for _, m := range c.Markers {
+		add(m.X, m.Y)
+	}
+	if c.X.FromZero {
+		minX, maxX = math.Min(minX, 0), math.Max(maxX, 0)
+	}
+	if c.Y.FromZero {
+		minY, maxY = math.Min(minY, 0), math.Max(maxY, 0)
+	}
+	var ok bool
+	if l.xt, ok = NiceTicks(minX, maxX, 8); !ok || len(l.xt.Values()) == 0 {
+		return nil, &DataError{Where: "x axis", Problem: "the data span " + formatSig(minX, 3, false) + " to " + formatSig(maxX, 3, false) + " cannot be labelled"}
+	}
+	if l.yt, ok = NiceTicks(minY, maxY, 6); !ok || len(l.yt.Values()) == 0 {
+		return nil, &DataError{Where: "y axis", Problem: "the data span " + formatSig(minY, 3, false) + " to " + formatSig(maxY, 3, false) + " cannot be labelled"}
+	}
+
+	// Left margin: rotated y title plus the widest y tick label.
+	wy := 0.0
+	for _, v := range l.yt.Values() {
+		wy = math.Max(wy, textWidth(l.yt.Label(v, c.DecimalComma), fontTick))
+	}
+	l.left = outerMargin + fontAxis + 14 + wy + 10
+	right := outerMargin + textWidth(l.xt.Label(l.xt.Hi, c.DecimalComma), fontTick)/2
+	l.plotW = chartWidth - l.left - right
+	l.xAxisTitle = axisTitle(c.X)
+	l.yAxisTitle = axisTitle(c.Y)
+
+	// Title, wrapped to the width.
+	l.titleLines = wrap(c.Title, fontTitle, chartWidth-2*outerMargin, 2)
+	l.top = outerMargin + 12 + float64(len(l.titleLines))*(fontTitle+6)
+	if len(l.titleLines) == 0 {
+		l.top = outerMargin + 12
+	}
+
+	// Colours of curves and bands.
+	l.curveOrd = make([]int, len(c.Series))
+	n := 0
+	for i, s := range c.Series {
+		l.curveOrd[i] = -1
+		if s.Kind == Curve {
+			l.curveOrd[i] = n
+			n++
+		}
+	}
+	l.bandColour = make([]string, len(c.Bands))
+	for i := range c.Bands {
+		l.bandColour[i] = palette[i%len(palette)]
+	}
+
+	// Legend: curves, bands (once per label), other lines, markers.
+	var items []legendItem
+	for i := range c.Series {
+		s := &c.Series[i]
+		if s.Label != "" && s.Kind == Curve {
+			items = append(items, legendItem{label: s.Label, kind: 0, series: s, ord: l.curveOrd[i]})
+		}
+	}
+	seen := map[string]bool{}
+	for i, b := range c.Bands {
+		if b.Label != "" && !seen[b.Label] {
+			seen[b.Label] = true
+			items = append(items, legendItem{label: b.Label, kind: 1, bandColour: l.bandColour[i]})
+		}
+	}
+	for i := range c.Series {
+		s := &c.Series[i]
+		if s.Label != "" && s.Kind != Curve {
+			items = append(items, legendItem{label: s.Label, kind: 0, series: s})
+		}
+	}
+	for i, m := range c.Markers {
+		if m.Label != "" {
+			items = append(items, legendItem{label: m.Label, kind: 2, ord: i, shape: m.Shape})
+		}
+	}
+	plotBottom := l.top + plotHeight
+	l.legendTop = plotBottom + fontTick + 10 + fontAxis + 22
+	x0, x1 := l.left, chartWidth-outerMargin
+	x, y := x0, l.legendTop
+	for _, it := range items {
+		maxText := x1 - x0 - legendSwW - 8
+		it.label = truncate(it.label, fontLegend, maxText)
+		wItem := legendSwW + 8 + textWidth(it.label, fontLegend)
+		if x > x0 && x+wItem > x1 {
+			x, y = x0, y+legendRow
+		}
+		it.x, it.y = x, y
+		l.legend = append(l.legend, it)
+		x += wItem + 26
+	}
+	l.notesTop = l.legendTop
+	if len(l.legend) > 0 {
+		l.notesTop = y + legendRow
+	}
+	l.height = l.notesTop + float64(len(c.Notes))*(fontLegend+8) + outerMargin - 8
+	return l, nil
+}
+
+func axisTitle(a Axis) string {
+	switch {
+	case a.Unit == "":
+		return a.Label
+	case a.Label == "":
+		return a.Unit
+	}
+	return a.Label + " (" + a.Unit + ")"
+}
+
+// px and py map data to SVG coordinates.
+func (l *layout) px(x float64) float64 {
+	return l.left + (x-l.xt.Lo)/(l.xt.Hi-l.xt.Lo)*l.plotW
+}
+
+func (l *layout) py(y float64) float64 {
+	return l.top + plotHeight - (y-l.yt.Lo)/(l.yt.Hi-l.yt.Lo)*plotHeight
+}
+
+func (l *layout) draw(w *svgWriter) {
+	c := l.c
+	w.s(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 `)
+	w.num(chartWidth)
+	w.s(" ")
+	w.num(math.Ceil(l.height))
+	w.s(`" width="100%" role="img" aria-label="`)
+	w.text(c.Title)
+	w.s(`" font-family="`)
+	w.s(fontFamily)
+	w.s(`" style="max-width:100%;height:auto;background:#fff">`)
+	w.s("\n<title>")
+	w.text(c.Title)
+	w.s("</title>\n<desc>")
+	if c.Desc != "" {
+		w.text(c.Desc)
+	} else {
+		w.text(l.describe())
+	}
+	w.s("</desc>\n")
+	w.s(`<rect width="100%" height="100%" fill="#fff"/>`)
+	w.s("\n")
+
+	// Title.
+	for i, t := range l.titleLines {
+		w.s(`<text x="`)
+		w.num(outerMargin)
+		w.s(`" y="`)
+		w.num(outerMargin + fontTitle + float64(i)*(fontTitle+6))
+		w.s(`" font-size="19" font-weight="700" fill="` + ink + `">`)
+		w.text(t)
+		w.s("</text>\n")
+	}
+
+	l.drawGrid(w)
+	for i := range c.Bands {
+		l.drawBand(w, i)
+	}
+	for _, k := range [...]Kind{Reference, Curve, Jump, Path} {
+		for i := range c.Series {
+			if c.Series[i].Kind == k {
+				l.drawSeries(w, i)
+			}
+		}
+	}
+	for i := range c.Markers {
+		m := c.Markers[i]
+		l.drawMarker(w, m.Shape, i, l.px(m.X), l.py(m.Y))
+	}
+	l.drawLegend(w)
+	for i, n := range c.Notes {
+		w.s(`<text x="`)
+		w.num(l.left)
+		w.s(`" y="`)
+		w.num(l.notesTop + float64(i)*(fontLegend+8) + fontLegend - 4)
+		w.s(`" font-size="16" fill="` + grey + `">`)
+		w.text(n)
+		w.s("</text>\n")
+	}
+	w.s("</svg>\n")
+}
+
+func (l *layout) drawGrid(w *svgWriter) {
+	c := l.c
+	top, bottom, left, right := l.top, l.top+plotHeight, l.left, l.left+l.plotW
+	w.s(`<g stroke="#CCCCCC" stroke-width="1">`)
+	for _, v := range l.xt.Values() {
+		w.s(`<line`)
+		w.attr("x1", l.px(v))
+		w.attr("x2", l.px(v))
+		w.attr("y1", top)
+		w.attr("y2", bottom)
+		w.s(`/>`)
+	}
+	for _, v := range l.yt.Values() {
+		w.s(`<line`)
+		w.attr("x1", left)
+		w.attr("x2", right)
+		w.attr("y1", l.py(v))
+		w.attr("y2", l.py(v))
+		w.s(`/>`)
+	}
+	w.s("</g>\n")
+	// Frame.
+	w.s(`<rect fill="none" stroke="` + ink + `" stroke-width="1.5"`)
+	w.attr("x", left)
+	w.attr("y", top)
+	w.attr("width", l.plotW)
+	w.attr("height", plotHeight)
+	w.s("/>\n")
+	// Tick labels.
+	w.s(`<g font-size="16" fill="` + ink + `" text-anchor="middle">`)
+	for _, v := range l.xt.Values() {
+		w.s(`<text`)
+		w.attr("x", l.px(v))
+		w.attr("y", bottom+fontTick+6)
+		w.s(">")
+		w.text(l.xt.Label(v, c.DecimalComma))
+		w.s("</text>")
+	}
+	w.s("</g>\n")
+	w.s(`<g font-size="16" fill="` + ink + `" text-anchor="end">`)
+	for _, v := range l.yt.Values() {
+		w.s(`<text`)
+		w.attr("x", left-8)
+		w.attr("y", l.py(v)+fontTick*0.35)
+		w.s(">")
+		w.text(l.yt.Label(v, c.DecimalComma))
+		w.s("</text>")
+	}
+	w.s("</g>\n")
+	// Axis titles.
+	w.s(`<text font-size="17" fill="` + ink + `" text-anchor="middle"`)
+	w.attr("x", left+l.plotW/2)
+	w.attr("y", bottom+fontTick+10+fontAxis+6)
+	w.s(">")
+	w.text(l.xAxisTitle)
+	w.s("</text>\n")
+	cy := top + plotHeight/2
+	w.s(`<text font-size="17" fill="` + ink + `" text-anchor="middle" transform="rotate(-90)"`)
+	w.attr("x", -cy)
+	w.attr("y", outerMargin+fontAxis-2)
+	w.s(">")
+	w.text(truncate(l.yAxisTitle, fontAxis, plotHeight))
+	w.s("</text>\n")
+}
+
+// points appends the "points" attribute of a polyline or polygon.
+func (l *layout) points(w *svgWriter, pts []Point, reverse bool) {
+	for i := range pts {
+		p := pts[i]
+		if reverse {
+			p = pts[len(pts)-1-i]
+		}
+		if w.b[len(w.b)-1] != '"' {
+			w.s(" ")
+		}
+		w.num(l.px(p.X))
+		w.s(",")
+		w.num(l.py(p.Y))
+	}
+}
+
+func (l *layout) drawBand(w *svgWriter, i int) {
+	b := l.c.Bands[i]
+	col := l.bandColour[i]
+	if len(b.Edge)+len(b.Limit) >= 3 {
+		w.s(`<polygon fill="` + col + `" fill-opacity="0.16" stroke="none" points="`)
+		l.points(w, b.Edge, false)
+		l.points(w, b.Limit, true)
+		w.s("\"/>\n")
+	}
+	if len(b.Limit) >= 2 {
+		w.s(`<polyline fill="none" stroke="` + col + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round" points="`)
+		l.points(w, b.Limit, false)
+		w.s("\"/>\n")
+	}
+}
+
+// lineStyle returns the stroke attributes of series i.
+func (l *layout) lineStyle(s *Series, ord int) (colour string, width float64, dash string) {
+	switch s.Kind {
+	case Path:
+		return ink, pathWidth, ""
+	case Jump:
+		return ink, 2.5, "9 6"
+	case Reference:
+		return grey, 2, "5 4"
+	}
+	return palette[ord%len(palette)], curveWidth, curveDashes[ord%len(curveDashes)]
+}
+
+func (l *layout) strokeAttrs(w *svgWriter, colour string, width float64, dash string) {
+	w.s(` fill="none" stroke="` + colour + `"`)
+	w.attr("stroke-width", width)
+	if dash != "" {
+		w.s(` stroke-dasharray="` + dash + `"`)
+		if dash == curveDashes[len(curveDashes)-1] {
+			w.s(` stroke-linecap="round"`)
+		}
+	}
+	w.s(` stroke-linejoin="round"`)
+}
+
+func (l *layout) drawSeries(w *svgWriter, i int) {
+	s := &l.c.Series[i]
+	if len(s.Points) == 0 {
+		return
+	}
+	colour, width, dash := l.lineStyle(s, l.curveOrd[i])
+	if len(s.Points) == 1 {
+		// A lone point of a line: a dot, so it is not lost.
+		w.s(`<circle fill="` + colour + `"`)
+		w.attr("cx", l.px(s.Points[0].X))
+		w.attr("cy", l.py(s.Points[0].Y))
+		w.attr("r", width)
+		w.s("/>\n")
+		return
+	}
+	w.s(`<polyline`)
+	l.strokeAttrs(w, colour, width, dash)
+	w.s(` points="`)
+	l.points(w, s.Points, false)
+	w.s("\"/>\n")
+	if s.Kind == Path || s.Kind == Jump {
+		l.midArrow(w, s.Points, colour)
+	}
+}
+
+// midArrow draws an arrowhead half way along the polyline (measured on the
+// page), pointing the way the points run; it sits in the middle rather than
+// at the end so that markers at the ends do not hide it.
+func (l *layout) midArrow(w *svgWriter, pts []Point, colour string) {
+	total := 0.0
+	for i := 1; i < len(pts); i++ {
+		total += math.Hypot(l.px(pts[i].X)-l.px(pts[i-1].X), l.py(pts[i].Y)-l.py(pts[i-1].Y))
+	}
+	if total < 30 {
+		return
+	}
+	half, run := total/2, 0.0
+	for i := 1; i < len(pts); i++ {
+		x0, y0 := l.px(pts[i-1].X), l.py(pts[i-1].Y)
+		dx, dy := l.px(pts[i].X)-x0, l.py(pts[i].Y)-y0
+		d := math.Hypot(dx, dy)
+		if d == 0 || run+d < half {
+			run += d
+			continue
+		}
+		t := (half - run) / d
+		ux, uy := dx/d, dy/d
+		tipX, tipY := x0+dx*t+ux*7, y0+dy*t+uy*7
+		const length, halfW = 16.0, 7.5
+		bx, by := tipX-ux*length, tipY-uy*length
+		w.s(`<polygon fill="` + colour + `" points="`)
+		w.num(tipX)
+		w.s(",")
+		w.num(tipY)
+		w.s(" ")
+		w.num(bx - uy*halfW)
+		w.s(",")
+		w.num(by + ux*halfW)
+		w.s(" ")
+		w.num(bx + uy*halfW)
+		w.s(",")
+		w.num(by - ux*halfW)
+		w.s("\"/>\n")
+		return
+	}
+}
+
+// drawMarker draws the symbol of marker number ord at (x, y) in SVG units.
+// Filled symbols have a white rim so they stand out on top of lines.
+func (l *layout) drawMarker(w *svgWriter, shape Shape, ord int, x, y float64) {
+	col := markerColours[ord%len(markerColours)]
+	r := markerSize
+	switch shape {
+	case Circle:
+		w.s(`<circle fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.attr("cx", x)
+		w.attr("cy", y)
+		w.attr("r", r)
+		w.s("/>\n")
+	case Square:
+		r *= 0.9
+		w.s(`<rect fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.attr("x", x-r)
+		w.attr("y", y-r)
+		w.attr("width", 2*r)
+		w.attr("height", 2*r)
+		w.s("/>\n")
+	case Cross:
+		w.s(`<path fill="none" stroke="#fff" stroke-width="7" stroke-linecap="round" d="`)
+		crossPath(w, x, y, r)
+		w.s("\"/>\n")
+		w.s(`<path fill="none" stroke="` + col + `" stroke-width="3.5" stroke-linecap="round" d="`)
+		crossPath(w, x, y, r)
+		w.s("\"/>\n")
+	default:
+		var pts [4][2]float64
+		n := 4
+		switch shape {
+		case Diamond:
+			r *= 1.25
+			pts = [4][2]float64{{x, y - r}, {x + r, y}, {x, y + r}, {x - r, y}}
+		case TriangleUp:
+			r *= 1.2
+			pts = [4][2]float64{{x, y - r}, {x + r, y + r*0.75}, {x - r, y + r*0.75}}
+			n = 3
+		case TriangleDown:
+			r *= 1.2
+			pts = [4][2]float64{{x, y + r}, {x - r, y - r*0.75}, {x + r, y - r*0.75}}
+			n = 3
+		}
+		w.s(`<polygon fill="` + col + `" stroke="#fff" stroke-width="2" stroke-linejoin="round" points="`)
+		for i := 0; i < n; i++ {
+			if i > 0 {
+				w.s(" ")
+			}
+			w.num(pts[i][0])
+			w.s(",")
+			w.num(pts[i][1])
+		}
+		w.s("\"/>\n")
+	}
+}
+
+func crossPath(w *svgWriter, x, y, r float64) {
+	r *= 0.85
+	w.s("M")
+	w.num(x - r)
+	w.s(" ")
+	w.num(y - r)
+	w.s("L")
+	w.num(x + r)
+	w.s(" ")
+	w.num(y + r)
+	w.s("M")
+	w.num(x - r)
+	w.s(" ")
+	w.num(y + r)
+	w.s("L")
+	w.num(x + r)
+	w.s(" ")
+	w.num(y - r)
+}
+
+func (l *layout) drawLegend(w *svgWriter) {
+	if len(l.legend) == 0 {
+		return
+	}
+	w.s(`<g font-size="16" fill="` + ink + `">` + "\n")
+	for _, it := range l.legend {
+		cy := it.y + legendRow/2 - 4
+		switch it.kind {
+		case 0:
+			colour, width, dash := l.lineStyle(it.series, it.ord)
+			w.s(`<line`)
+			l.strokeAttrs(w, colour, width, dash)
+			w.attr("x1", it.x)
+			w.attr("x2", it.x+legendSwW)
+			w.attr("y1", cy)
+			w.attr("y2", cy)
+			w.s("/>")
+			if it.series.Kind == Path || it.series.Kind == Jump {
+				w.s(`<polygon fill="` + colour + `" points="`)
+				w.num(it.x + legendSwW)
+				w.s(",")
+				w.num(cy)
+				w.s(" ")
+				w.num(it.x + legendSwW - 14)
+				w.s(",")
+				w.num(cy - 6.5)
+				w.s(" ")
+				w.num(it.x + legendSwW - 14)
+				w.s(",")
+				w.num(cy + 6.5)
+				w.s(`"/>`)
+			}
+		case 1:
+			w.s(`<rect fill="` + it.bandColour + `" fill-opacity="0.16"`)
+			w.attr("x", it.x)
+			w.attr("y", cy-10)
+			w.attr("width", legendSwW)
+			w.attr("height", 20)
+			w.s(`/><line stroke="` + it.bandColour + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round"`)
+			w.attr("x1", it.x+3)
+			w.attr("x2", it.x+legendSwW)
+			w.attr("y1", cy-10)
+			w.attr("y2", cy-10)
+			w.s("/>")
+		case 2:
+			l.drawMarker(w, it.shape, it.ord, it.x+legendSwW/2, cy)
+		}
+		w.s(`<text`)
+		w.attr("x", it.x+legendSwW+8)
+		w.attr("y", cy+fontLegend*0.35)
+		w.s(">")
+		w.text(it.label)
+		w.s("</text>\n")
+	}
+	w.s("</g>\n")
+}
+
+// describe writes the text alternative of the chart: axes, lines with their
+// ranges, and every marker with its coordinates.
+func (l *layout) describe() string {
+	c := l.c
+	comma := c.DecimalComma
+	var b strings.Builder
+	if c.Title != "" {
+		b.WriteString(c.Title)
+		b.WriteString(". ")
+	}
+	b.WriteString("Horizontal axis: ")
+	b.WriteString(l.xAxisTitle)
+	b.WriteString(", ")
+	b.WriteString(l.xt.Label(l.xt.Lo, comma))
+	b.WriteString(" to ")
+	b.WriteString(l.xt.Label(l.xt.Hi, comma))
+	b.WriteString(". Vertical axis: ")
+	b.WriteString(l.yAxisTitle)
+	b.WriteString(", ")
+	b.WriteString(l.yt.Label(l.yt.Lo, comma))
+	b.WriteString(" to ")
+	b.WriteString(l.yt.Label(l.yt.Hi, comma))
+	b.WriteString(".")
+	for _, s := range c.Series {
+		if s.Label == "" || len(s.Points) == 0 {
+			continue
+		}
+		first, last := s.Points[0], s.Points[len(s.Points)-1]
+		b.WriteString(" ")
+		b.WriteString(s.Label)
+		b.WriteString(": from ")
+		b.WriteString(l.pair(first))
+		b.WriteString(" to ")
+		b.WriteString(l.pair(last))
+		b.WriteString(".")
+	}
+	for _, m := range c.Markers {
+		b.WriteString(" ")
+		b.WriteString(m.Label)
+		b.WriteString(": ")
+		b.WriteString(l.pair(Point{m.X, m.Y}))
+		b.WriteString(".")
+	}
+	return b.String()
+}
+
+// pair prints a point with its units, e.g. "35 °C, 55.1 g/100 g water".
+func (l *layout) pair(p Point) string {
+	s := formatShort(p.X, 4, l.c.DecimalComma)
+	if l.c.X.Unit != "" {
+		s += " " + l.c.X.Unit
+	}
+	s += ", " + formatShort(p.Y, 4, l.c.DecimalComma)
+	if l.c.Y.Unit != "" {
+		s += " " + l.c.Y.Unit
+	}
+	return s
+}
+
+// wrap breaks s into at most max lines of the given width; the last line is
+// truncated if needed.
+func wrap(s string, size, width float64, max int) []string {
+	s = strings.TrimSpace(s)
+	if s == "" {
+		return nil
+	}
+	var lines []string
+	words := strings.Fields(s)
+	cur := ""
+	for i, wd := range words {
+		try := wd
+		if cur != "" {
+			try = cur + " " + wd
+		}
+		if cur != "" && textWidth(try, size) > width {
+			lines = append(lines, cur)
+			if len(lines) == max-1 {
+				rest := strings.Join(words[i:], " ")
+				return append(lines, truncate(rest, size, width))
+			}
+			cur = wd
+			continue
+		}
+		cur = try
+	}
+	return append(lines, truncate(cur, size, width))
+}
+
+// truncate shortens s with "…" so that it fits width.
+func truncate(s string, size, width float64) string {
+	if textWidth(s, size) <= width {
+		return s
+	}
+	r := []rune(s)
+	for len(r) > 0 && textWidth(string(r)+"…", size) > width {
+		r = r[:len(r)-1]
+	}
+	return string(r) + "…"
+}
+
+// Placeholder returns a small SVG of the same width as a chart that shows
+// title and a message, e.g. err.Error() from Render, instead of a chart.
+func Placeholder(title, message string) string {
+	w := &svgWriter{b: make([]byte, 0, 1024)}
+	lines := wrap(message, fontAxis, chartWidth-4*outerMargin, 3)
+	h := 2*outerMargin + 40 + float64(len(lines))*(fontAxis+8) + 24
+	w.s(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 768 `)
+	w.num(math.Ceil(h))
+	w.s(`" width="100%" role="img" aria-label="`)
+	w.text(title)
+	w.s(`" font-family="` + fontFamily + `" style="max-width:100%;height:auto;background:#fff">` + "\n<title>")
+	w.text(title)
+	w.s("</title>\n<desc>")
+	w.text(message)
+	w.s("</desc>\n")
+	w.s(`<rect x="1" y="1" width="766" fill="#fff" stroke="` + grey + `" stroke-width="2" stroke-dasharray="8 6"`)
+	w.attr("height", math.Ceil(h)-2)
+	w.s("/>\n")
+	w.s(`<text x="32" y="52" font-size="19" font-weight="700" fill="` + ink + `">`)
+	w.text(truncate(title, fontTitle, chartWidth-4*outerMargin))
+	w.s("</text>\n")
+	for i, ln := range lines {
+		w.s(`<text x="32" font-size="17" fill="` + ink + `"`)
+		w.attr("y", 52+34+float64(i)*(fontAxis+8))
+		w.s(">")
+		w.text(ln)
+		w.s("</text>\n")
+	}
+	w.s("</svg>\n")
+	return string(w.b)
+}
