@@ -100,20 +100,20 @@ func Solubility(v SolubilityView) (Chart, error) {
 		DecimalComma: v.DecimalComma,
 	}
 	comma := v.DecimalComma
-	conv := func(where string, p Point) (Point, error) {
+	conv := func(where func() string, p Point) (Point, error) {
 		if !finite(p.X) || !finite(p.Y) {
-			return Point{}, &DataError{Where: where, Problem: "not a finite number"}
+			return Point{}, &DataError{Where: where(), Problem: "not a finite number"}
 		}
 		y, err := v.Conc.conv(p.Y)
 		if err != nil {
-			return Point{}, &DataError{Where: where, Problem: "cannot be shown in " + v.Conc.symbol() + ": " + err.Error()}
+			return Point{}, &DataError{Where: where(), Problem: "cannot be shown in " + v.Conc.symbol() + ": " + err.Error()}
 		}
 		return Point{v.Temp.FromCelsius(p.X), y}, nil
 	}
 	convAll := func(where string, pts []Point, shiftK float64) ([]Point, error) {
 		out := make([]Point, len(pts))
 		for i, p := range pts {
-			q, err := conv(where+" point "+strconv.Itoa(i+1), Point{p.X - shiftK, p.Y})
+			q, err := conv(func() string { return where + " point " + strconv.Itoa(i+1) }, Point{p.X - shiftK, p.Y})
 			if err != nil {
 				return nil, err
 			}
@@ -204,7 +204,7 @@ func Solubility(v SolubilityView) (Chart, error) {
 			if p == nil {
 				return nil
 			}
-			q, err := conv(label, *p)
+			q, err := conv(func() string { return label }, *p)
 			if err != nil {
 				return err
 			}

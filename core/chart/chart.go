@@ -142,8 +142,8 @@ func (c *Chart) check() error {
 
 func checkPoints(what, label string, pts []Point) error {
 	for i, p := range pts {
-		if err := checkPoint(what+" "+strconv.Quote(label)+" point "+strconv.Itoa(i+1), p); err != nil {
-			return err
+		if !finite(p.X) || !finite(p.Y) {
+			return checkPoint(what+" "+strconv.Quote(label)+" point "+strconv.Itoa(i+1), p)
 		}
 	}
 	return nil
