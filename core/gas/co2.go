@@ -76,7 +76,7 @@ func CO2Saturation(c Conditions, co2PPM float64) (Dissolved, error) {
 		MgPerL:    WeissK0MolPerLAtm(c.TempC, c.Salinity) * pAtm * g.MolarMassGPerMol * 1000,
 		UmolPerKg: WeissK0MolPerKgAtm(c.TempC, c.Salinity) * pAtm * 1e6,
 		Method:    "Weiss 1974",
-		Source:    SourceWeiss + "; CO2 in dry air " + unit.FormatNumber(co2PPM, 6) + " ppm as given",
+		Source:    SourceWeiss + "; CO2 in dry air " + unit.FormatCompact(co2PPM, 6) + " ppm as given",
 		Warnings:  append(warnings, "CO2(aq) only: dissolved inorganic carbon (bicarbonate, carbonate) depends on pH and alkalinity and is not included"),
 	}
 	return d, nil

@@ -159,7 +159,7 @@ func CheckHenry(tempField string, tempC float64, pressureField string, pressureK
 	pw := water.VaporPressurePa(tempC) / PaPerKPa
 	if math.IsNaN(pressureKPa) || pressureKPa <= pw || pressureKPa > 1000 {
 		return unit.NumberError(pressureField, pressureKPa,
-			"a pressure above the vapour pressure of water at the temperature ("+unit.FormatNumber(pw, 4)+" kPa) and at most 1000 kPa")
+			"a pressure above the vapour pressure of water at the temperature ("+unit.FormatCompact(pw, 4)+" kPa) and at most 1000 kPa")
 	}
 	return nil
 }

@@ -67,7 +67,7 @@ func Outgas(in OutgasInput) (Outgassing, error) {
 	}
 	if math.IsNaN(in.ToC) || in.ToC <= in.FromC || in.ToC > HenryMaxC {
 		return Outgassing{}, unit.NumberError("to_C", in.ToC,
-			"a temperature above from_C ("+unit.FormatNumber(in.FromC, 6)+" °C) and at most 100 °C")
+			"a temperature above from_C ("+unit.FormatCompact(in.FromC, 6)+" °C) and at most 100 °C")
 	}
 	if math.IsNaN(in.HeatPressureKPa) || in.HeatPressureKPa <= 0 || in.HeatPressureKPa > 1000 {
 		return Outgassing{}, unit.NumberError("heat_pressure_kPa", in.HeatPressureKPa, "a pressure above 0 and at most 1000 kPa")
@@ -95,8 +95,8 @@ func Outgas(in OutgasInput) (Outgassing, error) {
 	pw2 := water.VaporPressurePa(in.ToC)
 	litresPerKg := 1000 / water.DensityKgPerM3(in.FromC) // L of water per kg at FromC
 	if pw2 >= p2 {
-		out.Warnings = append(out.Warnings, "the water boils at "+unit.FormatNumber(in.ToC, 4)+" °C and "+
-			unit.FormatNumber(in.HeatPressureKPa, 5)+" kPa: all dissolved gas is counted as released")
+		out.Warnings = append(out.Warnings, "the water boils at "+unit.FormatCompact(in.ToC, 4)+" °C and "+
+			unit.FormatCompact(in.HeatPressureKPa, 5)+" kPa: all dissolved gas is counted as released")
 	}
 
 	gases := All()

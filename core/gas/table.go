@@ -37,11 +37,11 @@ const (
 // the offending cell).
 func OxygenTable(tempsC []float64, kind string, columns []float64, fixed float64, method string) (Table, error) {
 	if len(tempsC) == 0 || len(tempsC) > TableMaxRows {
-		return Table{}, &unit.FieldError{Field: "temps_C", Value: unit.FormatNumber(float64(len(tempsC)), 4) + " rows",
+		return Table{}, &unit.FieldError{Field: "temps_C", Value: unit.FormatCompact(float64(len(tempsC)), 4) + " rows",
 			Allowed: "1 to 101 temperatures"}
 	}
 	if len(columns) == 0 || len(columns) > TableMaxCols {
-		return Table{}, &unit.FieldError{Field: "columns", Value: unit.FormatNumber(float64(len(columns)), 4) + " columns",
+		return Table{}, &unit.FieldError{Field: "columns", Value: unit.FormatCompact(float64(len(columns)), 4) + " columns",
 			Allowed: "1 to 12 values"}
 	}
 	if kind != ColumnsPressure && kind != ColumnsSalinity {
