@@ -66,7 +66,7 @@ var Units = []Unit{GPer100gWater, MassPct, MoleFrac, MolPerKg, GramsPerL, MolesP
 // solution of density rho (kg/m³; only read for g/L and mol/L). Errors are *unit.FieldError
 // for "value", "unit", "molar_mass_g_per_mol" or "density_kg_per_m3".
 func Convert(v float64, from, to Unit, M, rho float64) (float64, error) {
-	g, err := toG(v, from, M, rho)
+	g, err := toG(v, from, to, M, rho)
 	if err != nil {
 		return 0, err
 	}
@@ -87,14 +87,14 @@ func Convert(v float64, from, to Unit, M, rho float64) (float64, error) {
 	return 0, badUnit(to)
 }
 
-func toG(v float64, from Unit, M, rho float64) (float64, error) {
+func toG(v float64, from, to Unit, M, rho float64) (float64, error) {
 	if !(v >= 0 && v < 1e9) {
 		return 0, unit.NumberError("value", v, "a concentration ≥ 0")
 	}
 	if !(M > 0 && M < 1e6) {
 		return 0, unit.NumberError("molar_mass_g_per_mol", M, "a molar mass > 0 g/mol")
 	}
-	needRho := from == GramsPerL || from == MolesPerL
+	needRho := from == GramsPerL || from == MolesPerL || to == GramsPerL || to == MolesPerL
 	if needRho && !(rho >= 500 && rho <= 5000) {
 		return 0, unit.NumberError("density_kg_per_m3", rho, "a solution density from 500 to 5000 kg/m³")
 	}
