@@ -1,16 +1,16 @@
-// Package balance is the batch planner: the charge to weigh, the saturation temperature,
-// the crash-out with its hydrate water, the heat, the adiabatic end temperature of a seeded
-// batch, seeding and the cooling programme.
 package balance
+
+import "saltcast/core/compound"
 
 // Result is everything the planner works out for one batch. Masses are grams, temperatures
 // °C, heats kJ; concentrations are g of anhydrous solute per 100 g of water. Fields behind a
 // Has… flag are meaningful only when it is true. No field is ever NaN or ±Inf: Plan turns
 // such a value into an error.
 type Result struct {
-	SoluteID    string // compound id, e.g. "CuSO4"
-	SoluteName  string // e.g. "copper(II) sulfate"
-	ChargedForm string // formula of the form weighed, e.g. "CuSO4·5H2O"
+	Compound    *compound.Compound // the solute, with its curve segments (for charts)
+	SoluteID    string             // compound id, e.g. "CuSO4"
+	SoluteName  string             // e.g. "copper(II) sulfate"
+	ChargedForm string             // formula of the form weighed, e.g. "CuSO4·5H2O"
 	PurityPct   float64
 
 	// The charge and the water.
@@ -69,6 +69,7 @@ type Result struct {
 	// CrystallizationHeatKJ = released by the crystals forming.
 	HeatCapacityKJPerK          float64 // batch (liquor + vessel)
 	HeatCapacityModel           string
+	HasDissolutionHeat          bool
 	DissolutionHeatKJ           float64
 	DissolutionTempChangeK      float64 // if insulated: negative = the batch cools
 	DissolutionEnthalpyKJPerMol float64 // of the charged form
@@ -90,6 +91,8 @@ type Result struct {
 	AdiabaticCrystalsG float64
 	AdiabaticRiseK     float64
 	AdiabaticPhase     string
+	AdiabaticG100      float64 // liquor concentration at the end, g per 100 g water
+	AdiabaticBasis     string  // the enthalpy used
 
 	// Points for a chart of concentration against temperature, in path order.
 	Path []PathPoint

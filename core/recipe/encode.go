@@ -2,23 +2,166 @@ package recipe
 
 import "saltcast/core/wire"
 
-// Encode writes the result with the CLI keys (see the README's command-line section).
+// sig is the number of significant digits of numbers in the result JSON: finer than any
+// balance can weigh, coarse enough that the last digit is not noise.
+const sig = 6
+
+// Encode writes the result as JSON with a fixed set of keys in a fixed order (see the
+// README's command-line section). A key that does not apply to this batch is null (for
+// instance crystals_g without cool_to_C), so scripts can rely on every key being present.
 func (res Result) Encode() []byte {
 	var e wire.Encoder
-	e.BeginObject()
-	e.Key("format").Int(CurrentFormat)
-	e.Key("name").String(res.Recipe.Name)
-	e.Key("solute").String(res.SoluteID)
-	e.Key("charged_form").String(res.ChargedForm)
-	e.Key("charge_g").Round(res.ChargeG, sig)
-	e.Key("water_g").Round(res.WaterG, sig)
-	e.EndObject()
+	res.encode(&e)
 	b, err := e.Bytes()
 	if err != nil {
-		panic(err)
+		// balance.Plan refuses non-finite numbers, so this is a programming error.
+		panic("recipe: Result.Encode: " + err.Error())
 	}
 	return b
 }
 
-// sig is the number of significant digits in result numbers.
-const sig = 6
+func (res Result) encode(e *wire.Encoder) {
+	num := func(k string, v float64) { e.Key(k).Round(v, sig) }
+	opt := func(k string, v float64, ok bool) {
+		if ok {
+			e.Key(k).Round(v, sig)
+		} else {
+			e.Key(k).Null()
+		}
+	}
+	optStr := func(k, v string, ok bool) {
+		if ok {
+			e.Key(k).String(v)
+		} else {
+			e.Key(k).Null()
+		}
+	}
+	list := func(k string, l []string) {
+		e.Key(k).BeginArray()
+		for _, s := range l {
+			e.String(s)
+		}
+		e.EndArray()
+	}
+	r := res.Result
+	e.BeginObject()
+	e.Key("format").Int(CurrentFormat)
+	e.Key("name").String(res.Recipe.Name)
+	e.Key("solute").String(r.SoluteID)
+	e.Key("solute_name").String(r.SoluteName)
+	e.Key("charged_form").String(r.ChargedForm)
+	num("purity_pct", r.PurityPct)
+
+	// The charge.
+	num("charge_g", r.ChargeG)
+	num("water_g", r.WaterG)
+	num("hydrate_water_g", r.HydrateWaterG)
+	num("total_water_g", r.TotalWaterG)
+	num("solute_g", r.SoluteG)
+	num("impurity_g", r.ImpurityG)
+	num("dissolve_temp_C", r.DissolveTempC)
+	num("solubility_at_dissolve_g_per_100g_water", r.SolubilityAtStart)
+	num("concentration_g_per_100g_water", r.ConcentrationG100)
+	num("saturation_pct", r.SaturationPct)
+	num("min_water_g", r.MinWaterG)
+	opt("clear_down_to_C", r.ClearDownToC, r.HasClearDown)
+	opt("saturation_temp_C", r.SaturationTempC, r.HasOnset)
+	optStr("saturation_note", r.OnsetNote, !r.HasOnset)
+
+	// Crash-out.
+	t := r.HasTarget
+	opt("cool_to_C", r.TargetC, t)
+	opt("evaporated_water_g", r.EvaporatedWaterG, t)
+	opt("crystals_g", r.CrystalsG, t)
+	optStr("crystal_phase", r.CrystalPhase, t)
+	opt("yield_pct", r.YieldPct, t)
+	opt("liquor_g", r.LiquorG, t)
+	opt("liquor_g_per_100g_water", r.LiquorG100, t)
+	opt("solubility_at_target_g_per_100g_water", r.SolubilityAtTargetG100, t)
+	e.Key("phase_changes").BeginArray()
+	for _, p := range r.PhaseChanges {
+		e.BeginObject()
+		num("temp_C", p.TempC)
+		e.Key("from").String(p.From)
+		e.Key("to").String(p.To)
+		e.EndObject()
+	}
+	e.EndArray()
+
+	// The unseeded path, seeding and the programme.
+	e.Key("supersaturation").BeginArray()
+	for _, p := range r.Supersaturation {
+		e.BeginObject()
+		num("temp_C", p.TempC)
+		num("ratio", p.Ratio)
+		num("excess_g_per_100g_water", p.DeltaG)
+		e.EndObject()
+	}
+	e.EndArray()
+	opt("metastable_width_K", r.MetastableWidthK, r.HasMetastable)
+	opt("nucleation_temp_C", r.NucleationC, r.HasMetastable)
+	if r.HasSeedHint {
+		e.Key("seed").BeginObject()
+		num("temp_C", r.SeedHintC)
+		e.Key("phase").String(r.SeedPhase)
+		num("low_g", r.SeedLowG)
+		num("high_g", r.SeedHighG)
+		e.Key("rule").String(r.SeedRule)
+		e.EndObject()
+	} else {
+		e.Key("seed").Null()
+	}
+	if len(r.Programme) > 0 {
+		e.Key("programme").BeginObject()
+		num("from_C", r.ProgrammeFromC)
+		num("to_C", r.ProgrammeToC)
+		e.Key("steps").BeginArray()
+		for _, s := range r.Programme {
+			e.BeginObject()
+			num("time_min", s.TimeMin)
+			num("linear_C", s.LinearC)
+			num("cubic_C", s.CubicC)
+			e.EndObject()
+		}
+		e.EndArray()
+		e.EndObject()
+	} else {
+		e.Key("programme").Null()
+	}
+
+	// Heat.
+	num("heat_capacity_kJ_per_K", r.HeatCapacityKJPerK)
+	e.Key("heat_capacity_model").String(r.HeatCapacityModel)
+	opt("dissolution_heat_kJ", r.DissolutionHeatKJ, r.HasDissolutionHeat)
+	opt("dissolution_temp_change_K", r.DissolutionTempChangeK, r.HasDissolutionHeat)
+	opt("crystallization_heat_kJ", r.CrystallizationHeatKJ, t)
+	opt("crystal_enthalpy_kJ_per_mol", r.CrystalEnthalpyKJPerMol, t && r.EnthalpyBasis != "")
+	opt("apparent_enthalpy_kJ_per_mol", r.ApparentEnthalpyKJPerMol, t && r.HasApparent)
+	optStr("enthalpy_basis", r.EnthalpyBasis, r.EnthalpyBasis != "")
+	opt("sensible_heat_kJ", r.SensibleHeatKJ, t)
+	opt("cooling_duty_kJ", r.CoolingDutyKJ, t)
+	opt("cooling_time_min", r.CoolingTimeMin, r.HasCoolingPower)
+	opt("cooling_power_W", r.CoolingPowerW, r.HasCoolingPower)
+
+	// Seeded in an insulated vessel.
+	a := r.HasAdiabatic
+	opt("seed_at_C", r.SeedAtC, a)
+	opt("adiabatic_end_temp_C", r.AdiabaticEndC, a)
+	opt("adiabatic_crystals_g", r.AdiabaticCrystalsG, a)
+	opt("adiabatic_rise_K", r.AdiabaticRiseK, a)
+	optStr("adiabatic_phase", r.AdiabaticPhase, a)
+
+	e.Key("path").BeginArray()
+	for _, p := range r.Path {
+		e.BeginObject()
+		e.Key("label").String(p.Label)
+		num("temp_C", p.TempC)
+		num("g_per_100g_water", p.G100)
+		e.EndObject()
+	}
+	e.EndArray()
+	list("cautions", r.Cautions)
+	list("warnings", r.Warnings)
+	list("sources", r.Sources)
+	e.EndObject()
+}

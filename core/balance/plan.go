@@ -1,0 +1,461 @@
+package balance
+
+import (
+	"errors"
+	"math"
+
+	"saltcast/core/compound"
+	"saltcast/core/unit"
+	"saltcast/core/water"
+)
+
+// Batch is what the planner needs. Package recipe builds it from a checked recipe; the
+// field names in errors are the recipe keys.
+type Batch struct {
+	Compound  *compound.Compound
+	Form      *compound.Form // the charged form; nil means the anhydrous form
+	PurityPct float64        // 0 means 100
+	WaterG    float64        // water added, > 0
+
+	DissolveTempC float64
+
+	// The charge: ChargeG if > 0; else the most that stays clear down to
+	// ClearDownToC + ClearMarginK if HasClearDown; else SaturationPct % of saturation at the
+	// dissolve temperature (0 means 100).
+	ChargeG       float64
+	HasClearDown  bool
+	ClearDownToC  float64
+	ClearMarginK  float64
+	SaturationPct float64
+
+	HasTarget        bool
+	TargetC          float64 // cool_to_C
+	EvaporatedWaterG float64
+
+	HasSeedAt bool
+	SeedAtC   float64
+
+	MetastableWidthK float64 // 0: not given
+	CoolingTimeMin   float64 // 0: not given
+
+	LiquorCpKJPerKgK float64 // 0: the water-equivalent model
+	VesselJPerK      float64
+}
+
+// Thresholds of the general cautions.
+const (
+	hotLiquidC      = 50.0 // above this a spill scalds (common practice)
+	strongThermalK  = 10.0 // an insulated temperature swing above this is a strong exo/endotherm (common practice)
+	enthalpyDiffPct = 25.0 // show both enthalpies when they differ by more than this
+	programmeRows   = 10   // intervals of the cooling programme table
+	pathPoints      = 8    // intervals of the supersaturation table
+)
+
+// Rules of thumb with their sources, reported with the suggestions they produce.
+const (
+	seedRule = "seed about 1 K below the saturation temperature and inside the metastable zone " +
+		"(common practice; Walas, Chemical Process Equipment, rules of thumb for crystallization, from memory); " +
+		"seed mass 1–2 % of the expected crystal mass (common practice: 0.5–5 % is typical; " +
+		"a critical seed loading near 1 % kept potash alum free of secondary nucleation, " +
+		"Doki, Kubota et al., J. Chem. Eng. Japan 1999–2002, from memory, low confidence)"
+	programmeSource = "Mullin, J. W. & Nývlt, J. (1971), Programmed cooling of batch crystallizers, " +
+		"Chem. Eng. Sci. 26:369 (cubic profile T = T0 − (T0 − Tf)(t/τ)³, from memory for the attribution)"
+	heatSource = "enthalpy of crystallization taken as −ΔsolH at infinite dilution; approximate, " +
+		"5–20 % off for concentrated solutions (Mullin, Crystallization, 4th ed., 2001, ch. 2–3, from memory)"
+	cpModelWater = "water-equivalent: mass of water × c_p of water (IAPWS-95 values, from memory); " +
+		"solute and crystals add nothing (approximation, common practice)"
+	cpModelUser   = "user value × mass of solute and water"
+	densitySource = "water density: Kell (1975), J. Chem. Eng. Data 20:97"
+	safetyNote    = "Saltcast is a planning aid, not a safety assessment: read the SDS of every chemical and " +
+		"follow your local rules and licensed practice."
+)
+
+// ErrNotFinite is returned instead of a Result holding NaN or ±Inf; it means a bug, not bad input.
+var ErrNotFinite = errors.New("balance: the plan produced a non-finite number; this is a bug, please report the recipe")
+
+// notes collects warnings, cautions and sources without repeats.
+type notes struct{ list []string }
+
+func (n *notes) add(s string) {
+	if s == "" {
+		return
+	}
+	for _, x := range n.list {
+		if x == s {
+			return
+		}
+	}
+	n.list = append(n.list, s)
+}
+
+// Plan works out the whole batch.
+func Plan(b Batch) (Result, error) {
+	c := b.Compound
+	if c == nil || len(c.Segments) == 0 {
+		return Result{}, errors.New("balance: Plan needs a compound")
+	}
+	form := b.Form
+	if form == nil {
+		form = c.Forms[0]
+	}
+	purityPct := b.PurityPct
+	if purityPct == 0 {
+		purityPct = 100
+	}
+	p := purityPct / 100
+	var warn, srcs, cautions notes
+
+	res := Result{
+		Compound: c, SoluteID: c.ID, SoluteName: c.Name, ChargedForm: form.Formula, PurityPct: purityPct,
+		WaterG: b.WaterG, DissolveTempC: b.DissolveTempC,
+	}
+	sD, segD, w, err := c.SolubilityField("dissolve_temp_C", b.DissolveTempC)
+	if err != nil {
+		return Result{}, err
+	}
+	warn.add(w)
+	srcs.add(segD.Curve.Source)
+	res.SolubilityAtStart = sD
+
+	// The charge.
+	var m float64
+	switch {
+	case b.ChargeG > 0:
+		m = b.ChargeG
+	case b.HasClearDown:
+		tc := b.ClearDownToC + b.ClearMarginK
+		if tc > b.DissolveTempC {
+			return Result{}, unit.NumberError("clear_down_to_C", b.ClearDownToC,
+				"a temperature at or below the dissolve temperature "+fmtC(b.DissolveTempC)+" less the margin of "+
+					unit.FormatNumber(b.ClearMarginK, 3)+" K")
+		}
+		_, segC, w, err := c.SolubilityField("clear_down_to_C", tc)
+		if err != nil {
+			return Result{}, err
+		}
+		warn.add(w)
+		srcs.add(segC.Curve.Source)
+		g := lowestSolubility(c, tc, b.DissolveTempC)
+		if m, err = ChargeFor(form, p, b.WaterG, g, "clear_down_to_C"); err != nil {
+			return Result{}, err
+		}
+		res.HasClearDown, res.ClearDownToC = true, b.ClearDownToC
+	default:
+		q := b.SaturationPct
+		if q == 0 {
+			q = 100
+		}
+		if m, err = ChargeFor(form, p, b.WaterG, q/100*sD, "saturation_pct"); err != nil {
+			return Result{}, err
+		}
+	}
+	S, Wt := Composition(form, p, m, b.WaterG)
+	conc := 100 * S / Wt
+	res.ChargeG, res.SoluteG, res.TotalWaterG = m, S, Wt
+	res.HydrateWaterG = Wt - b.WaterG
+	res.ImpurityG = m * (1 - p)
+	res.ConcentrationG100 = conc
+	res.SaturationPct = 100 * conc / sD
+	res.MinWaterG = MinWater(form, p, m, sD)
+	if conc > sD*(1+1e-9) {
+		most, _ := ChargeFor(form, p, b.WaterG, sD, "charge_g")
+		return Result{}, unit.NumberError("charge_g", m,
+			"at most "+unit.FormatNumber(most, 4)+" g of "+form.Formula+" dissolves in "+unit.FormatNumber(b.WaterG, 4)+
+				" g of water at "+fmtC(b.DissolveTempC)+"; this charge needs at least "+
+				unit.FormatNumber(res.MinWaterG, 4)+" g of water")
+	}
+	if res.MinWaterG == 0 {
+		warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
+	}
+	res.Path = append(res.Path, PathPoint{Label: "dissolve", TempC: b.DissolveTempC, G100: conc})
+
+	// Direction of travel and the saturation (onset) temperature.
+	minC, maxC := c.Range()
+	heating := false
+	var sT float64
+	var segT *compound.Segment
+	if b.HasTarget {
+		sT, segT, w, err = c.SolubilityField("cool_to_C", b.TargetC)
+		if err != nil {
+			return Result{}, err
+		}
+		warn.add(w)
+		srcs.add(segT.Curve.Source)
+		if b.TargetC > b.DissolveTempC {
+			if !(sT < sD) {
+				return Result{}, unit.NumberError("cool_to_C", b.TargetC,
+					"a temperature below the dissolve temperature "+fmtC(b.DissolveTempC)+
+						", or above it only where the solubility of "+c.ID+" is lower than there (retrograde)")
+			}
+			heating = true
+		}
+	}
+	if heating {
+		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, maxC)
+		if !res.HasOnset {
+			res.OnsetNote = "stays unsaturated on heating up to " + fmtC(maxC) + " (end of the data)"
+		}
+	} else {
+		lo := math.Min(minC, b.DissolveTempC)
+		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, lo)
+		if !res.HasOnset {
+			res.OnsetNote = "stays unsaturated on cooling down to " + fmtC(lo) + " (end of the data)"
+		}
+	}
+	if res.HasOnset {
+		res.Path = append(res.Path, PathPoint{Label: "onset", TempC: res.SaturationTempC, G100: conc})
+	}
+
+	// Crash-out at the target.
+	if b.HasTarget {
+		if b.EvaporatedWaterG >= Wt {
+			return Result{}, unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
+				"less than the "+unit.FormatNumber(Wt, 4)+" g of water in the batch")
+		}
+		k, ok := CrashAt(segT.Form, sT, S, Wt-b.EvaporatedWaterG, b.TargetC)
+		if !ok {
+			return Result{}, unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
+				"less evaporation: what is left cannot hold "+segT.Form.Formula+" and its liquor at "+fmtC(b.TargetC))
+		}
+		res.HasTarget = true
+		res.TargetC = b.TargetC
+		res.EvaporatedWaterG = b.EvaporatedWaterG
+		res.CrystalsG = k.CrystalsG
+		res.CrystalPhase = k.Phase.Formula
+		res.CrystalAnhydrousFrac = k.Phase.AnhydrousFraction
+		res.YieldPct = 100 * k.CrystalsG * k.Phase.AnhydrousFraction / S
+		res.LiquorSoluteG, res.LiquorWaterG = k.LiquorSoluteG, k.LiquorWaterG
+		res.LiquorG = k.LiquorG()
+		res.LiquorG100 = 100 * k.LiquorSoluteG / k.LiquorWaterG
+		res.SolubilityAtTargetG100 = sT
+		res.PhaseChanges = phaseChanges(c, b.DissolveTempC, b.TargetC)
+		for _, pc := range res.PhaseChanges {
+			warn.add("the stable solid changes from " + pc.From + " to " + pc.To + " at " + fmtC(pc.TempC) + " on the way")
+		}
+		if b.EvaporatedWaterG > 0 {
+			warn.add("the heat carried off by the evaporated water is not included in the cooling duty")
+		}
+		if k.CrystalsG == 0 {
+			if b.EvaporatedWaterG == 0 && res.HasOnset && !heating && res.SaturationTempC > b.TargetC {
+				// cannot happen for a curve that is consistent; kept as a guard
+				warn.add("no crystals at the target although the saturation temperature lies above it; check the curve")
+			}
+		}
+	}
+
+	// Seeding at seed_at_C (checked before the unseeded path uses it).
+	if b.HasSeedAt {
+		_, segS, w, err := c.SolubilityField("seed_at_C", b.SeedAtC)
+		if err != nil {
+			return Result{}, err
+		}
+		warn.add(w)
+		srcs.add(segS.Curve.Source)
+		if heating || !res.HasOnset || !(b.SeedAtC < res.SaturationTempC) {
+			allowed := "a temperature below the saturation temperature of the batch"
+			if res.HasOnset && !heating {
+				allowed += ", " + fmtC(res.SaturationTempC)
+			} else {
+				allowed += "; this batch has none on cooling"
+			}
+			return Result{}, unit.NumberError("seed_at_C", b.SeedAtC, allowed)
+		}
+	}
+
+	// The unseeded path: supersaturation from the onset to the seed point or the target.
+	endC, hasEnd := 0.0, false
+	switch {
+	case b.HasSeedAt:
+		endC, hasEnd = b.SeedAtC, true
+	case b.HasTarget && !heating:
+		endC, hasEnd = b.TargetC, true
+	}
+	if res.HasOnset && !heating && hasEnd && endC < res.SaturationTempC {
+		on := res.SaturationTempC
+		for i := 0; i <= pathPoints; i++ {
+			t := on - (on-endC)*float64(i)/pathPoints
+			s, _ := solAt(c, t)
+			res.Supersaturation = append(res.Supersaturation, SupersaturationPoint{TempC: t, Ratio: conc / s, DeltaG: conc - s})
+		}
+	}
+	if b.MetastableWidthK > 0 && res.HasOnset && !heating {
+		res.HasMetastable = true
+		res.MetastableWidthK = b.MetastableWidthK
+		res.NucleationC = res.SaturationTempC - b.MetastableWidthK
+		if hasEnd && res.NucleationC >= endC {
+			res.Path = append(res.Path, PathPoint{Label: "nucleation", TempC: res.NucleationC, G100: conc})
+		}
+		switch {
+		case b.HasSeedAt && b.SeedAtC < res.NucleationC:
+			warn.add("seed_at_C lies below the expected nucleation temperature " + fmtC(res.NucleationC) +
+				" (saturation less the metastable width): the batch may crystallize on its own before it is seeded")
+		case b.HasTarget && !b.HasSeedAt && res.CrystalsG > 0 && res.NucleationC < b.TargetC:
+			warn.add("unseeded, the batch may stay supersaturated down to " + fmtC(b.TargetC) +
+				" (the metastable zone reaches " + fmtC(res.NucleationC) + "): seed it to get the crystals")
+		}
+	}
+	if b.HasSeedAt {
+		res.Path = append(res.Path, PathPoint{Label: "seed", TempC: b.SeedAtC, G100: conc})
+	}
+
+	// Seed suggestion and cooling programme, for a cooling batch that yields crystals.
+	if b.HasTarget && !heating && res.HasOnset && res.CrystalsG > 0 {
+		drop := 1.0
+		if b.MetastableWidthK > 0 {
+			drop = math.Min(drop, b.MetastableWidthK/2)
+		}
+		res.HasSeedHint = true
+		res.SeedHintC = math.Max(res.SaturationTempC-drop, b.TargetC)
+		res.SeedPhase = c.SegmentAt(res.SeedHintC).Form.Formula
+		res.SeedLowG = 0.01 * res.CrystalsG
+		res.SeedHighG = 0.02 * res.CrystalsG
+		res.SeedRule = seedRule
+		srcs.add(seedRule)
+		if b.CoolingTimeMin > 0 && res.SeedHintC > b.TargetC {
+			res.ProgrammeFromC, res.ProgrammeToC = res.SeedHintC, b.TargetC
+			t0, tf := res.SeedHintC, b.TargetC
+			for i := 0; i <= programmeRows; i++ {
+				u := float64(i) / programmeRows
+				res.Programme = append(res.Programme, ProgrammeStep{
+					TimeMin: b.CoolingTimeMin * u,
+					LinearC: t0 - (t0-tf)*u,
+					CubicC:  t0 - (t0-tf)*u*u*u,
+				})
+			}
+			srcs.add(programmeSource)
+		}
+	}
+
+	// Heat.
+	if err := heat(&res, b, form, m, p, S, Wt, heating, &warn, &srcs); err != nil {
+		return Result{}, err
+	}
+	if res.HasAdiabatic {
+		res.Path = append(res.Path, PathPoint{Label: "adiabatic end", TempC: res.AdiabaticEndC, G100: res.AdiabaticG100})
+	}
+	if res.HasTarget {
+		res.Path = append(res.Path, PathPoint{Label: "end", TempC: res.TargetC, G100: res.LiquorG100})
+	}
+	if b.WaterG > 0 && res.MinWaterG > 0 && res.SaturationPct > 99 {
+		warn.add("the batch is saturated at the dissolve temperature: any cooling or loss of water before filtering starts crystallization")
+	}
+
+	// Cautions: the compound's note, the general ones, and the SDS last.
+	cautions.add(c.Hazard)
+	hottest := b.DissolveTempC
+	if res.HasAdiabatic {
+		hottest = math.Max(hottest, res.AdiabaticEndC)
+	}
+	if b.HasTarget {
+		hottest = math.Max(hottest, b.TargetC)
+	}
+	if hottest > hotLiquidC {
+		cautions.add("Hot liquid: the batch reaches " + fmtC(hottest) + ". A spill scalds; use heat-resistant glassware, " +
+			"eye protection and gloves, and never close a heated vessel (the " + unit.FormatNumber(hotLiquidC, 2) +
+			" °C threshold is common practice).")
+	}
+	if res.HasAdiabatic && res.AdiabaticRiseK > strongThermalK {
+		cautions.add("Strong exotherm: seeded, the insulated batch warms by " + unit.FormatNumber(res.AdiabaticRiseK, 3) +
+			" K within minutes. Seed in an open vessel with room to stir, and expect a hot solid mass.")
+	}
+	if res.HasDissolutionHeat && math.Abs(res.DissolutionTempChangeK) > strongThermalK {
+		if res.DissolutionTempChangeK < 0 {
+			cautions.add("Strong endotherm: dissolving the charge cools the batch by up to " +
+				unit.FormatNumber(-res.DissolutionTempChangeK, 3) + " K; heat it while dissolving, and do not judge the temperature by touch.")
+		} else {
+			cautions.add("Strong exotherm: dissolving the charge heats the batch by up to " +
+				unit.FormatNumber(res.DissolutionTempChangeK, 3) + " K; add the solid in portions with stirring.")
+		}
+	}
+	if c.Oxidizer {
+		cautions.add(c.ID + " is an oxidizer: keep the solid, its solutions and the crystals away from organic material " +
+			"(paper, wood, cloth, sugar, solvents); residues dried onto organics burn fiercely.")
+	}
+	cautions.add(safetyNote)
+
+	res.Cautions, res.Warnings = cautions.list, warn.list
+	for _, s := range c.Sources {
+		srcs.add(s)
+	}
+	res.Sources = srcs.list
+	if err := res.checkFinite(); err != nil {
+		return Result{}, err
+	}
+	return res, nil
+}
+
+// phaseChanges lists the boundaries between stable phases crossed from fromC to toC.
+func phaseChanges(c *compound.Compound, fromC, toC float64) []PhaseChange {
+	var out []PhaseChange
+	lo, hi := math.Min(fromC, toC), math.Max(fromC, toC)
+	for i := 1; i < len(c.Segments); i++ {
+		t := c.Segments[i].MinC
+		if t <= lo || t >= hi {
+			continue
+		}
+		cold, hot := c.Segments[i-1].Form.Formula, c.Segments[i].Form.Formula
+		if cold == hot {
+			continue
+		}
+		if toC < fromC {
+			out = append(out, PhaseChange{TempC: t, From: hot, To: cold})
+		} else {
+			out = append(out, PhaseChange{TempC: t, From: cold, To: hot})
+		}
+	}
+	if toC < fromC {
+		for i, j := 0, len(out)-1; i < j; i, j = i+1, j-1 {
+			out[i], out[j] = out[j], out[i]
+		}
+	}
+	return out
+}
+
+func fmtC(t float64) string { return unit.FormatNumber(t, 4) + " °C" }
+
+// checkFinite is the last guard: no NaN or ±Inf leaves the planner.
+func (r *Result) checkFinite() error {
+	ok := true
+	chk := func(v float64) {
+		if math.IsNaN(v) || math.IsInf(v, 0) {
+			ok = false
+		}
+	}
+	for _, v := range [...]float64{r.PurityPct, r.ChargeG, r.WaterG, r.HydrateWaterG, r.TotalWaterG, r.SoluteG, r.ImpurityG,
+		r.DissolveTempC, r.SolubilityAtStart, r.ConcentrationG100, r.SaturationPct, r.MinWaterG, r.ClearDownToC,
+		r.SaturationTempC, r.TargetC, r.EvaporatedWaterG, r.CrystalsG, r.CrystalAnhydrousFrac, r.YieldPct,
+		r.LiquorG, r.LiquorSoluteG, r.LiquorWaterG, r.LiquorG100, r.SolubilityAtTargetG100,
+		r.MetastableWidthK, r.NucleationC, r.SeedHintC, r.SeedLowG, r.SeedHighG, r.ProgrammeFromC, r.ProgrammeToC,
+		r.HeatCapacityKJPerK, r.DissolutionHeatKJ, r.DissolutionTempChangeK, r.DissolutionEnthalpyKJPerMol,
+		r.CrystallizationHeatKJ, r.CrystalEnthalpyKJPerMol, r.ApparentEnthalpyKJPerMol, r.SensibleHeatKJ,
+		r.CoolingDutyKJ, r.CoolingPowerW, r.CoolingTimeMin, r.SeedAtC, r.AdiabaticEndC, r.AdiabaticCrystalsG,
+		r.AdiabaticRiseK, r.AdiabaticG100} {
+		chk(v)
+	}
+	for _, p := range r.PhaseChanges {
+		chk(p.TempC)
+	}
+	for _, p := range r.Supersaturation {
+		chk(p.TempC)
+		chk(p.Ratio)
+		chk(p.DeltaG)
+	}
+	for _, p := range r.Programme {
+		chk(p.TimeMin)
+		chk(p.LinearC)
+		chk(p.CubicC)
+	}
+	for _, p := range r.Path {
+		chk(p.TempC)
+		chk(p.G100)
+	}
+	if !ok {
+		return ErrNotFinite
+	}
+	return nil
+}
+
+// waterHeatCapacity is c_p of water in kJ/(kg·K) at t, kept inside the 0–100 °C table.
+func waterHeatCapacity(t float64) float64 {
+	return water.HeatCapacityKJPerKgK(math.Max(0, math.Min(100, t)))
+}
