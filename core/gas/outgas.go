@@ -147,7 +147,7 @@ const HotWaterCaution = "Hot water scalds and released gas and steam raise the p
 	"dissolved, your local rules and licensed practice. Saltcast is a planning aid, not a safety assessment."
 
 // bubbleTemp finds the lowest temperature in [fromC, 100] at which Σ nᵢ·kHᵢ(T)·M_w + p_w(T) ≥ p
-// for the gas amounts n (mol/kg). It scans in 0.5 K steps and bisects the first crossing.
+// for the gas amounts n (mol/kg). It scans in 2.5 K steps and bisects the first crossing (to well below 1e-9 K).
 func bubbleTemp(gases []*Gas, n []float64, fromC, p float64) (float64, bool) {
 	excess := func(tc float64) float64 {
 		sum := water.VaporPressurePa(tc)
@@ -159,12 +159,12 @@ func bubbleTemp(gases []*Gas, n []float64, fromC, p float64) (float64, bool) {
 	if excess(fromC) >= 0 {
 		return fromC, true
 	}
-	const step = 0.5
+	const step = 2.5
 	lo := fromC
 	for lo < HenryMaxC {
 		hi := math.Min(lo+step, HenryMaxC)
 		if excess(hi) >= 0 {
-			for range 60 {
+			for range 48 {
 				mid := (lo + hi) / 2
 				if excess(mid) >= 0 {
 					hi = mid

@@ -144,6 +144,12 @@ func Gas(p Params) ([]byte, error) {
 // default the same) and co2_ppm (default 420). Volumes are mL of dry gas per litre of water
 // measured at from_C, at to_C and heat_pressure_kPa and at STP.
 func Outgas(p Params) ([]byte, error) {
+	for _, k := range []string{"salinity", "salt"} {
+		if v, ok := p[k]; ok {
+			return nil, &unit.FieldError{Field: k, Value: v, Allowed: "nothing: outgassing is computed for fresh water only " +
+				"(no sourced salting-out coefficients here); for a salt solution the fresh-water result is an upper estimate"}
+		}
+	}
 	if err := gasKnownKeys(p, "from_C", "to_C", "pressure_kPa", "pressure", "pressure_unit", "altitude_m",
 		"heat_pressure_kPa", "co2_ppm"); err != nil {
 		return nil, err
