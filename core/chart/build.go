@@ -185,7 +185,14 @@ func Solubility(v SolubilityView) (Chart, error) {
 		route := []Point{b.Dissolve}
 		if b.Onset != nil {
 			route = append(route, *b.Onset)
-			route = append(route, alongCurve(curve, b.Onset.X, b.End.X)...)
+			from := b.Onset.X
+			if b.Saturation != nil && b.Saturation.X < from {
+				// Seeded above saturation: the liquor stays clear until
+				// it reaches the curve.
+				route = append(route, *b.Saturation)
+				from = b.Saturation.X
+			}
+			route = append(route, alongCurve(curve, from, b.End.X)...)
 		}
 		route = append(route, b.End)
 		pts, err := convAll("batch path", dedupe(route), 0)

@@ -194,7 +194,7 @@ func (l *layout) draw(w *svgWriter) {
 	w.text(c.Title)
 	w.s(`" font-family="`)
 	w.s(fontFamily)
-	w.s(`" style="max-width:100%;height:auto;background:#fff">`)
+	w.s(`">`)
 	w.s("\n<title>")
 	w.text(c.Title)
 	w.s("</title>\n<desc>")
@@ -393,9 +393,9 @@ func (l *layout) drawSeries(w *svgWriter, i int) {
 	}
 }
 
-// midArrow draws an arrowhead half way along the polyline (measured on the
-// page), pointing the way the points run; it sits in the middle rather than
-// at the end so that markers at the ends do not hide it.
+// midArrow draws an arrowhead along the polyline (measured on the page),
+// pointing the way the points run. It goes half way along, or the nearest
+// place to that clear of the chart's markers, so that no marker hides it.
 func (l *layout) midArrow(w *svgWriter, pts []Point, colour string) {
 	total := 0.0
 	for i := 1; i < len(pts); i++ {
@@ -404,35 +404,58 @@ func (l *layout) midArrow(w *svgWriter, pts []Point, colour string) {
 	if total < 30 {
 		return
 	}
-	half, run := total/2, 0.0
+	const clear = 2.5 * markerSize // distance from a marker's centre
+	var tipX, tipY, ux, uy float64
+	for _, f := range [...]float64{0.5, 0.4, 0.6, 0.3, 0.7, 0.2, 0.8, 0.5} {
+		tipX, tipY, ux, uy = l.along(pts, f*total)
+		free := true
+		for _, m := range l.c.Markers {
+			if math.Hypot(l.px(m.X)-tipX, l.py(m.Y)-tipY) < clear {
+				free = false
+				break
+			}
+		}
+		if free {
+			break
+		}
+	}
+	const length, halfW = 16.0, 7.5
+	tipX, tipY = tipX+ux*length/2, tipY+uy*length/2
+	bx, by := tipX-ux*length, tipY-uy*length
+	w.s(`<polygon fill="` + colour + `" points="`)
+	w.num(tipX)
+	w.s(",")
+	w.num(tipY)
+	w.s(" ")
+	w.num(bx - uy*halfW)
+	w.s(",")
+	w.num(by + ux*halfW)
+	w.s(" ")
+	w.num(bx + uy*halfW)
+	w.s(",")
+	w.num(by - ux*halfW)
+	w.s("\"/>\n")
+}
+
+// along returns the page position at distance d along the polyline and the
+// unit direction of the segment there.
+func (l *layout) along(pts []Point, d float64) (x, y, ux, uy float64) {
+	run := 0.0
 	for i := 1; i < len(pts); i++ {
 		x0, y0 := l.px(pts[i-1].X), l.py(pts[i-1].Y)
 		dx, dy := l.px(pts[i].X)-x0, l.py(pts[i].Y)-y0
-		d := math.Hypot(dx, dy)
-		if d == 0 || run+d < half {
-			run += d
+		n := math.Hypot(dx, dy)
+		if n == 0 {
 			continue
 		}
-		t := (half - run) / d
-		ux, uy := dx/d, dy/d
-		tipX, tipY := x0+dx*t+ux*7, y0+dy*t+uy*7
-		const length, halfW = 16.0, 7.5
-		bx, by := tipX-ux*length, tipY-uy*length
-		w.s(`<polygon fill="` + colour + `" points="`)
-		w.num(tipX)
-		w.s(",")
-		w.num(tipY)
-		w.s(" ")
-		w.num(bx - uy*halfW)
-		w.s(",")
-		w.num(by + ux*halfW)
-		w.s(" ")
-		w.num(bx + uy*halfW)
-		w.s(",")
-		w.num(by - ux*halfW)
-		w.s("\"/>\n")
-		return
+		ux, uy = dx/n, dy/n
+		if run+n >= d || i == len(pts)-1 {
+			t := math.Min(1, (d-run)/n)
+			return x0 + dx*t, y0 + dy*t, ux, uy
+		}
+		run += n
 	}
+	return l.px(pts[0].X), l.py(pts[0].Y), 1, 0
 }
 
 // drawMarker draws the symbol of marker number ord at (x, y) in SVG units.
@@ -678,7 +701,7 @@ func Placeholder(title, message string) string {
 	w.num(math.Ceil(h))
 	w.s(`" width="100%" role="img" aria-label="`)
 	w.text(title)
-	w.s(`" font-family="` + fontFamily + `" style="max-width:100%;height:auto;background:#fff">` + "\n<title>")
+	w.s(`" font-family="` + fontFamily + `">` + "\n<title>")
 	w.text(title)
 	w.s("</title>\n<desc>")
 	w.text(message)
