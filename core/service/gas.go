@@ -1,6 +1,7 @@
 package service
 
 import (
+	"errors"
 	"math"
 	"strings"
 
@@ -22,6 +23,11 @@ import (
 // saturation_umol_per_kg, method, source and warnings; for O2 it adds the other method's value
 // and the difference.
 func Gas(p Params) ([]byte, error) {
+	b, err := gasQuery(p)
+	return b, gasRawValue(err, p)
+}
+
+func gasQuery(p Params) ([]byte, error) {
 	if err := gasKnownKeys(p, "gas", "temp_C", "salinity", "pressure_kPa", "pressure", "pressure_unit",
 		"altitude_m", "method", "co2_ppm", "measured_mg_per_L"); err != nil {
 		return nil, err
@@ -144,6 +150,11 @@ func Gas(p Params) ([]byte, error) {
 // default the same) and co2_ppm (default 420). Volumes are mL of dry gas per litre of water
 // measured at from_C, at to_C and heat_pressure_kPa and at STP.
 func Outgas(p Params) ([]byte, error) {
+	b, err := gasOutgasQuery(p)
+	return b, gasRawValue(err, p)
+}
+
+func gasOutgasQuery(p Params) ([]byte, error) {
 	for _, k := range []string{"salinity", "salt"} {
 		if v, ok := p[k]; ok {
 			return nil, &unit.FieldError{Field: k, Value: v, Allowed: "nothing: outgassing is computed for fresh water only " +
@@ -229,6 +240,11 @@ func Outgas(p Params) ([]byte, error) {
 // 0;10;20;30;35;40), salinity (fixed, for pressure columns, default 0), pressure_kPa (fixed,
 // for salinity columns, default 101.325) and method.
 func GasTable(p Params) ([]byte, error) {
+	b, err := gasTableQuery(p)
+	return b, gasRawValue(err, p)
+}
+
+func gasTableQuery(p Params) ([]byte, error) {
 	if err := gasKnownKeys(p, "temp_from_C", "temp_to_C", "temp_step_C", "columns", "values",
 		"salinity", "pressure_kPa", "method"); err != nil {
 		return nil, err
@@ -244,6 +260,9 @@ func GasTable(p Params) ([]byte, error) {
 	step, err := gasOptional(p, "temp_step_C", 1)
 	if err != nil {
 		return nil, err
+	}
+	if to < from {
+		return nil, unit.NumberError("temp_to_C", to, "a temperature not below temp_from_C")
 	}
 	temps, err := gas.Steps("temp_step_C", from, to, step)
 	if err != nil {
@@ -462,4 +481,16 @@ func gasStrings(e *wire.Encoder, key string, list []string) {
 		e.String(s)
 	}
 	e.EndArray()
+}
+
+// gasRawValue puts the text the user typed back into a *unit.FieldError raised deeper down
+// (where the value was already a float64), so the message quotes "45", not "45.0000".
+func gasRawValue(err error, p Params) error {
+	var fe *unit.FieldError
+	if errors.As(err, &fe) {
+		if raw, ok := p[fe.Field]; ok {
+			fe.Value = raw
+		}
+	}
+	return err
 }

@@ -119,6 +119,7 @@ func TestGasErrorsNameTheField(t *testing.T) {
 		{Params{"temp_C": "1.234,5"}, "temp_C"},
 		{Params{"temp_C": "70"}, "temp_C"},
 		{Params{"temp_C": "20", "salinity": "50"}, "salinity"},
+		{Params{"temp_C": "20", "salinity": "4,5e1"}, "salinity"},
 		{Params{"temp_C": "20", "pressure_kPa": "-3"}, "pressure_kPa"},
 		{Params{"temp_C": "20", "pressure": "30", "pressure_unit": "psi"}, "pressure_unit"},
 		{Params{"temp_C": "20", "pressure_unit": "hPa"}, "pressure_unit"},
@@ -137,6 +138,8 @@ func TestGasErrorsNameTheField(t *testing.T) {
 		var fe *unit.FieldError
 		if !errors.As(err, &fe) || fe.Field != tt.field {
 			t.Errorf("Gas(%v) error = %v, want a FieldError for %q", tt.p, err, tt.field)
+		} else if raw, ok := tt.p[tt.field]; ok && fe.Value != raw {
+			t.Errorf("Gas(%v) error quotes %q, want the typed %q", tt.p, fe.Value, raw)
 		}
 		if !IsInputError(err) {
 			t.Errorf("Gas(%v): IsInputError = false", tt.p)
@@ -223,6 +226,7 @@ func TestGasTableService(t *testing.T) {
 		{Params{"columns": "altitude"}, "columns"},
 		{Params{"values": "90,5;80,5;x"}, "values"},
 		{Params{"temp_step_C": "0"}, "temp_step_C"},
+		{Params{"temp_from_C": "30", "temp_to_C": "10"}, "temp_to_C"},
 		{Params{"temp_to_C": "60"}, "temp_C"},
 		{Params{"pressure_kPa": "90"}, "pressure_kPa"},
 	} {
