@@ -3,6 +3,7 @@ package service
 import (
 	"errors"
 	"math"
+	"strconv"
 	"strings"
 
 	"saltcast/core/gas"
@@ -92,6 +93,9 @@ func gasQuery(p Params) ([]byte, error) {
 			return nil, err
 		}
 		mgPerL, umolPerKg, method, source, warnings = d.MgPerL, d.UmolPerKg, d.Method, d.Source, d.Warnings
+		if _, ok := p["co2_ppm"]; !ok {
+			warnings = append(warnings, gasCO2Default)
+		}
 	default:
 		if salinity != 0 {
 			return nil, &unit.FieldError{Field: "salinity", Value: p["salinity"],
@@ -191,6 +195,9 @@ func gasOutgasQuery(p Params) ([]byte, error) {
 	o, err := gas.Outgas(gas.OutgasInput{FromC: fromC, ToC: toC, PressureKPa: kPa, HeatPressureKPa: heatKPa, CO2PPM: co2PPM})
 	if err != nil {
 		return nil, err
+	}
+	if _, ok := p["co2_ppm"]; !ok {
+		o.Notes = append(o.Notes, gasCO2Default)
 	}
 
 	var e wire.Encoder
@@ -494,3 +501,8 @@ func gasRawValue(err error, p Params) error {
 	}
 	return err
 }
+
+// gasCO2Default is said whenever the CO2 content of the air was not given.
+var gasCO2Default = "CO2 in air taken as " + strconv.FormatFloat(gas.DefaultCO2PPM, 'f', -1, 64) +
+	" ppm, about the global mean of " + strconv.Itoa(gas.DefaultCO2Year) +
+	" (NOAA; from memory); it rises about 2.5 ppm a year and is higher indoors: set co2_ppm for your site"
