@@ -1,7 +1,10 @@
 package chart
 
 import (
+	"flag"
 	"math"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -192,3 +195,75 @@ func TestOxygenView(t *testing.T) {
 		t.Errorf("OxygenSVG at 80 °C = %q, want a placeholder naming temp_C", svg)
 	}
 }
+
+// Every library compound, planned by the real planner at invented batches
+// (95 % saturated at 80 % of its range, cooled to 20 % of it; then seeded
+// 1 K below the saturation temperature), draws a well-formed chart whose
+// path never warms on the way down; only the jump may. Batches the planner
+// refuses are skipped.
+func TestLibraryPlansDraw(t *testing.T) {
+	drawn := 0
+	for _, c := range compound.All() {
+		lo, hi := c.Range()
+		b := balance.Batch{
+			Compound: c, WaterG: 100,
+			DissolveTempC: lo + 0.8*(hi-lo), SaturationPct: 95,
+			HasTarget: true, TargetC: lo + 0.2*(hi-lo),
+			MetastableWidthK: 4,
+		}
+		for _, seeded := range []bool{false, true} {
+			r, err := balance.Plan(b)
+			if err != nil {
+				t.Logf("%s (seeded %v): planner refused: %v", c.ID, seeded, err)
+				break
+			}
+			if !seeded && r.HasOnset {
+				b.HasSeedAt, b.SeedAtC = true, r.SaturationTempC-1
+			}
+			v, err := PlanView(&r, Options{Zoom: seeded})
+			if err != nil {
+				t.Errorf("%s: PlanView: %v", c.ID, err)
+				continue
+			}
+			ch, err := Solubility(v)
+			if err != nil {
+				t.Errorf("%s: Solubility: %v", c.ID, err)
+				continue
+			}
+			svg, err := Render(ch)
+			if err != nil {
+				t.Errorf("%s: Render: %v", c.ID, err)
+				continue
+			}
+			if err := wellFormed(svg); err != nil {
+				t.Errorf("%s: %v", c.ID, err)
+			}
+			if *dump != "" {
+				name := c.ID
+				if seeded {
+					name += "-seeded"
+				}
+				os.WriteFile(filepath.Join(*dump, strings.NewReplacer("(", "", ")", "").Replace(name)+".svg"), []byte(svg), 0o644)
+			}
+			for _, s := range ch.Series {
+				if s.Kind != Path {
+					continue
+				}
+				for i := 1; i < len(s.Points); i++ {
+					if s.Points[i].X > s.Points[i-1].X+1e-9 {
+						t.Errorf("%s (seeded %v): path warms from %v to %v", c.ID, seeded, s.Points[i-1], s.Points[i])
+					}
+				}
+			}
+			drawn++
+			if !b.HasSeedAt {
+				break
+			}
+		}
+	}
+	if drawn == 0 {
+		t.Fatal("no library batch was drawn")
+	}
+}
+
+var dump = flag.String("dump", "", "write the library charts of TestLibraryPlansDraw into this directory, to look at")

@@ -201,11 +201,11 @@ func Solubility(v SolubilityView) (Chart, error) {
 		}
 		c.Series = append(c.Series, Series{Label: "Batch path", Points: pts, Kind: Path})
 		if b.Onset != nil && b.Settled != nil {
-			j, err := convAll("no-cooling jump", []Point{*b.Onset, *b.Settled}, 0)
+			j, err := convAll("insulated jump", []Point{*b.Onset, *b.Settled}, 0)
 			if err != nil {
 				return Chart{}, err
 			}
-			c.Series = append(c.Series, Series{Label: "Jump if not cooled", Points: j, Kind: Jump})
+			c.Series = append(c.Series, Series{Label: "If insulated: warms as crystals form", Points: j, Kind: Jump})
 		}
 		mark := func(label string, p *Point, s Shape) error {
 			if p == nil {
@@ -234,7 +234,7 @@ func Solubility(v SolubilityView) (Chart, error) {
 			{"Saturated at", b.Saturation, Circle},
 			{"Seeded at", b.Seed, TriangleDown},
 			{"Crystals from", onsetMark, TriangleUp},
-			{"Settles at", b.Settled, Cross},
+			{"Insulated, ends at", b.Settled, Cross},
 			{"Ends at", &b.End, Square},
 		} {
 			if err := mark(m.label, m.p, m.s); err != nil {
