@@ -25,7 +25,7 @@ func ChargeFor(form *compound.Form, purity, waterG, g100 float64, field string) 
 	den := purity * (f - k*(1-f))
 	if !(den > 0) {
 		return 0, &unit.FieldError{Field: field, Value: form.Formula,
-			Allowed: "a target below " + unit.FormatNumber(100*f/(1-f), 4) + " g per 100 g water, the composition of " +
+			Allowed: "a target below " + unit.FormatCompact(100*f/(1-f), 4) + " g per 100 g water, the composition of " +
 				form.Formula + " itself (it dissolves in its own water of crystallization); charge the anhydrous form instead"}
 	}
 	return k * waterG / den, nil

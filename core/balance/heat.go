@@ -27,11 +27,11 @@ func chooseEnthalpy(c *compound.Compound, phase *compound.Form, t1, t2 float64) 
 	case phase.HasEnthalpy:
 		e.kJPerMol, e.ok = phase.SolutionEnthalpyKJPerMol, true
 		e.basis = "ΔsolH of " + phase.Formula + " at infinite dilution, 25 °C, from the library (" +
-			unit.FormatNumber(phase.SolutionEnthalpyKJPerMol, 4) + " kJ/mol; " + phase.EnthalpySource + ")"
+			unit.FormatCompact(phase.SolutionEnthalpyKJPerMol, 4) + " kJ/mol; " + phase.EnthalpySource + ")"
 	case e.hasApp:
 		e.kJPerMol, e.ok = e.apparent, true
 		e.basis = "apparent ΔsolH of " + phase.Formula + " from the slope of the solubility curve (ideal van 't Hoff, " +
-			unit.FormatNumber(e.apparent, 4) + " kJ/mol), because the library has no measured value"
+			unit.FormatCompact(e.apparent, 4) + " kJ/mol), because the library has no measured value"
 	}
 	return e
 }
@@ -54,9 +54,11 @@ func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heatin
 	res.HeatCapacityModel = cpModelWater
 	if b.LiquorCpKJPerKgK > 0 {
 		res.HeatCapacityModel = cpModelUser
+	} else {
+		srcs.add(cpWaterSource)
 	}
 	if b.VesselJPerK > 0 {
-		res.HeatCapacityModel += "; plus the vessel, " + unit.FormatNumber(b.VesselJPerK, 4) + " J/K"
+		res.HeatCapacityModel += "; plus the vessel, " + unit.FormatCompact(b.VesselJPerK, 4) + " J/K"
 	}
 
 	// Dissolving the charge.
@@ -88,9 +90,9 @@ func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heatin
 			}
 			srcs.add(heatSource)
 			if phase.HasEnthalpy && e.hasApp && differ(e.kJPerMol, e.apparent) {
-				warn.add("the library ΔsolH of " + phase.Formula + " (" + unit.FormatNumber(e.kJPerMol, 3) +
-					" kJ/mol) and the apparent value from the curve slope (" + unit.FormatNumber(e.apparent, 3) +
-					" kJ/mol) differ by more than " + unit.FormatNumber(enthalpyDiffPct, 2) +
+				warn.add("the library ΔsolH of " + phase.Formula + " (" + unit.FormatCompact(e.kJPerMol, 3) +
+					" kJ/mol) and the apparent value from the curve slope (" + unit.FormatCompact(e.apparent, 3) +
+					" kJ/mol) differ by more than " + unit.FormatCompact(enthalpyDiffPct, 2) +
 					" %; the library value is used, so treat the crystallization heat as a rough figure")
 			}
 		} else if res.CrystalsG > 0 {

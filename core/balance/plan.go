@@ -19,8 +19,8 @@ type Batch struct {
 
 	DissolveTempC float64
 
-	// The charge: ChargeG if > 0; else the most that stays clear down to
-	// ClearDownToC + ClearMarginK if HasClearDown; else SaturationPct % of saturation at the
+	// The charge: ChargeG if > 0; else, if HasClearDown, the most that stays clear down to
+	// ClearDownToC with its saturation temperature ClearMarginK below that; else SaturationPct % of saturation at the
 	// dissolve temperature (0 means 100).
 	ChargeG       float64
 	HasClearDown  bool
@@ -62,10 +62,13 @@ const (
 		"Chem. Eng. Sci. 26:369 (cubic profile T = T0 − (T0 − Tf)(t/τ)³, from memory for the attribution)"
 	heatSource = "enthalpy of crystallization taken as −ΔsolH at infinite dilution; approximate, " +
 		"5–20 % off for concentrated solutions (Mullin, Crystallization, 4th ed., 2001, ch. 2–3, from memory)"
-	cpModelWater = "water-equivalent: mass of water × c_p of water (IAPWS-95 values, from memory); " +
+	cpModelWater = "water-equivalent: mass of water × c_p of water; " +
 		"solute and crystals add nothing (approximation, common practice)"
-	cpModelUser   = "user value × mass of solute and water"
-	densitySource = "water density: Kell (1975), J. Chem. Eng. Data 20:97"
+	cpWaterSource = "c_p of water: IAPWS-95 (Wagner & Pruss, 2002, J. Phys. Chem. Ref. Data 31:387), " +
+		"values tabulated every 10 K (from memory)"
+	cpModelUser = "user value × mass of solute and water"
+	// DensitySource is cited when water is given by volume.
+	DensitySource = "density of water: Kell (1975), J. Chem. Eng. Data 20:97"
 	safetyNote    = "Saltcast is a planning aid, not a safety assessment: read the SDS of every chemical and " +
 		"follow your local rules and licensed practice."
 )
@@ -123,14 +126,19 @@ func Plan(b Batch) (Result, error) {
 	case b.ChargeG > 0:
 		m = b.ChargeG
 	case b.HasClearDown:
-		tc := b.ClearDownToC + b.ClearMarginK
+		// The saturation temperature is put ClearMarginK below the storage temperature.
+		tc := b.ClearDownToC - b.ClearMarginK
 		if tc > b.DissolveTempC {
 			return Result{}, unit.NumberError("clear_down_to_C", b.ClearDownToC,
-				"a temperature at or below the dissolve temperature "+fmtC(b.DissolveTempC)+" less the margin of "+
-					unit.FormatNumber(b.ClearMarginK, 3)+" K")
+				"a temperature at or below the dissolve temperature "+fmtC(b.DissolveTempC)+" plus the margin of "+
+					unit.FormatCompact(b.ClearMarginK, 3)+" K")
 		}
 		_, segC, w, err := c.SolubilityField("clear_down_to_C", tc)
 		if err != nil {
+			var fe *unit.FieldError
+			if errors.As(err, &fe) && b.ClearMarginK > 0 {
+				fe.Allowed += " once the margin of " + unit.FormatCompact(b.ClearMarginK, 3) + " K is taken off"
+			}
 			return Result{}, err
 		}
 		warn.add(w)
@@ -160,9 +168,9 @@ func Plan(b Batch) (Result, error) {
 	if conc > sD*(1+1e-9) {
 		most, _ := ChargeFor(form, p, b.WaterG, sD, "charge_g")
 		return Result{}, unit.NumberError("charge_g", m,
-			"at most "+unit.FormatNumber(most, 4)+" g of "+form.Formula+" dissolves in "+unit.FormatNumber(b.WaterG, 4)+
+			"at most "+unit.FormatCompact(most, 4)+" g of "+form.Formula+" dissolves in "+unit.FormatCompact(b.WaterG, 4)+
 				" g of water at "+fmtC(b.DissolveTempC)+"; this charge needs at least "+
-				unit.FormatNumber(res.MinWaterG, 4)+" g of water")
+				unit.FormatCompact(res.MinWaterG, 4)+" g of water")
 	}
 	if res.MinWaterG == 0 {
 		warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
@@ -210,7 +218,7 @@ func Plan(b Batch) (Result, error) {
 	if b.HasTarget {
 		if b.EvaporatedWaterG >= Wt {
 			return Result{}, unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
-				"less than the "+unit.FormatNumber(Wt, 4)+" g of water in the batch")
+				"less than the "+unit.FormatCompact(Wt, 4)+" g of water in the batch")
 		}
 		k, ok := CrashAt(segT.Form, sT, S, Wt-b.EvaporatedWaterG, b.TargetC)
 		if !ok {
@@ -272,7 +280,8 @@ func Plan(b Batch) (Result, error) {
 	}
 	if res.HasOnset && !heating && hasEnd && endC < res.SaturationTempC {
 		on := res.SaturationTempC
-		for i := 0; i <= pathPoints; i++ {
+		res.Supersaturation = append(res.Supersaturation, SupersaturationPoint{TempC: on, Ratio: 1, DeltaG: 0})
+		for i := 1; i <= pathPoints; i++ {
 			t := on - (on-endC)*float64(i)/pathPoints
 			s, _ := solAt(c, t)
 			res.Supersaturation = append(res.Supersaturation, SupersaturationPoint{TempC: t, Ratio: conc / s, DeltaG: conc - s})
@@ -351,20 +360,20 @@ func Plan(b Batch) (Result, error) {
 	}
 	if hottest > hotLiquidC {
 		cautions.add("Hot liquid: the batch reaches " + fmtC(hottest) + ". A spill scalds; use heat-resistant glassware, " +
-			"eye protection and gloves, and never close a heated vessel (the " + unit.FormatNumber(hotLiquidC, 2) +
+			"eye protection and gloves, and never close a heated vessel (the " + unit.FormatCompact(hotLiquidC, 2) +
 			" °C threshold is common practice).")
 	}
 	if res.HasAdiabatic && res.AdiabaticRiseK > strongThermalK {
-		cautions.add("Strong exotherm: seeded, the insulated batch warms by " + unit.FormatNumber(res.AdiabaticRiseK, 3) +
+		cautions.add("Strong exotherm: seeded, the insulated batch warms by " + unit.FormatCompact(res.AdiabaticRiseK, 3) +
 			" K within minutes. Seed in an open vessel with room to stir, and expect a hot solid mass.")
 	}
 	if res.HasDissolutionHeat && math.Abs(res.DissolutionTempChangeK) > strongThermalK {
 		if res.DissolutionTempChangeK < 0 {
 			cautions.add("Strong endotherm: dissolving the charge cools the batch by up to " +
-				unit.FormatNumber(-res.DissolutionTempChangeK, 3) + " K; heat it while dissolving, and do not judge the temperature by touch.")
+				unit.FormatCompact(-res.DissolutionTempChangeK, 3) + " K; heat it while dissolving, and do not judge the temperature by touch.")
 		} else {
 			cautions.add("Strong exotherm: dissolving the charge heats the batch by up to " +
-				unit.FormatNumber(res.DissolutionTempChangeK, 3) + " K; add the solid in portions with stirring.")
+				unit.FormatCompact(res.DissolutionTempChangeK, 3) + " K; add the solid in portions with stirring.")
 		}
 	}
 	if c.Oxidizer {
@@ -374,9 +383,6 @@ func Plan(b Batch) (Result, error) {
 	cautions.add(safetyNote)
 
 	res.Cautions, res.Warnings = cautions.list, warn.list
-	for _, s := range c.Sources {
-		srcs.add(s)
-	}
 	res.Sources = srcs.list
 	if err := res.checkFinite(); err != nil {
 		return Result{}, err
@@ -411,7 +417,7 @@ func phaseChanges(c *compound.Compound, fromC, toC float64) []PhaseChange {
 	return out
 }
 
-func fmtC(t float64) string { return unit.FormatNumber(t, 4) + " °C" }
+func fmtC(t float64) string { return unit.FormatCompact(t, 4) + " °C" }
 
 // checkFinite is the last guard: no NaN or ±Inf leaves the planner.
 func (r *Result) checkFinite() error {

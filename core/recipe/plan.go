@@ -71,8 +71,8 @@ func Plan(r Recipe) (Result, error) {
 	if r.WaterML.Set {
 		t := r.WaterTempC.Or(DefaultWaterTempC)
 		b.WaterG = r.WaterML.Value * water.DensityKgPerM3(t) / 1000
-		volumeNote = unit.FormatNumber(r.WaterML.Value, 6) + " mL of water at " + unit.FormatNumber(t, 4) +
-			" °C weighs " + unit.FormatNumber(b.WaterG, 6) + " g (density of pure water, Kell 1975, J. Chem. Eng. Data 20:97)"
+		volumeNote = unit.FormatCompact(r.WaterML.Value, 6) + " mL of water at " + unit.FormatCompact(t, 4) +
+			" °C weighs " + unit.FormatCompact(b.WaterG, 6) + " g (density of pure water, Kell 1975, J. Chem. Eng. Data 20:97)"
 	}
 	if r.EvaporatedWaterG.Set && !r.CoolToC.Set {
 		return res, unit.NumberError("evaporated_water_g", r.EvaporatedWaterG.Value, "evaporated_water_g only together with cool_to_C")
@@ -84,10 +84,11 @@ func Plan(r Recipe) (Result, error) {
 	res.Result = br
 	if volumeNote != "" {
 		res.Warnings = append([]string{volumeNote}, res.Warnings...)
+		res.Sources = append(res.Sources, balance.DensitySource)
 	}
 	if r.ClearDownToC.Set && !r.ClearMarginK.Set {
-		res.Warnings = append(res.Warnings, "clear_margin_K not given: the charge keeps a "+
-			unit.FormatNumber(DefaultClearMarginK, 2)+" K margin above clear_down_to_C (Saltcast's default)")
+		res.Warnings = append(res.Warnings, "clear_margin_K not given: the saturation temperature is put "+
+			unit.FormatCompact(DefaultClearMarginK, 2)+" K below clear_down_to_C (Saltcast's default margin)")
 	}
 	return res, nil
 }

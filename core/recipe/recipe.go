@@ -53,7 +53,7 @@ type Recipe struct {
 	SaturationPct Opt // "saturation_pct": 0 < q ≤ 100, % of saturation at the dissolve temperature
 	ChargeG       Opt // "charge_g": grams of the charged form
 	ClearDownToC  Opt // "clear_down_to_C": the most that stays clear down to this temperature
-	ClearMarginK  Opt // "clear_margin_K": safety margin for ClearDownToC, default 2 K
+	ClearMarginK  Opt // "clear_margin_K": the saturation temperature lies this far below ClearDownToC, default 2 K
 
 	CoolToC          Opt // "cool_to_C": filtration or storage temperature
 	EvaporatedWaterG Opt // "evaporated_water_g": water lost before filtration
