@@ -21,7 +21,9 @@
 //   - Barometric pressure from altitude: the U.S. Standard Atmosphere, 1976 (= ICAO) troposphere.
 //   - Outgassing on heating: Henry's law for each gas at the start and end temperatures; the
 //     bubble temperature is where the dissolved gases' pressures plus the water vapour
-//     pressure reach the pressure during heating.
+//     pressure reach the pressure during heating. Fresh water only: salting-out by dissolved
+//     salts (Sechenov coefficients) is not modelled, for want of a checked source here, so
+//     for a salt solution the released volumes are upper estimates; results say so.
 //
 // Every function that takes user values validates them and returns a *unit.FieldError that
 // names the field and what is allowed; none returns NaN or Inf for accepted input. Functions

@@ -69,8 +69,8 @@ func Outgas(in OutgasInput) (Outgassing, error) {
 		return Outgassing{}, unit.NumberError("to_C", in.ToC,
 			"a temperature above from_C ("+unit.FormatCompact(in.FromC, 6)+" °C) and at most 100 °C")
 	}
-	if math.IsNaN(in.HeatPressureKPa) || in.HeatPressureKPa <= 0 || in.HeatPressureKPa > 1000 {
-		return Outgassing{}, unit.NumberError("heat_pressure_kPa", in.HeatPressureKPa, "a pressure above 0 and at most 1000 kPa")
+	if math.IsNaN(in.HeatPressureKPa) || in.HeatPressureKPa < 1 || in.HeatPressureKPa > 1000 {
+		return Outgassing{}, unit.NumberError("heat_pressure_kPa", in.HeatPressureKPa, "a pressure from 1 to 1000 kPa")
 	}
 	if err := CheckCO2PPM(in.CO2PPM); err != nil {
 		return Outgassing{}, err

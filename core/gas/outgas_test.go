@@ -150,6 +150,7 @@ func TestOutgasRefuses(t *testing.T) {
 		{OutgasInput{FromC: 20, ToC: math.Inf(1), PressureKPa: StdKPa}, "to_C"},
 		{OutgasInput{FromC: 20, ToC: 80, PressureKPa: -5}, "pressure_kPa"},
 		{OutgasInput{FromC: 20, ToC: 80, PressureKPa: StdKPa, HeatPressureKPa: -5}, "heat_pressure_kPa"},
+		{OutgasInput{FromC: 20, ToC: 80, PressureKPa: StdKPa, HeatPressureKPa: 1e-300}, "heat_pressure_kPa"},
 		{OutgasInput{FromC: 20, ToC: 80, PressureKPa: StdKPa, HeatPressureKPa: 5000}, "heat_pressure_kPa"},
 		{OutgasInput{FromC: 20, ToC: 80, PressureKPa: StdKPa, CO2PPM: -3}, "co2_ppm"},
 	}

@@ -186,7 +186,7 @@ func gasOutgasQuery(p Params) ([]byte, error) {
 		return nil, err
 	}
 	if heatKPa == 0 {
-		return nil, unit.NumberError("heat_pressure_kPa", 0, "a pressure above 0 and at most 1000 kPa")
+		return nil, unit.NumberError("heat_pressure_kPa", 0, "a pressure from 1 to 1000 kPa")
 	}
 	co2PPM, err := gasOptional(p, "co2_ppm", gas.DefaultCO2PPM)
 	if err != nil {

@@ -281,6 +281,24 @@ func FuzzOutgas(f *testing.F) {
 	})
 }
 
+func FuzzGasTable(f *testing.F) {
+	f.Add("0", "40", "1", "pressure_kPa", "101.325;90")
+	f.Add("10", "5", "0,5", "salinity", "0 35 40")
+	f.Fuzz(func(t *testing.T, from, to, step, kind, values string) {
+		p := Params{"temp_from_C": from, "temp_to_C": to, "temp_step_C": step, "columns": kind, "values": values}
+		b, err := GasTable(p)
+		if err != nil {
+			if !IsInputError(err) {
+				t.Fatalf("GasTable(%v): non-input error %v", p, err)
+			}
+			return
+		}
+		if _, err := wire.Decode(b); err != nil {
+			t.Fatalf("GasTable(%v) output invalid: %v", p, err)
+		}
+	})
+}
+
 var sinkBytes []byte
 
 func BenchmarkGasO2(b *testing.B) {
