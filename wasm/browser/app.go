@@ -1,0 +1,507 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"errors"
+	"strings"
+	"syscall/js"
+
+	"honnef.co/go/js/dom/v2"
+
+	"saltcast/core/compound"
+	"saltcast/core/recipe"
+	"saltcast/core/unit"
+)
+
+// localStorage keys.
+const (
+	keyShelf   = "saltcast.recipes" // the saved recipes, as a recipe collection file
+	keyCurrent = "saltcast.current" // the recipe on screen, so a reload keeps the work
+	keyUnits   = "saltcast.units"   // "C g mL"
+)
+
+// Demo recipes, invented for the examples.
+var demos = map[string]string{
+	"kno3": `{"format":1,"name":"Greenhouse KNO3 stock, tank B (invented)",` +
+		`"notes":"Invented example: a potassium nitrate stock concentrate mixed warm at 35 °C in the nutrient room that must stay clear through a 4 °C night.",` +
+		`"solute":"KNO3","water_mL":20000,"water_temp_C":18,"dissolve_temp_C":35,"clear_down_to_C":4,"clear_margin_K":2,"cool_to_C":4}`,
+	"cuso4": `{"format":1,"name":"Blue vitriol crystal batch (invented)",` +
+		`"notes":"Invented example: copper sulfate pentahydrate recrystallized from hot water for display crystals.",` +
+		`"solute":"CuSO4","charged_form":"CuSO4·5H2O","purity_pct":98,"water_g":1000,"dissolve_temp_C":70,` +
+		`"saturation_pct":95,"cool_to_C":20,"metastable_width_K":8,"cooling_time_min":180,"vessel_heat_capacity_J_per_K":1200}`,
+}
+
+type app struct {
+	u     Units
+	d     *Draft
+	store storage
+	shelf Shelf
+
+	last     *recipe.Result // the last good plan, kept on screen while an input is wrong
+	lastSVG  string
+	planErr  string // the field that the last plan error is shown beside
+	compound *compound.Compound
+
+	recipeForm dom.Element
+	inputs     map[string]dom.Element // recipe inputs by name
+	msgs       map[string]dom.Element // the message beside each input
+	tiles      []tile                 // one per Figure
+}
+
+// tile is where one Figure shows on the batch screen.
+type tile struct {
+	fig  Figure
+	out  dom.Element // the element with data-key
+	unit dom.Element // the unit beside it, if any
+	box  dom.Element // the tile to hide when the plan has no such figure
+}
+
+func newApp() *app {
+	return &app{u: DefaultUnits, d: NewDraft(), inputs: map[string]dom.Element{}, msgs: map[string]dom.Element{}}
+}
+
+func (a *app) start() {
+	a.recipeForm = byID("recipe")
+	for _, el := range a.recipeForm.QuerySelectorAll("[name]") {
+		name := el.GetAttribute("name")
+		if Known(name) {
+			a.inputs[name] = el
+			a.msgs[name] = byID("m-" + name)
+		}
+	}
+	a.bindTiles()
+	a.loadUnits()
+
+	if s, ok := a.store.get(keyShelf); ok {
+		if sh, err := LoadShelf(s); err == nil {
+			a.shelf = sh
+		} else {
+			a.boxMessage("m-save", "The saved recipes in this browser could not be read ("+err.Error()+"); they are left as they were.")
+		}
+	}
+
+	// The recipe to start with: a share link, else the last one on screen, else a demo.
+	start, _ := recipe.Decode([]byte(demos["kno3"]))
+	if r, ok, err := FromFragment(win.Location().Hash()); ok {
+		if err == nil {
+			start = r
+		} else {
+			a.boxMessage("m-import", "The link's recipe could not be read: "+err.Error())
+		}
+	} else if s, ok := a.store.get(keyCurrent); ok {
+		if r, err := recipe.Decode([]byte(s)); err == nil {
+			start = r
+		}
+	}
+
+	on(a.recipeForm, "input", a.onRecipeInput)
+	on(a.recipeForm, "submit", func(ev dom.Event) { ev.PreventDefault() })
+	on(byID("units"), "change", a.onUnits)
+	for _, b := range doc.QuerySelectorAll(".screens [data-screen]") {
+		b := b
+		on(b, "click", func(dom.Event) { a.showScreen(b.GetAttribute("data-screen")) })
+	}
+	for _, b := range doc.QuerySelectorAll("[data-demo]") {
+		b := b
+		on(b, "click", func(dom.Event) {
+			if r, err := recipe.Decode([]byte(demos[b.GetAttribute("data-demo")])); err == nil {
+				a.load(r)
+			}
+		})
+	}
+	on(byID("solute-matches"), "click", a.onPickMatch)
+	for _, el := range doc.QuerySelectorAll(`[name="programme_kind"]`) {
+		on(el, "change", func(dom.Event) { a.renderProgramme() })
+	}
+	for _, b := range doc.QuerySelectorAll("[data-print]") {
+		b := b
+		on(b, "click", func(dom.Event) { a.print(b.GetAttribute("data-print")) })
+	}
+	win.AddEventListener("beforeprint", false, func(dom.Event) { byID("s-date").SetTextContent(today()) })
+	win.AddEventListener("afterprint", false, func(dom.Event) { doc.(dom.HTMLDocument).Body().Class().Remove("print-gas") })
+	a.bindBox()
+	a.startGas()
+
+	a.load(start)
+}
+
+// load shows recipe r in the form and plans it.
+func (a *app) load(r recipe.Recipe) {
+	a.d = FromRecipe(r)
+	a.showDraft()
+	a.recompute()
+}
+
+// showDraft writes the draft into every input, in the current units.
+func (a *app) showDraft() {
+	for name, el := range a.inputs {
+		if name == "charged_form" {
+			continue
+		}
+		setValue(el, a.d.Display(name, a.u))
+		a.showFieldError(name, nil)
+	}
+	if a.d.Text["custom.model"] == "" {
+		setValue(a.inputs["custom.model"], "table")
+	}
+	setChecked(byID("f-use_custom"), a.d.Custom)
+	if a.d.Custom {
+		byID("custom-box").SetAttribute("open", "")
+	}
+	for _, el := range a.recipeForm.QuerySelectorAll(`[name="water_basis"]`) {
+		setChecked(el, value(el) == a.d.Water)
+	}
+	for _, el := range a.recipeForm.QuerySelectorAll(`[name="amount_basis"]`) {
+		setChecked(el, value(el) == a.d.Amount)
+	}
+	a.showBases()
+	a.updateSolute(false)
+}
+
+func (a *app) showBases() {
+	for _, el := range a.recipeForm.QuerySelectorAll("[data-basis]") {
+		setHidden(el, el.GetAttribute("data-basis") != a.d.Water)
+	}
+	for _, el := range a.recipeForm.QuerySelectorAll("[data-amount]") {
+		setHidden(el, el.GetAttribute("data-amount") != a.d.Amount)
+	}
+}
+
+func (a *app) onRecipeInput(ev dom.Event) {
+	el := ev.Target()
+	name := el.GetAttribute("name")
+	switch name {
+	case "water_basis":
+		a.d.Water = value(el)
+		a.showBases()
+	case "amount_basis":
+		a.d.Amount = value(el)
+		a.showBases()
+	case "use_custom":
+		a.d.Custom = checked(el)
+		a.updateSolute(false)
+	default:
+		if !Known(name) {
+			return
+		}
+		err := a.d.Set(name, value(el), a.u)
+		a.showFieldError(name, err)
+		if name == "solute" {
+			a.updateSolute(true)
+		}
+		if strings.HasPrefix(name, "custom.") {
+			a.showFit()
+		}
+	}
+	a.recompute()
+}
+
+// showFieldError puts err's message beside field name (or clears it).
+func (a *app) showFieldError(name string, err error) {
+	in, msg := a.inputs[name], a.msgs[name]
+	if in == nil {
+		return
+	}
+	if err == nil {
+		in.RemoveAttribute("aria-invalid")
+		if msg != nil {
+			msg.SetTextContent("")
+		}
+		return
+	}
+	in.SetAttribute("aria-invalid", "true")
+	if msg != nil {
+		msg.SetTextContent(fieldMessage(err, value(in)))
+	}
+}
+
+// fieldMessage says what is wrong with what the user typed, in words for beside the field.
+func fieldMessage(err error, typed string) string {
+	var fe *unit.FieldError
+	if errors.As(err, &fe) {
+		s := "Not allowed"
+		if strings.TrimSpace(typed) != "" {
+			s = "“" + typed + "” is not allowed"
+		}
+		if fe.Allowed != "" {
+			s += "; allowed: " + fe.Allowed
+		}
+		return s + "."
+	}
+	return err.Error()
+}
+
+// recompute plans the draft; on any error it keeps the last good results on screen.
+func (a *app) recompute() {
+	stale := byID("stale")
+	if len(a.d.Errs) > 0 {
+		a.clearPlanError()
+		stale.SetTextContent("Showing the last good result: correct the marked field to update.")
+		a.setStale(true)
+		return
+	}
+	r, err := a.d.Recipe()
+	if err == nil {
+		var res recipe.Result
+		res, err = recipe.Plan(r)
+		if err == nil {
+			a.clearPlanError()
+			a.setStale(false)
+			a.last = &res
+			a.store.set(keyCurrent, string(r.Encode()))
+			a.render()
+			return
+		}
+	}
+	a.showPlanError(err)
+}
+
+func (a *app) setStale(s bool) {
+	setHidden(byID("stale"), !s)
+	out := byID("outcome")
+	if s {
+		out.Class().Add("is-stale")
+	} else {
+		out.Class().Remove("is-stale")
+	}
+}
+
+// showPlanError shows a recipe or plan error beside the field it names, or above the
+// results when no input on screen has that name.
+func (a *app) showPlanError(err error) {
+	a.clearPlanError()
+	field := ""
+	var fe *unit.FieldError
+	if errors.As(err, &fe) {
+		field = fe.Field
+		if i := strings.IndexByte(field, '['); i > 0 {
+			field = field[:i]
+		}
+		if field == "custom" {
+			field = "custom.name"
+		}
+	}
+	stale := byID("stale")
+	if in, ok := a.inputs[field]; ok && !inHiddenPart(in) {
+		a.planErr = field
+		a.showFieldError(field, err)
+		stale.SetTextContent("Showing the last good result: correct the marked field to update.")
+	} else {
+		stale.SetTextContent("Showing the last good result. " + fieldMessage(err, ""))
+	}
+	a.setStale(true)
+}
+
+func inHiddenPart(el dom.Element) bool {
+	return el.Closest("[hidden]") != nil
+}
+
+func (a *app) clearPlanError() {
+	if a.planErr != "" {
+		if a.d.Errs[a.planErr] == nil {
+			a.showFieldError(a.planErr, nil)
+		}
+		a.planErr = ""
+	}
+}
+
+// updateSolute follows the solute field: it finds the compound, lists matches to pick from
+// (when typing) and fills the forms on the shelf.
+func (a *app) updateSolute(typing bool) {
+	picked := byID("solute-picked")
+	matches := byID("solute-matches")
+	sel := a.inputs["charged_form"]
+	clear(matches)
+	a.compound = nil
+	if a.d.Custom {
+		picked.SetTextContent("Planning with your own compound (below).")
+		clear(sel)
+		opt := add(sel, "option", "", "anhydrous (own compound)")
+		opt.SetAttribute("value", "")
+		return
+	}
+	text := a.d.Text["solute"]
+	c, f, err := compound.Lookup(text)
+	if err == nil {
+		a.compound = c
+		picked.SetTextContent(c.Name + " · " + c.ID)
+	} else {
+		picked.SetTextContent("")
+	}
+	if typing || err != nil {
+		a.listMatches(matches, text)
+	}
+	// The forms on the shelf of this compound; "" is the anhydrous form.
+	want := a.d.Text["charged_form"]
+	if c != nil && f != nil && want == "" && f != c.Forms[0] && typing {
+		want = f.Formula
+		a.d.Text["charged_form"] = want
+	}
+	clear(sel)
+	if c == nil {
+		opt := add(sel, "option", "", "choose a solute first")
+		opt.SetAttribute("value", want)
+		return
+	}
+	for i, form := range c.Forms {
+		label := form.Formula
+		if i == 0 {
+			label += " (anhydrous)"
+		} else if len(form.Names) > 0 {
+			label += " (" + form.Names[0] + ")"
+		}
+		opt := add(sel, "option", "", label)
+		v := form.Formula
+		if i == 0 {
+			v = ""
+		}
+		opt.SetAttribute("value", v)
+	}
+	if want != "" {
+		if form, err := c.Form(want); err == nil && form != c.Forms[0] {
+			setValue(sel, form.Formula)
+			if want != form.Formula {
+				a.d.Text["charged_form"] = form.Formula
+			}
+			return
+		}
+		// A form the compound does not have stays in the draft so the plan names it.
+		opt := add(sel, "option", "", want+" (not a form of "+c.ID+")")
+		opt.SetAttribute("value", want)
+		setValue(sel, want)
+		return
+	}
+	setValue(sel, "")
+}
+
+// maxMatches is how many compounds the search lists at once.
+const maxMatches = 8
+
+func (a *app) listMatches(box dom.Element, text string) {
+	q := strings.ToLower(strings.TrimSpace(text))
+	n := 0
+	for _, c := range compound.All() {
+		if n == maxMatches {
+			break
+		}
+		hit := q == "" || strings.Contains(strings.ToLower(c.ID), q) || strings.Contains(strings.ToLower(c.Name), q)
+		for _, nm := range c.Names {
+			hit = hit || strings.Contains(strings.ToLower(nm), q)
+		}
+		for _, f := range c.Forms {
+			hit = hit || strings.Contains(strings.ToLower(f.Formula), q)
+		}
+		if !hit {
+			continue
+		}
+		b := add(box, "button", "", c.ID+" ")
+		b.SetAttribute("type", "button")
+		b.SetAttribute("role", "option")
+		b.SetAttribute("data-id", c.ID)
+		add(b, "small", "", c.Name)
+		n++
+	}
+}
+
+func (a *app) onPickMatch(ev dom.Event) {
+	b := ev.Target().Closest("[data-id]")
+	if b == nil {
+		return
+	}
+	id := b.GetAttribute("data-id")
+	setValue(a.inputs["solute"], id)
+	a.d.Set("solute", id, a.u)
+	a.showFieldError("solute", nil)
+	delete(a.d.Text, "charged_form")
+	a.updateSolute(false)
+	clear(byID("solute-matches"))
+	a.recompute()
+}
+
+func (a *app) loadUnits() {
+	if s, ok := a.store.get(keyUnits); ok {
+		f := strings.Fields(s)
+		if len(f) == 3 {
+			a.u = Units{Temp: f[0], Mass: f[1], Volume: f[2]}
+		}
+	}
+	uf := byID("units")
+	setValue(uf.QuerySelector(`[name="unit_temp"]`), a.u.Temp)
+	setValue(uf.QuerySelector(`[name="unit_mass"]`), a.u.Mass)
+	setValue(uf.QuerySelector(`[name="unit_volume"]`), a.u.Volume)
+	// A stored value the select does not offer leaves it empty: fall back to the defaults.
+	if value(uf.QuerySelector(`[name="unit_temp"]`)) == "" || value(uf.QuerySelector(`[name="unit_mass"]`)) == "" ||
+		value(uf.QuerySelector(`[name="unit_volume"]`)) == "" {
+		a.u = DefaultUnits
+		a.loadUnitsInto(uf)
+	}
+	a.showUnitLabels()
+}
+
+func (a *app) loadUnitsInto(uf dom.Element) {
+	setValue(uf.QuerySelector(`[name="unit_temp"]`), a.u.Temp)
+	setValue(uf.QuerySelector(`[name="unit_mass"]`), a.u.Mass)
+	setValue(uf.QuerySelector(`[name="unit_volume"]`), a.u.Volume)
+}
+
+func (a *app) onUnits(dom.Event) {
+	uf := byID("units")
+	a.u = Units{
+		Temp:   value(uf.QuerySelector(`[name="unit_temp"]`)),
+		Mass:   value(uf.QuerySelector(`[name="unit_mass"]`)),
+		Volume: value(uf.QuerySelector(`[name="unit_volume"]`)),
+	}
+	a.store.set(keyUnits, a.u.Temp+" "+a.u.Mass+" "+a.u.Volume)
+	a.showUnitLabels()
+	// Fields that do not parse keep the user's text; the others show the same quantity in
+	// the new unit.
+	for name, el := range a.inputs {
+		if a.d.Errs[name] == nil && name != "charged_form" {
+			setValue(el, a.d.Display(name, a.u))
+		}
+	}
+	if a.last != nil {
+		a.render()
+	}
+	a.recomputeGas()
+}
+
+func (a *app) showUnitLabels() {
+	for _, el := range doc.QuerySelectorAll("[data-unit]") {
+		switch el.GetAttribute("data-unit") {
+		case "temp":
+			el.SetTextContent(a.u.TempSymbol())
+		case "mass":
+			el.SetTextContent(a.u.Mass)
+		case "volume":
+			el.SetTextContent(a.u.VolumeSymbol())
+		}
+	}
+}
+
+func (a *app) showScreen(name string) {
+	for _, b := range doc.QuerySelectorAll(".screens [data-screen]") {
+		sel := b.GetAttribute("data-screen") == name
+		if sel {
+			b.SetAttribute("aria-selected", "true")
+		} else {
+			b.SetAttribute("aria-selected", "false")
+		}
+		setHidden(byID("screen-"+b.GetAttribute("data-screen")), !sel)
+	}
+	if name == "sheet" {
+		byID("s-date").SetTextContent(today())
+	}
+}
+
+func (a *app) print(what string) {
+	body := doc.(dom.HTMLDocument).Body()
+	if what == "gas" {
+		body.Class().Add("print-gas")
+	} else {
+		body.Class().Remove("print-gas")
+	}
+	byID("s-date").SetTextContent(today())
+	js.Global().Call("print")
+}

@@ -1,0 +1,155 @@
+package main
+
+import (
+	"strconv"
+	"strings"
+
+	"saltcast/core/recipe"
+	"saltcast/core/unit"
+)
+
+// Figure is one number (or word) of a plan as the page, the batch sheet and the CSV show it.
+// Key is the CLI output key, so an element showing it carries data-key=Key.
+type Figure struct {
+	Key   string
+	Label string
+	Kind  kind   // kMass, kTemp, kDelta or kPlain (Unit names the unit), kText
+	Unit  string // unit of a kPlain figure
+	Sig   int    // significant figures shown (temperatures: decimals)
+	Get   func(r *recipe.Result) (v float64, text string, ok bool)
+}
+
+const kDelta kind = 100 // a temperature difference: K, or °F-degrees when °F is shown
+
+func num(f func(r *recipe.Result) float64) func(*recipe.Result) (float64, string, bool) {
+	return func(r *recipe.Result) (float64, string, bool) { return f(r), "", true }
+}
+
+func numIf(ok func(r *recipe.Result) bool, f func(r *recipe.Result) float64) func(*recipe.Result) (float64, string, bool) {
+	return func(r *recipe.Result) (float64, string, bool) {
+		if !ok(r) {
+			return 0, "", false
+		}
+		return f(r), "", true
+	}
+}
+
+func hasTarget(r *recipe.Result) bool    { return r.HasTarget }
+func hasAdiabatic(r *recipe.Result) bool { return r.HasAdiabatic }
+func hasSeedHint(r *recipe.Result) bool  { return r.HasSeedHint }
+
+// Figures are the plan's results in the order the sheet and the CSV list them. The first
+// ones are also the big tiles of the batch screen (see shell.html).
+var Figures = []Figure{
+	{Key: "charge_g", Label: "Charge to weigh", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.ChargeG })},
+	{Key: "charged_form", Label: "Form weighed", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) { return 0, r.ChargedForm, r.ChargedForm != "" }},
+	{Key: "water_g", Label: "Water added", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.WaterG })},
+	{Key: "hydrate_water_g", Label: "Water brought in by the hydrate", Kind: kMass, Sig: 4, Get: numIf(func(r *recipe.Result) bool { return r.HydrateWaterG > 0 }, func(r *recipe.Result) float64 { return r.HydrateWaterG })},
+	{Key: "saturation_pct", Label: "Saturation at process temperature", Kind: kPlain, Unit: "%", Sig: 3, Get: num(func(r *recipe.Result) float64 { return r.SaturationPct })},
+	{Key: "min_water_g", Label: "Least water that dissolves the charge", Kind: kMass, Sig: 4, Get: numIf(func(r *recipe.Result) bool { return r.MinWaterG > 0 }, func(r *recipe.Result) float64 { return r.MinWaterG })},
+	{Key: "saturation_temp_C", Label: "Clear above (onset of crystallization)", Kind: kTemp, Sig: 1, Get: numIf(func(r *recipe.Result) bool { return r.HasOnset }, func(r *recipe.Result) float64 { return r.SaturationTempC })},
+	{Key: "crystals_g", Label: "Crystals at target", Kind: kMass, Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CrystalsG })},
+	{Key: "crystal_phase", Label: "Crystals are", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) {
+		return 0, r.CrystalPhase, r.HasTarget && r.CrystalPhase != ""
+	}},
+	{Key: "yield_pct", Label: "Yield", Kind: kPlain, Unit: "%", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.YieldPct })},
+	{Key: "liquor_g", Label: "Mother liquor", Kind: kMass, Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG })},
+	{Key: "liquor_g_per_100g_water", Label: "Mother liquor strength", Kind: kPlain, Unit: "g/100 g water", Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG100 })},
+	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: num(func(r *recipe.Result) float64 { return r.DissolutionHeatKJ })},
+	{Key: "dissolution_temp_change_K", Label: "Batch temperature change on dissolving, if insulated", Kind: kDelta, Sig: 1, Get: num(func(r *recipe.Result) float64 { return r.DissolutionTempChangeK })},
+	{Key: "crystallization_heat_kJ", Label: "Heat of crystallization (+ released)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CrystallizationHeatKJ })},
+	{Key: "cooling_duty_kJ", Label: "Cooling duty", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CoolingDutyKJ })},
+	{Key: "cooling_power_W", Label: "Mean cooling power", Kind: kPlain, Unit: "W", Sig: 3, Get: numIf(func(r *recipe.Result) bool { return r.HasCoolingPower }, func(r *recipe.Result) float64 { return r.CoolingPowerW })},
+	{Key: "nucleation_temp_C", Label: "Unseeded crystals expected near", Kind: kTemp, Sig: 1, Get: numIf(func(r *recipe.Result) bool { return r.HasMetastable }, func(r *recipe.Result) float64 { return r.NucleationC })},
+	{Key: "seed_temp_C", Label: "Suggested seeding temperature", Kind: kTemp, Sig: 1, Get: numIf(hasSeedHint, func(r *recipe.Result) float64 { return r.SeedHintC })},
+	{Key: "seed_low_g", Label: "Seed mass, from", Kind: kMass, Sig: 2, Get: numIf(hasSeedHint, func(r *recipe.Result) float64 { return r.SeedLowG })},
+	{Key: "seed_high_g", Label: "Seed mass, to", Kind: kMass, Sig: 2, Get: numIf(hasSeedHint, func(r *recipe.Result) float64 { return r.SeedHighG })},
+	{Key: "adiabatic_end_temp_C", Label: "Seeded in an insulated vessel: ends at", Kind: kTemp, Sig: 1, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticEndC })},
+	{Key: "adiabatic_crystals_g", Label: "Seeded in an insulated vessel: crystals", Kind: kMass, Sig: 4, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticCrystalsG })},
+	{Key: "adiabatic_rise_K", Label: "Seeded in an insulated vessel: temperature jump", Kind: kDelta, Sig: 1, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticRiseK })},
+}
+
+// FigureByKey finds a figure of Figures.
+func FigureByKey(key string) (Figure, bool) {
+	for _, f := range Figures {
+		if f.Key == key {
+			return f, true
+		}
+	}
+	return Figure{}, false
+}
+
+// Show returns the text of f for r in units u and the unit text shown beside it. ok is
+// false when the plan has no such figure (no target given, no seeding...). A number that is
+// not finite shows as "—" (unit.FormatNumber), so NaN never reaches the screen.
+func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool) {
+	v, s, ok := f.Get(r)
+	if !ok {
+		return "", "", false
+	}
+	switch f.Kind {
+	case kText:
+		return s, "", true
+	case kTemp:
+		return fixed(TempFromC(v, u), f.Sig), u.TempSymbol(), true
+	case kDelta:
+		if u.Temp == "F" {
+			return fixed(v*1.8, f.Sig), "°F", true
+		}
+		return fixed(v, f.Sig), "K", true
+	case kMass:
+		return unit.FormatNumber(MassFromG(v, u), f.Sig), u.Mass, true
+	}
+	return unit.FormatNumber(v, f.Sig), f.Unit, true
+}
+
+// TempText shows a temperature in °C in the user's unit with its symbol.
+func TempText(c float64, u Units) string { return fixed(TempFromC(c, u), 1) + " " + u.TempSymbol() }
+
+// fixed prints v with dec decimals, "—" when v is not finite; "-0.0" prints as "0.0".
+func fixed(v float64, dec int) string {
+	if v != v || v > 1e300 || v < -1e300 {
+		return "—"
+	}
+	s := strconv.FormatFloat(v, 'f', dec, 64)
+	if strings.Trim(s, "-0.") == "" {
+		s = strings.TrimPrefix(s, "-")
+	}
+	return s
+}
+
+// CSV writes the plan as comma-separated key,value,unit,label rows (RFC 4180 quoting), the
+// recipe's name first, then warnings, cautions and sources as rows of their own.
+func CSV(r *recipe.Result, u Units) string {
+	var b strings.Builder
+	row := func(cells ...string) {
+		for i, c := range cells {
+			if i > 0 {
+				b.WriteByte(',')
+			}
+			if strings.ContainsAny(c, ",\"\r\n") {
+				c = `"` + strings.ReplaceAll(c, `"`, `""`) + `"`
+			}
+			b.WriteString(c)
+		}
+		b.WriteString("\r\n")
+	}
+	row("key", "value", "unit", "label")
+	row("name", r.Recipe.Name, "", "Batch name")
+	row("solute", r.SoluteID, "", r.SoluteName)
+	for _, f := range Figures {
+		if text, ut, ok := f.Show(r, u); ok {
+			row(f.Key, text, ut, f.Label)
+		}
+	}
+	for _, w := range r.Warnings {
+		row("warning", w, "", "")
+	}
+	for _, c := range r.Cautions {
+		row("caution", c, "", "")
+	}
+	for _, s := range r.Sources {
+		row("source", s, "", "")
+	}
+	return b.String()
+}

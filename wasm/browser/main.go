@@ -1,0 +1,19 @@
+//go:build js && wasm
+
+// Command browser is the bench app's program in the page (GOOS=js GOARCH=wasm). It is glue
+// only: it reads the inputs, asks the core (core/recipe, core/compound, core/gas) and shows
+// the answers, the chart (core/chart) and the batch sheet. No physics lives here.
+//
+// User text never becomes markup: names, notes and compound names are set with
+// textContent; the only markup inserted is the SVG that core/chart renders, which escapes
+// every piece of text it holds.
+package main
+
+import "syscall/js"
+
+func main() {
+	a := newApp()
+	a.start()
+	js.Global().Call("saltcastReady")
+	select {}
+}

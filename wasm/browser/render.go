@@ -1,0 +1,377 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"honnef.co/go/js/dom/v2"
+
+	"saltcast/core/chart"
+	"saltcast/core/compound"
+	"saltcast/core/recipe"
+	"saltcast/core/solubility"
+	"saltcast/core/unit"
+)
+
+// bindTiles finds the element of each Figure on the batch screen, making a small tile in
+// #extra-figures for the figures the shell does not place itself.
+func (a *app) bindTiles() {
+	outcome := byID("outcome")
+	extra := byID("extra-figures")
+	for _, f := range Figures {
+		t := tile{fig: f}
+		if el := outcome.QuerySelector(`[data-key="` + f.Key + `"]`); el != nil {
+			t.out = el
+			t.box = el.Closest(".fig")
+			if p := el.ParentElement(); p != nil {
+				t.unit = p.QuerySelector(".u")
+			}
+		} else {
+			t.box = add(extra, "div", "fig", "")
+			add(t.box, "span", "lbl", f.Label)
+			val := add(t.box, "span", "val", "")
+			t.out = add(val, "output", "", "—")
+			t.out.SetAttribute("data-key", f.Key)
+			val.AppendChild(doc.CreateTextNode(" "))
+			t.unit = add(val, "span", "u", "")
+		}
+		a.tiles = append(a.tiles, t)
+	}
+}
+
+// render shows a.last: figures, cautions, warnings, sources, chart, programme and sheet.
+func (a *app) render() {
+	r := a.last
+	for _, t := range a.tiles {
+		text, ut, ok := t.fig.Show(r, a.u)
+		if !ok {
+			text = "—"
+		}
+		t.out.SetTextContent(text)
+		if t.unit != nil && ut != "" {
+			t.unit.SetTextContent(ut)
+		}
+		// A tile of its own hides when the plan has no such figure; a figure inside
+		// another tile (crystal_phase) follows its tile.
+		if t.box != nil && t.box.QuerySelector("output") == t.out {
+			setHidden(t.box, !ok)
+		}
+	}
+	cf := ""
+	if r.ChargedForm != "" {
+		cf = "of " + r.ChargedForm
+		if r.PurityPct > 0 && r.PurityPct < 100 {
+			cf += " at " + unit.FormatNumber(r.PurityPct, 4) + " % purity"
+		}
+	}
+	byID("charge-form").SetTextContent(cf)
+
+	fillList(byID("cautions"), r.Cautions)
+	fillList(byID("warnings"), orNone(r.Warnings))
+	fillList(byID("sources"), r.Sources)
+	byID("curve-range").SetTextContent(a.curveText(r))
+
+	a.lastSVG = a.chartSVG(r)
+	byID("chart").SetInnerHTML(a.lastSVG) // SVG from core/chart: every text in it is escaped
+	a.renderProgramme()
+	a.renderSheet()
+}
+
+func orNone(s []string) []string {
+	if len(s) == 0 {
+		return []string{"None."}
+	}
+	return s
+}
+
+// curveText names the curve used and the range it is valid over.
+func (a *app) curveText(r *recipe.Result) string {
+	c := a.compound
+	if c == nil {
+		if a.d.Custom && len(a.d.Points) > 0 {
+			lo, hi := pointRange(a.d.Points)
+			return "Your own points for " + a.d.Text["custom.name"] + ", valid from " + TempText(lo, a.u) + " to " + TempText(hi, a.u) + "."
+		}
+		return ""
+	}
+	lo, hi := c.Range()
+	s := c.Name + " (" + c.ID + "): data from " + TempText(lo, a.u) + " to " + TempText(hi, a.u) + "."
+	for _, seg := range c.Segments {
+		s += " " + seg.Form.Formula + " is the stable solid from " + TempText(seg.MinC, a.u) + " to " + TempText(seg.MaxC, a.u)
+		if seg.Curve.Source != "" {
+			s += " (" + seg.Curve.Source + ")"
+		}
+		s += "."
+	}
+	return s
+}
+
+func pointRange(pts []recipe.Point) (lo, hi float64) {
+	lo, hi = pts[0].TempC, pts[0].TempC
+	for _, p := range pts {
+		lo, hi = min(lo, p.TempC), max(hi, p.TempC)
+	}
+	return lo, hi
+}
+
+// chartUnit maps the page's temperature unit to the chart's.
+func chartUnit(u Units) chart.TempUnit {
+	switch u.Temp {
+	case "F":
+		return chart.Fahrenheit
+	case "K":
+		return chart.Kelvin
+	}
+	return chart.Celsius
+}
+
+// chartPoints is how many points each solid phase's curve is drawn with.
+const chartPoints = 60
+
+// chartSVG draws the compound's curves and the batch's path; any problem becomes a
+// placeholder SVG that says what is missing, never a broken chart.
+func (a *app) chartSVG(r *recipe.Result) string {
+	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: batchPath(r)}
+	if r.HasMetastable {
+		view.MetastableK = r.MetastableWidthK
+	}
+	var err error
+	switch {
+	case a.compound != nil:
+		view.Title = a.compound.Name + ", " + a.compound.ID
+		view.Phases, err = phases(a.compound)
+	case a.d.Custom:
+		view.Title = a.d.Text["custom.name"] + " (own data)"
+		var fit solubility.FitResult
+		fit, err = a.fit()
+		if err == nil {
+			var pts []chart.Point
+			pts, err = chart.Sample(fit.Curve.MinC, fit.Curve.MaxC, chartPoints, curveAt(fit.Curve))
+			view.Phases = []chart.Phase{{Form: view.Title, Points: pts}}
+		}
+	}
+	if err != nil {
+		return chart.Placeholder("Solubility", "No chart: "+err.Error())
+	}
+	c, err := chart.Solubility(view)
+	if err == nil {
+		var svg string
+		if svg, err = chart.Render(c); err == nil {
+			return svg
+		}
+	}
+	return chart.Placeholder("Solubility", "No chart: "+err.Error())
+}
+
+func curveAt(c solubility.Curve) func(float64) (float64, error) {
+	return func(t float64) (float64, error) {
+		g, _, err := c.At(t)
+		return g, err
+	}
+}
+
+// phaseCache keeps the sampled curves of library compounds, which never change.
+var phaseCache = map[string][]chart.Phase{}
+
+func phases(c *compound.Compound) ([]chart.Phase, error) {
+	if p, ok := phaseCache[c.ID]; ok && !c.Custom {
+		return p, nil
+	}
+	var out []chart.Phase
+	for _, seg := range c.Segments {
+		pts, err := chart.Sample(seg.MinC, seg.MaxC, chartPoints, curveAt(seg.Curve))
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, chart.Phase{Form: seg.Form.Formula, Points: pts})
+	}
+	if !c.Custom {
+		phaseCache[c.ID] = out
+	}
+	return out, nil
+}
+
+// batchPath turns the plan's labelled path points into the chart's batch route.
+func batchPath(r *recipe.Result) *chart.Batch {
+	var b chart.Batch
+	found := map[string]*chart.Point{}
+	for _, p := range r.Path {
+		pt := chart.Point{X: p.TempC, Y: p.G100}
+		found[p.Label] = &pt
+	}
+	d, ok := found["dissolve"]
+	if !ok {
+		return nil
+	}
+	b.Dissolve = *d
+	b.Saturation = found["onset"]
+	b.Seed = found["seed"]
+	b.Settled = found["adiabatic end"]
+	switch {
+	case b.Seed != nil:
+		b.Onset = b.Seed
+	case found["nucleation"] != nil:
+		b.Onset = found["nucleation"]
+	case r.HasTarget && r.CrystalsG > 0:
+		b.Onset = b.Saturation
+	}
+	if e, ok := found["end"]; ok {
+		b.End = *e
+	} else {
+		b.End = b.Dissolve
+	}
+	return &b
+}
+
+// fit fits the user's points with the chosen model, as the planner does.
+func (a *app) fit() (solubility.FitResult, error) {
+	pts := make([]solubility.Point, len(a.d.Points))
+	for i, p := range a.d.Points {
+		pts[i] = solubility.Point{TempC: p.TempC, GPer100gWater: p.GPer100gWater}
+	}
+	model := a.d.Text["custom.model"]
+	if model == "" {
+		model = solubility.KindTable
+	}
+	return solubility.Fit(model, pts, a.d.Num["custom.molar_mass_g_per_mol"])
+}
+
+// showFit reports how well the chosen curve fits the user's points.
+func (a *app) showFit() {
+	out := byID("custom-fit")
+	if len(a.d.Points) < 3 || a.d.Num["custom.molar_mass_g_per_mol"] <= 0 {
+		out.SetTextContent("Give the molar mass and at least three points to see the curve.")
+		return
+	}
+	f, err := a.fit()
+	if err != nil {
+		out.SetTextContent("No curve yet: " + fieldMessage(err, ""))
+		return
+	}
+	out.SetTextContent("Curve over " + TempText(f.Curve.MinC, a.u) + " to " + TempText(f.Curve.MaxC, a.u) +
+		": R² " + unit.FormatNumber(f.R2, 4) + ", RMS deviation " + unit.FormatNumber(f.RMS, 3) + " g per 100 g water.")
+}
+
+func (a *app) renderProgramme() {
+	r := a.last
+	box := byID("programme-box")
+	if r == nil || len(r.Programme) == 0 {
+		setHidden(box, true)
+		return
+	}
+	setHidden(box, false)
+	cubic := false
+	for _, el := range doc.QuerySelectorAll(`[name="programme_kind"]`) {
+		if checked(el) && value(el) == "cubic" {
+			cubic = true
+		}
+	}
+	body := byID("programme").QuerySelector("tbody")
+	fillProgramme(body, r, a.u, cubic, false)
+}
+
+// fillProgramme writes the rows of the cooling programme; both columns when both is set.
+func fillProgramme(body dom.Element, r *recipe.Result, u Units, cubic, both bool) {
+	clear(body)
+	for _, s := range r.Programme {
+		tr := add(body, "tr", "", "")
+		add(tr, "td", "", unit.FormatNumber(s.TimeMin, 4))
+		if both || !cubic {
+			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), 1))
+		}
+		if both || cubic {
+			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), 1))
+		}
+	}
+}
+
+// renderSheet fills the printable batch sheet from the recipe and the plan.
+func (a *app) renderSheet() {
+	r := a.last
+	name := r.Recipe.Name
+	if name == "" {
+		name = "unnamed batch"
+	}
+	byID("s-name").SetTextContent(name)
+	byID("s-date").SetTextContent(today())
+	fillList(byID("s-cautions"), r.Cautions)
+	fillList(byID("s-warnings"), orNone(r.Warnings))
+	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
+	byID("s-notes").SetTextContent(r.Recipe.Notes)
+
+	in := byID("s-inputs")
+	clear(in)
+	row := func(tb dom.Element, label, val string) {
+		if val == "" {
+			return
+		}
+		tr := add(tb, "tr", "", "")
+		th := add(tr, "th", "", label)
+		th.SetAttribute("scope", "row")
+		add(tr, "td", "", val)
+	}
+	solute := r.SoluteName
+	if r.SoluteID != "" && r.SoluteID != solute {
+		solute += " (" + r.SoluteID + ")"
+	}
+	row(in, "Solute", solute)
+	row(in, "Form on the shelf", r.ChargedForm)
+	row(in, "Purity", unit.FormatNumber(r.PurityPct, 4)+" %")
+	d := FromRecipe(r.Recipe)
+	for _, k := range []struct{ key, label string }{
+		{"water_g", "Water"}, {"water_mL", "Water (volume)"}, {"water_temp_C", "measured at"},
+		{"evaporated_water_g", "Water boiled off"}, {"dissolve_temp_C", "Process temperature"},
+		{"saturation_pct", "Saturation"}, {"charge_g", "Charge"}, {"clear_down_to_C", "Stays clear down to"},
+		{"clear_margin_K", "Safety margin"}, {"cool_to_C", "Target temperature"}, {"seed_at_C", "Seed at"},
+		{"metastable_width_K", "Metastable band width"}, {"cooling_time_min", "Cooling time"},
+		{"vessel_heat_capacity_J_per_K", "Vessel heat capacity"},
+	} {
+		if txt := d.Display(k.key, a.u); txt != "" {
+			row(in, k.label, txt+" "+a.unitOf(k.key))
+		}
+	}
+
+	out := byID("s-results")
+	clear(out)
+	for _, f := range Figures {
+		if text, ut, ok := f.Show(r, a.u); ok {
+			row(out, f.Label, text+" "+ut)
+		}
+	}
+	byID("s-chart").SetInnerHTML(a.lastSVG)
+
+	pt := byID("s-programme")
+	clear(pt)
+	if len(r.Programme) > 0 {
+		head := add(pt, "tr", "", "")
+		for _, h := range []string{"time, min", "linear, " + a.u.TempSymbol(), "cubic (Mullin & Nývlt), " + a.u.TempSymbol()} {
+			th := add(head, "th", "", h)
+			th.SetAttribute("scope", "col")
+		}
+		body := add(pt, "tbody", "", "")
+		fillProgramme(body, r, a.u, false, true)
+	}
+	setHidden(pt.ParentElement(), len(r.Programme) == 0)
+}
+
+// unitOf is the unit shown beside a recipe field on the sheet.
+func (a *app) unitOf(key string) string {
+	switch fieldKinds[key] {
+	case kTemp:
+		return a.u.TempSymbol()
+	case kMass:
+		return a.u.Mass
+	case kVolume:
+		return a.u.VolumeSymbol()
+	}
+	switch key {
+	case "saturation_pct":
+		return "%"
+	case "clear_margin_K", "metastable_width_K":
+		return "K"
+	case "cooling_time_min":
+		return "min"
+	case "vessel_heat_capacity_J_per_K":
+		return "J/K"
+	}
+	return ""
+}
