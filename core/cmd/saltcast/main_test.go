@@ -1,0 +1,146 @@
+package main
+
+import (
+	"bytes"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"saltcast/core/wire"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden files in testdata/ with the current output")
+
+func run(t *testing.T, stdin string, args ...string) (stdout, stderr string, code int) {
+	t.Helper()
+	var out, errb bytes.Buffer
+	code = Run(args, strings.NewReader(stdin), &out, &errb)
+	return out.String(), errb.String(), code
+}
+
+// golden compares got with testdata/name, or rewrites it with -update. The goldens hold
+// rendered output; the numbers in them are checked by the balance and recipe tests against
+// handbook values, so a golden catches unintended changes of layout and wording.
+func golden(t *testing.T, name, got string) {
+	t.Helper()
+	path := filepath.Join("testdata", name)
+	if *update {
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run go test -update to create it)", err)
+	}
+	if got != string(want) {
+		t.Errorf("output differs from %s (run go test -update after checking the change):\ngot:\n%s\nwant:\n%s", path, got, want)
+	}
+}
+
+func TestGoldens(t *testing.T) {
+	tests := []struct {
+		golden string
+		stdin  string
+		args   []string
+	}{
+		{"solubility-kno3-20.json", "", []string{"solubility", "--solute", "KNO3", "--temp-C", "20"}},
+		{"solubility-glauber-25.json", "", []string{"solubility", "--solute=Glauber's salt", "--temp-C=25,0"}},
+		{"plan-cuso4.json", "", []string{"plan", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"plan-stdin.json", `{"solute":"Na2SO4","water_g":100,"dissolve_temp_C":40,"cool_to_C":20}`, []string{"plan", "-"}},
+		{"demo.txt", "", []string{"demo", "../../../testdata/demo-kno3-stock.json", "../../../testdata/demo-cuso4-crystals.json"}},
+	}
+	for _, tt := range tests {
+		out, errOut, code := run(t, tt.stdin, tt.args...)
+		if code != 0 {
+			t.Errorf("saltcast %s: exit %d, stderr %s", strings.Join(tt.args, " "), code, errOut)
+			continue
+		}
+		golden(t, tt.golden, out)
+	}
+}
+
+// The solubility answer keeps the contract keys and values: KNO3 at 20 °C is 31.93 g per
+// 100 g water (CRC 98th ed., 24.2 mass %, reference notes §1a).
+func TestSolubilityContract(t *testing.T) {
+	out, _, code := run(t, "", "solubility", "--solute", "KNO3", "--temp-C", "20")
+	if code != 0 {
+		t.Fatalf("exit %d", code)
+	}
+	v, err := wire.Decode([]byte(out))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, k := range []string{"solute", "temp_C", "g_per_100g_water", "solid_phase", "source", "warnings"} {
+		if _, ok := v.Get(k); !ok {
+			t.Errorf("output lacks %q: %s", k, out)
+		}
+	}
+	g, _ := v.Get("g_per_100g_water")
+	if d := g.Num - 31.93; d > 0.01 || d < -0.01 {
+		t.Errorf("g_per_100g_water = %v, want 31.93", g.Num)
+	}
+	ph, _ := v.Get("solid_phase")
+	if ph.Text != "KNO3" {
+		t.Errorf("solid_phase = %q", ph.Text)
+	}
+	// Glauber's salt at 20 °C: the decahydrate is the stable solid (below 32.38 °C).
+	out, _, _ = run(t, "", "solubility", "--solute", "Na2SO4", "--temp-C", "20")
+	if !strings.Contains(out, `"solid_phase":"Na2SO4·10H2O"`) {
+		t.Errorf("Na2SO4 at 20 °C: %s", out)
+	}
+}
+
+func TestErrors(t *testing.T) {
+	tests := []struct {
+		args    []string
+		stdin   string
+		code    int
+		wantErr string
+	}{
+		{nil, "", 2, "saltcast solubility"},
+		{[]string{"frobnicate"}, "", 2, "command"},
+		{[]string{"solubility", "--solute", "KNO3"}, "", 2, "temp_C"},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "1.234,5"}, "", 2, "temp_C"},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "500"}, "", 2, "temp_C"},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "20", "--colour", "red"}, "", 2, "colour"},
+		{[]string{"solubility", "--solute", "kryptonite", "--temp-C", "20"}, "", 2, "solute"},
+		{[]string{"solubility", "--temp-C"}, "", 2, "temp-C"},
+		{[]string{"plan"}, "", 2, "arguments"},
+		{[]string{"plan", "no-such-file.json"}, "", 2, "no-such-file.json"},
+		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":-5,"dissolve_temp_C":60}`, 2, "water_g"},
+		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":5,"dissolve_temp_C":60,"extra":1}`, 2, "extra"},
+		{[]string{"plan", "-"}, `{"solute":"KNO3",`, 2, "JSON line 1"},
+		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":NaN,"dissolve_temp_C":60}`, 2, "NaN"},
+		{[]string{"demo"}, "", 2, "recipe files"},
+		{[]string{"demo", "-"}, `{"solute":"KNO3","water_g":100,"dissolve_temp_C":20,"cool_to_C":40}`, 2, "cool_to_C"},
+	}
+	for _, tt := range tests {
+		out, errOut, code := run(t, tt.stdin, tt.args...)
+		if code != tt.code || !strings.Contains(errOut, tt.wantErr) || out != "" && tt.args != nil {
+			t.Errorf("saltcast %q: exit %d, stdout %q, stderr %q; want exit %d and %q on stderr", tt.args, code, out, errOut, tt.code, tt.wantErr)
+		}
+	}
+}
+
+func TestHelpAndCompounds(t *testing.T) {
+	out, _, code := run(t, "", "help")
+	if code != 0 || !strings.Contains(out, "saltcast plan") {
+		t.Errorf("help: exit %d, %q", code, out)
+	}
+	out, _, code = run(t, "", "compounds")
+	if code != 0 {
+		t.Fatalf("compounds: exit %d", code)
+	}
+	v, err := wire.Decode([]byte(out))
+	if err != nil {
+		t.Fatal(err)
+	}
+	list, _ := v.Get("compounds")
+	if len(list.Items) < 16 {
+		t.Errorf("compounds lists %d, want the 16 of the library", len(list.Items))
+	}
+}
