@@ -135,7 +135,11 @@ func (p *parser) statement() error {
 		if len(fields) != 1 || fields[0] == "" {
 			return p.fail("want: density source")
 		}
-		p.density = &rowSet{line: p.line, unit: "density", source: p.expand(fields[0])}
+		src, err := p.source(fields[0])
+		if err != nil {
+			return err
+		}
+		p.density = &rowSet{line: p.line, unit: "density", source: src}
 		p.rows = p.density
 	case "caution":
 		if len(fields) != 3 {
@@ -176,30 +180,47 @@ func splitNames(s string) []string {
 	return out
 }
 
-// expand replaces @KEY with the named source's citation, keeping any text after the key.
+// expand replaces each @KEY with the named source's citation, keeping any text after the
+// key. Inserted citations are not expanded again, so a citation that mentions @KEY cannot
+// loop. An unknown key is left in place for source to report.
 func (p *parser) expand(s string) string {
+	var b strings.Builder
 	for {
 		i := strings.IndexByte(s, '@')
 		if i < 0 {
-			return s
+			b.WriteString(s)
+			return b.String()
 		}
 		j := i + 1
 		for j < len(s) && (s[j] >= 'A' && s[j] <= 'Z' || s[j] >= '0' && s[j] <= '9') {
 			j++
 		}
-		full, ok := p.sources[s[i+1:j]]
-		if !ok {
-			return s // reported by checkSource
+		b.WriteString(s[:i])
+		if full, ok := p.sources[s[i+1:j]]; ok {
+			b.WriteString(full)
+		} else {
+			b.WriteString(s[i:j])
 		}
-		s = s[:i] + full + s[j:]
+		s = s[j:]
 	}
 }
 
 func (p *parser) source(s string) (string, error) {
-	e := p.expand(s)
-	if i := strings.IndexByte(e, '@'); i >= 0 {
-		return "", p.fail("unknown source key in " + strconv.Quote(s))
+	for rest := s; ; {
+		i := strings.IndexByte(rest, '@')
+		if i < 0 {
+			break
+		}
+		j := i + 1
+		for j < len(rest) && (rest[j] >= 'A' && rest[j] <= 'Z' || rest[j] >= '0' && rest[j] <= '9') {
+			j++
+		}
+		if _, ok := p.sources[rest[i+1:j]]; !ok {
+			return "", p.fail("unknown source key in " + strconv.Quote(s))
+		}
+		rest = rest[j:]
 	}
+	e := p.expand(s)
 	if strings.TrimSpace(e) == "" {
 		return "", p.fail("empty source")
 	}
@@ -338,7 +359,7 @@ func (p *parser) unit(fields []string) error {
 }
 
 func (p *parser) row(s string) error {
-	if p.rows == nil {
+	if p.c == nil || p.rows == nil {
 		return p.fail("a data row must follow a phase or density line")
 	}
 	nums, src, _ := strings.Cut(s, "|")
@@ -447,6 +468,6 @@ func (p *parser) end() error {
 		c.density = d
 	}
 	p.out = append(p.out, c)
-	p.c = nil
+	p.c, p.phases, p.rows, p.density = nil, nil, nil, nil
 	return nil
 }
