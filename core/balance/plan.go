@@ -349,6 +349,8 @@ func Plan(b Batch) (Result, error) {
 		warn.add("the batch is saturated at the dissolve temperature: any cooling or loss of water before filtering starts crystallization")
 	}
 
+	temperatureWarnings(&res, b, &warn)
+
 	// Cautions: the compound's note, the general ones, and the SDS last.
 	cautions.add(c.Hazard)
 	hottest := b.DissolveTempC
@@ -388,6 +390,41 @@ func Plan(b Batch) (Result, error) {
 		return Result{}, err
 	}
 	return res, nil
+}
+
+// Water freezes below 0 °C and boils above 100 °C at 101.325 kPa (99.97 °C on ITS-90,
+// IAPWS-95, from memory). A solute moves both points, which Saltcast does not compute.
+const (
+	freezeC = 0.0
+	boilC   = 100.0
+)
+
+// temperatureWarnings warns about every planned temperature where the liquor may freeze or
+// boil: neither ice nor boiling is modelled.
+func temperatureWarnings(res *Result, b Batch, warn *notes) {
+	type named struct {
+		key string
+		t   float64
+		ok  bool
+	}
+	for _, n := range [...]named{
+		{"dissolve_temp_C", b.DissolveTempC, true},
+		{"cool_to_C", b.TargetC, b.HasTarget},
+		{"seed_at_C", b.SeedAtC, b.HasSeedAt},
+		{"clear_down_to_C", b.ClearDownToC, b.HasClearDown},
+		{"saturation temperature", res.SaturationTempC, res.HasOnset},
+		{"adiabatic end temperature", res.AdiabaticEndC, res.HasAdiabatic},
+	} {
+		switch {
+		case !n.ok:
+		case n.t < freezeC:
+			warn.add(n.key + " " + fmtC(n.t) + " is below 0 °C: the liquor may freeze there, and ice is not modelled " +
+				"(the solute lowers the freezing point by an amount Saltcast does not compute; below the eutectic ice and salt separate together)")
+		case n.t > boilC:
+			warn.add(n.key + " " + fmtC(n.t) + " is above 100 °C, where water boils at 101.325 kPa: the liquor stays liquid only " +
+				"if the solute raises its boiling point enough or the vessel is under pressure, which Saltcast does not model")
+		}
+	}
 }
 
 // phaseChanges lists the boundaries between stable phases crossed from fromC to toC.

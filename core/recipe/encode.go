@@ -100,17 +100,12 @@ func (res Result) encode(e *wire.Encoder) {
 	e.EndArray()
 	opt("metastable_width_K", r.MetastableWidthK, r.HasMetastable)
 	opt("nucleation_temp_C", r.NucleationC, r.HasMetastable)
-	if r.HasSeedHint {
-		e.Key("seed").BeginObject()
-		num("temp_C", r.SeedHintC)
-		e.Key("phase").String(r.SeedPhase)
-		num("low_g", r.SeedLowG)
-		num("high_g", r.SeedHighG)
-		e.Key("rule").String(r.SeedRule)
-		e.EndObject()
-	} else {
-		e.Key("seed").Null()
-	}
+	h := r.HasSeedHint
+	opt("seed_temp_C", r.SeedHintC, h)
+	optStr("seed_phase", r.SeedPhase, h)
+	opt("seed_low_g", r.SeedLowG, h)
+	opt("seed_high_g", r.SeedHighG, h)
+	optStr("seed_rule", r.SeedRule, h)
 	if len(r.Programme) > 0 {
 		e.Key("programme").BeginObject()
 		num("from_C", r.ProgrammeFromC)

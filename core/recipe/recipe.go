@@ -88,7 +88,8 @@ var customModels = []string{"table", "vant-hoff", "apelblat", "polynomial"}
 const (
 	minTempC    = -40.0
 	maxTempC    = 150.0
-	maxMassG    = 1e7 // 10 t
+	minMassG    = 1e-3 // 1 mg: no balance weighs less (common practice), and it keeps subnormal numbers out
+	maxMassG    = 1e7  // 10 t
 	maxTextName = 200
 	maxTextNote = 4000
 )
@@ -139,9 +140,9 @@ func fromValue(v wire.Value, prefix string) (Recipe, error) {
 		case "custom":
 			r.Custom = d.custom(m.Value)
 		case "water_g":
-			r.WaterG = d.num(m.Key, m.Value, above(0), atMost(maxMassG), "a mass > 0 and ≤ 1e7 g")
+			r.WaterG = d.num(m.Key, m.Value, atLeast(minMassG), atMost(maxMassG), massAllowed)
 		case "water_mL":
-			r.WaterML = d.num(m.Key, m.Value, above(0), atMost(maxMassG), "a volume > 0 and ≤ 1e7 mL")
+			r.WaterML = d.num(m.Key, m.Value, atLeast(minMassG), atMost(maxMassG), "a volume > 0, from 0.001 to 1e7 mL")
 		case "water_temp_C":
 			r.WaterTempC = d.num(m.Key, m.Value, atLeast(0), atMost(100), "a temperature from 0 to 100 °C (range of the water density equation)")
 		case "dissolve_temp_C":
@@ -149,7 +150,7 @@ func fromValue(v wire.Value, prefix string) (Recipe, error) {
 		case "saturation_pct":
 			r.SaturationPct = d.num(m.Key, m.Value, above(0), atMost(100), "a percentage of saturation > 0 and ≤ 100")
 		case "charge_g":
-			r.ChargeG = d.num(m.Key, m.Value, above(0), atMost(maxMassG), "a mass > 0 and ≤ 1e7 g")
+			r.ChargeG = d.num(m.Key, m.Value, atLeast(minMassG), atMost(maxMassG), massAllowed)
 		case "clear_down_to_C":
 			r.ClearDownToC = d.num(m.Key, m.Value, atLeast(minTempC), atMost(maxTempC), tempAllowed)
 		case "clear_margin_K":
@@ -184,7 +185,10 @@ func fromValue(v wire.Value, prefix string) (Recipe, error) {
 	return r, d.err
 }
 
-const tempAllowed = "a temperature from −40 to 150 °C"
+const (
+	tempAllowed = "a temperature from −40 to 150 °C"
+	massAllowed = "a mass > 0, from 0.001 g to 1e7 g"
+)
 
 // checkCombination enforces the rules that involve more than one key.
 func (r *Recipe) checkCombination(prefix string) error {
@@ -364,8 +368,8 @@ func (d *reader) points(v wire.Value) []Point {
 			d.fail(field, it.Items[0].Text, tempAllowed)
 			return nil
 		}
-		if !(g > 0) || g > 1e5 {
-			d.fail(field, it.Items[1].Text, "a solubility > 0 and ≤ 1e5 g per 100 g water")
+		if !(g >= 1e-6) || g > 1e5 {
+			d.fail(field, it.Items[1].Text, "a solubility > 0, from 1e-6 to 1e5 g per 100 g water")
 			return nil
 		}
 		pts = append(pts, Point{TempC: t, GPer100gWater: g})
