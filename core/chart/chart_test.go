@@ -424,11 +424,11 @@ func TestPath(t *testing.T) {
 	}
 	p := path.Points
 	// 35 °C = 95 °F and 27.6 °C = 81.68 °F (NIST SP 811, 2008: t/°F = 1.8·t/°C + 32).
-	if p[0] != (Point{95, 50}) || !close(p[1].X, 81.68) || p[1].Y != 50 {
+	if p[0] != (Point{95, 50}) || !near(p[1].X, 81.68) || p[1].Y != 50 {
 		t.Errorf("path starts %v, %v; want (95, 50), (81.68, 50)", p[0], p[1])
 	}
 	last := p[len(p)-1]
-	if !close(last.X, 39.2) || last.Y != 16.3 {
+	if !near(last.X, 39.2) || last.Y != 16.3 {
 		t.Errorf("path ends %v, want (39.2, 16.3)", last)
 	}
 	for i := 2; i < len(p); i++ {
@@ -440,7 +440,7 @@ func TestPath(t *testing.T) {
 	// (68 °F) it passes through the CRC value 31.93.
 	found := false
 	for _, q := range p {
-		if close(q.X, 68) && close(q.Y, 31.93) {
+		if near(q.X, 68) && near(q.Y, 31.93) {
 			found = true
 		}
 	}
@@ -458,12 +458,12 @@ func TestZoom(t *testing.T) {
 	}
 	// The batch spans 4–35 °C; a quarter of 31 K is 7.75 K on each side.
 	pts := c.Series[0].Points
-	if first, last := pts[0], pts[len(pts)-1]; !close(first.X, 0) || !close(last.X, 42.75) {
+	if first, last := pts[0], pts[len(pts)-1]; !near(first.X, 0) || !near(last.X, 42.75) {
 		t.Errorf("zoomed curve runs %v..%v, want 0..42.75 °C", first.X, last.X)
 	}
 	// 42.75 °C is interpolated between the CRC points at 40 and 50 °C.
 	want := 62.87 + (84.16-62.87)*0.275
-	if got := pts[len(pts)-1].Y; !close(got, want) {
+	if got := pts[len(pts)-1].Y; !near(got, want) {
 		t.Errorf("curve at 42.75 °C = %v, want %v", got, want)
 	}
 }

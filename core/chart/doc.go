@@ -22,12 +22,21 @@
 // Every piece of text (titles, labels, compound names typed by a user) is
 // XML-escaped; characters XML cannot hold are replaced by U+FFFD.
 //
-// Solubility and Oxygen build the two charts Saltcast shows from values in
-// °C and g per 100 g water (or mg/L): the solid phases' curves, the
-// metastable band, the batch's path and its points, or the oxygen
+// Solubility and Oxygen build the two charts Saltcast shows from plain
+// values in °C and g per 100 g water (or mg/L): the solid phases' curves,
+// the metastable band, the batch's path and its points, or the oxygen
 // saturation curve with the day's and a measured point. They convert to the
 // reader's temperature unit (TempUnit) and concentration unit (ConcUnit).
 //
-// The package imports only the standard library's errors, math, strconv,
-// strings and unicode/utf8, so it adds little to the WebAssembly build.
+// Phases, BatchFromPlan, PlanView and CompoundView read the same values
+// from compound.Compound and balance.Result; OxygenChartView computes the
+// curve with gas.OxygenSaturation. SolubilitySVG and OxygenSVG go all the
+// way to an SVG string and never fail: whatever cannot be drawn becomes a
+// Placeholder that says why.
+//
+// Besides those core packages the package imports only errors, math, sort,
+// strconv, strings and unicode/utf8 (no fmt, no reflection), so it adds
+// little to the WebAssembly build. Rendering a two-phase chart with its
+// batch takes about 0.1 ms natively and 0.3 ms under WebAssembly (see the
+// benchmarks).
 package chart

@@ -88,8 +88,10 @@ func (c *Chart) layout() (*layout, error) {
 	for _, v := range l.yt.Values() {
 		wy = math.Max(wy, textWidth(l.yt.Label(v, c.DecimalComma), fontTick))
 	}
-	l.left = outerMargin + fontAxis + 14 + wy + 10
-	right := outerMargin + textWidth(l.xt.Label(l.xt.Hi, c.DecimalComma), fontTick)/2
+	// Labels wider than a third of the chart are clipped by the frame rather
+	// than squeezing the plot away.
+	l.left = outerMargin + fontAxis + 14 + math.Min(wy, chartWidth/3) + 10
+	right := outerMargin + math.Min(textWidth(l.xt.Label(l.xt.Hi, c.DecimalComma), fontTick)/2, chartWidth/6)
 	l.plotW = chartWidth - l.left - right
 	l.xAxisTitle = axisTitle(c.X)
 	l.yAxisTitle = axisTitle(c.Y)
@@ -651,32 +653,32 @@ func (l *layout) pair(p Point) string {
 }
 
 // wrap breaks s into at most max lines of the given width; the last line is
-// truncated if needed.
+// truncated if needed. It measures each word once, so long text costs
+// linear time.
 func wrap(s string, size, width float64, max int) []string {
-	s = strings.TrimSpace(s)
-	if s == "" {
+	words := strings.Fields(s)
+	if len(words) == 0 {
 		return nil
 	}
+	space := textWidth(" ", size)
 	var lines []string
-	words := strings.Fields(s)
-	cur := ""
+	start, w := 0, 0.0 // first word of the current line, its width so far
 	for i, wd := range words {
-		try := wd
-		if cur != "" {
-			try = cur + " " + wd
-		}
-		if cur != "" && textWidth(try, size) > width {
-			lines = append(lines, cur)
+		ww := textWidth(wd, size)
+		if i > start && w+space+ww > width {
 			if len(lines) == max-1 {
-				rest := strings.Join(words[i:], " ")
-				return append(lines, truncate(rest, size, width))
+				break
 			}
-			cur = wd
+			lines = append(lines, strings.Join(words[start:i], " "))
+			start, w = i, ww
 			continue
 		}
-		cur = try
+		if i > start {
+			w += space
+		}
+		w += ww
 	}
-	return append(lines, truncate(cur, size, width))
+	return append(lines, truncate(strings.Join(words[start:], " "), size, width))
 }
 
 // truncate shortens s with "…" so that it fits width.
@@ -684,11 +686,15 @@ func truncate(s string, size, width float64) string {
 	if textWidth(s, size) <= width {
 		return s
 	}
-	r := []rune(s)
-	for len(r) > 0 && textWidth(string(r)+"…", size) > width {
-		r = r[:len(r)-1]
+	limit := width - textWidth("…", size)
+	w := 0.0
+	for i, r := range s {
+		w += textWidth(string(r), size)
+		if w > limit {
+			return s[:i] + "…"
+		}
 	}
-	return string(r) + "…"
+	return s
 }
 
 // Placeholder returns a small SVG of the same width as a chart that shows

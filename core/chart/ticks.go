@@ -118,7 +118,32 @@ func (t Ticks) Label(v float64, comma bool) string {
 	if math.Abs(v) < t.Step*1e-9 {
 		v = 0
 	}
+	big := math.Max(math.Abs(t.Lo), math.Abs(t.Hi))
+	if big >= 1e9 || t.Decimals > 9 {
+		// Too many digits for fixed notation: exponent notation with as many
+		// digits as tell neighbouring ticks apart.
+		sig := int(math.Ceil(math.Log10(big/t.Step))) + 1
+		sig = min(max(sig, 1), 17)
+		return localize(strconv.FormatFloat(v, 'e', sig-1, 64), comma)
+	}
 	return formatFixed(v, t.Decimals, comma)
+}
+
+// localize puts a true minus sign (U+2212) and, if comma is set, a decimal
+// comma into a number printed by strconv.
+func localize(s string, comma bool) string {
+	b := make([]byte, 0, len(s)+2)
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; {
+		case c == '-':
+			b = append(b, "−"...)
+		case c == '.' && comma:
+			b = append(b, ',')
+		default:
+			b = append(b, c)
+		}
+	}
+	return string(b)
 }
 
 // formatFixed prints v with dec decimals, "−" (U+2212) for negatives and an
@@ -127,24 +152,14 @@ func formatFixed(v float64, dec int, comma bool) string {
 	if !finite(v) {
 		return "—"
 	}
+	if math.Abs(v) >= 1e15 || dec > 15 {
+		return localize(strconv.FormatFloat(v, 'g', 6, 64), comma)
+	}
 	s := strconv.FormatFloat(v, 'f', dec, 64)
-	if s[0] == '-' {
-		if allZero(s[1:]) {
-			s = s[1:]
-		} else {
-			s = "−" + s[1:]
-		}
+	if s[0] == '-' && allZero(s[1:]) {
+		s = s[1:]
 	}
-	if comma {
-		b := []byte(s)
-		for i, c := range b {
-			if c == '.' {
-				b[i] = ','
-			}
-		}
-		s = string(b)
-	}
-	return s
+	return localize(s, comma)
 }
 
 // formatSig prints v with about sig significant digits, without exponent
@@ -170,7 +185,7 @@ func formatSig(v float64, sig int, comma bool) string {
 // for numbers inside labels ("4 °C", "32.6 °C").
 func formatShort(v float64, sig int, comma bool) string {
 	s := formatSig(v, sig, comma)
-	if strings.ContainsAny(s, ".,") {
+	if strings.ContainsAny(s, ".,") && !strings.ContainsRune(s, 'e') {
 		s = strings.TrimRight(s, "0")
 		s = strings.TrimRight(s, ".,")
 	}

@@ -41,14 +41,14 @@ func TestNiceTicks(t *testing.T) {
 			t.Errorf("NiceTicks(%v, %v, %d) refused", tc.min, tc.max, tc.n)
 			continue
 		}
-		if !close(got.Lo, tc.lo) || !close(got.Hi, tc.hi) || !close(got.Step, tc.step) || got.Decimals != tc.dec {
+		if !near(got.Lo, tc.lo) || !near(got.Hi, tc.hi) || !near(got.Step, tc.step) || got.Decimals != tc.dec {
 			t.Errorf("NiceTicks(%v, %v, %d) = %+v, want lo %v hi %v step %v decimals %d",
 				tc.min, tc.max, tc.n, got, tc.lo, tc.hi, tc.step, tc.dec)
 		}
 	}
 }
 
-func close(a, b float64) bool { return math.Abs(a-b) <= tickTol*math.Max(1, math.Abs(b)) }
+func near(a, b float64) bool { return math.Abs(a-b) <= tickTol*math.Max(1, math.Abs(b)) }
 
 func TestNiceTicksRefuses(t *testing.T) {
 	for _, tc := range []struct{ min, max float64 }{
@@ -126,5 +126,33 @@ func TestLabel(t *testing.T) {
 			t.Errorf("labels for 0..0.7 = %q, want %q", got, want)
 			break
 		}
+	}
+}
+
+func TestFormatExtremes(t *testing.T) {
+	for _, tc := range []struct {
+		v    float64
+		sig  int
+		want string
+	}{
+		{1.5e20, 3, "1.5e+20"}, // exponent notation keeps its zeros
+		{-2.5e300, 3, "−2.5e+300"},
+		{4, 3, "4"},
+		{32.60, 3, "32.6"},
+		{0.000123, 3, "0.000123"},
+	} {
+		if got := formatShort(tc.v, tc.sig, false); got != tc.want {
+			t.Errorf("formatShort(%v, %d) = %q, want %q", tc.v, tc.sig, got, tc.want)
+		}
+	}
+	// A billion-scale axis prints in exponent notation, every label distinct.
+	tk, _ := NiceTicks(1e9, 1.00001e9, 6)
+	seen := map[string]bool{}
+	for _, v := range tk.Values() {
+		l := tk.Label(v, false)
+		if len(l) > 12 || seen[l] {
+			t.Errorf("label %q of the axis %+v is long or repeated", l, tk)
+		}
+		seen[l] = true
 	}
 }
