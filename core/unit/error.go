@@ -22,5 +22,5 @@ func (e *FieldError) Error() string {
 
 // NumberError is a short way to build a *FieldError for a number the program already holds.
 func NumberError(field string, v float64, allowed string) *FieldError {
-	return &FieldError{Field: field, Value: FormatNumber(v, 6), Allowed: allowed}
+	return &FieldError{Field: field, Value: FormatCompact(v, 6), Allowed: allowed}
 }

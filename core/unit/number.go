@@ -4,9 +4,14 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 )
 
-const noThousands = "a number without thousands separators, with one decimal point or comma (e.g. 1234,5 or 1234.5)"
+const (
+	noThousands = "a number without thousands separators, with one decimal point or comma (e.g. 1234,5 or 1234.5)"
+	noUnit      = "a number without its unit (the unit is given by the field)"
+)
 
 // ParseNumber reads a number as a person types it. See the package documentation for what is
 // accepted. The error, if any, is a *FieldError for field.
@@ -29,53 +34,50 @@ func ParseNumber(field, text string) (float64, error) {
 		b.WriteByte(s[0])
 		i++
 	}
-	digits, seps := 0, 0
-	for ; i < len(s); i++ {
+	digits, seps, expDigits, inExp := 0, 0, 0, false
+	for i < len(s) {
 		c := s[i]
 		switch {
 		case c >= '0' && c <= '9':
-			digits++
+			if inExp {
+				expDigits++
+			} else {
+				digits++
+			}
 			b.WriteByte(c)
+			i++
 			continue
-		case c == '.' || c == ',':
+		case (c == '.' || c == ',') && !inExp:
 			if seps > 0 {
 				return bad(noThousands)
 			}
 			seps++
 			b.WriteByte('.')
+			i++
 			continue
-		case c == 'e' || c == 'E':
-			if digits == 0 {
-				return bad("a number")
-			}
+		case (c == 'e' || c == 'E') && !inExp && digits > 0 && i+1 < len(s) && (isDigit(s[i+1]) ||
+			(s[i+1] == '+' || s[i+1] == '-') && i+2 < len(s) && isDigit(s[i+2])):
+			inExp = true
 			b.WriteByte('e')
 			i++
-			if i < len(s) && (s[i] == '+' || s[i] == '-') {
+			if s[i] == '+' || s[i] == '-' {
 				b.WriteByte(s[i])
 				i++
 			}
-			exp := 0
-			for ; i < len(s); i++ {
-				if s[i] < '0' || s[i] > '9' {
-					if isGroupSep(s[i]) {
-						return bad(noThousands)
-					}
-					return bad("a number")
-				}
-				exp++
-				b.WriteByte(s[i])
-			}
-			if exp == 0 {
-				return bad("a number with digits after the exponent (e.g. 1e3)")
-			}
-		case isGroupSep(c):
-			return bad(noThousands)
-		default:
-			return bad("a number")
+			continue
 		}
-		break
+		// Not part of a number: say why in the most useful way.
+		r, size := utf8.DecodeRuneInString(s[i:])
+		rest := strings.TrimLeftFunc(s[i+size:], unicode.IsSpace)
+		switch {
+		case digits > 0 && isGroupSep(r) && rest != "" && isDigit(rest[0]):
+			return bad(noThousands)
+		case digits > 0 && (unicode.IsSpace(r) || unicode.IsLetter(r) || strings.ContainsRune("°%‰µ", r)):
+			return bad(noUnit)
+		}
+		return bad("a number")
 	}
-	if digits == 0 {
+	if digits == 0 || (inExp && expDigits == 0) {
 		return bad("a number")
 	}
 	v, err := strconv.ParseFloat(b.String(), 64)
@@ -92,14 +94,17 @@ func ParseNumber(field, text string) (float64, error) {
 	return v, nil
 }
 
-// isGroupSep reports bytes that start a digit-group separator: spaces of every kind
-// (including the UTF-8 lead bytes of no-break and thin spaces), apostrophes and underscores.
-func isGroupSep(c byte) bool {
-	switch c {
-	case ' ', '\t', '\'', '_', 0xC2, 0xE2:
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// isGroupSep reports characters used to group digits: spaces of every kind (including the
+// no-break U+00A0, figure U+2007, thin U+2009 and narrow no-break U+202F spaces), apostrophes
+// and underscores.
+func isGroupSep(r rune) bool {
+	switch r {
+	case '\'', '’', '_', '\u00a0', '\u2007', '\u2009', '\u202f':
 		return true
 	}
-	return false
+	return unicode.IsSpace(r)
 }
 
 // FormatNumber prints v rounded to sig significant figures (1 to 15) in plain decimal
