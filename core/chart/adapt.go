@@ -87,6 +87,9 @@ func PlanView(r *balance.Result, o Options) (SolubilityView, error) {
 			outside = true
 		}
 	}
+	if len(r.Cautions) > 0 {
+		v.Notes = append(v.Notes, "Cautions apply to this batch: read them with the results, the SDS and your local rules.")
+	}
 	if outside {
 		v.Notes = append(v.Notes, "Part of the batch lies outside the curve's data ("+
 			formatTemp(o.Temp.FromCelsius(lo), o.DecimalComma)+" to "+

@@ -145,6 +145,13 @@ func TestPlanSVG(t *testing.T) {
 	if len(v.Notes) != 1 || !strings.Contains(v.Notes[0], "extrapolated") {
 		t.Errorf("notes = %q, want a note on extrapolation", v.Notes)
 	}
+	// A batch with cautions says so on the chart, which may be printed or
+	// passed on without the results beside it.
+	r.Cautions = []string{"hot liquid (invented)"}
+	v, _ = PlanView(r, Options{})
+	if !strings.Contains(strings.Join(v.Notes, " "), "SDS") {
+		t.Errorf("notes = %q, want a pointer to the cautions and the SDS", v.Notes)
+	}
 	// The compound alone, before planning, and nothing at all.
 	if svg := SolubilitySVG(lookup(t, "Na2SO4"), nil, Options{Temp: Kelvin}); !strings.Contains(svg, "Na2SO4·10H2O") {
 		t.Errorf("compound chart lacks the decahydrate")

@@ -233,7 +233,7 @@ func (l *layout) draw(w *svgWriter) {
 	}
 	for i := range c.Markers {
 		m := c.Markers[i]
-		l.drawMarker(w, m.Shape, i, l.px(m.X), l.py(m.Y))
+		l.drawMarker(w, m.Shape, l.px(m.X), l.py(m.Y))
 	}
 	l.drawLegend(w)
 	for i, n := range c.Notes {
@@ -460,10 +460,10 @@ func (l *layout) along(pts []Point, d float64) (x, y, ux, uy float64) {
 	return l.px(pts[0].X), l.py(pts[0].Y), 1, 0
 }
 
-// drawMarker draws the symbol of marker number ord at (x, y) in SVG units.
+// drawMarker draws the symbol of shape at (x, y) in SVG units.
 // Filled symbols have a white rim so they stand out on top of lines.
-func (l *layout) drawMarker(w *svgWriter, shape Shape, ord int, x, y float64) {
-	col := markerColours[ord%len(markerColours)]
+func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
+	col := markerColours[shape]
 	r := markerSize
 	switch shape {
 	case Circle:
@@ -581,7 +581,7 @@ func (l *layout) drawLegend(w *svgWriter) {
 			w.attr("y2", cy-10)
 			w.s("/>")
 		case 2:
-			l.drawMarker(w, it.shape, it.ord, it.x+legendSwW/2, cy)
+			l.drawMarker(w, it.shape, it.x+legendSwW/2, cy)
 		}
 		w.s(`<text`)
 		w.attr("x", it.x+legendSwW+8)

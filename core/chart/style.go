@@ -17,9 +17,17 @@ const grey = "#5E5E5E"
 // chart's natural size); "" is a solid line.
 var curveDashes = [...]string{"", "14 6", "14 5 3 5", "6 5", "2 5"}
 
-// markerColours start from vermilion so that the first marker differs from
-// the first (blue) curve.
-var markerColours = [...]string{"#C24E00", "#007D5A", "#A8548A", "#0072B2", ink}
+// markerColours gives each Shape its own colour, so a kind of point looks
+// the same on every chart (the dissolve point is always a vermilion
+// diamond, the end point always a near-black square).
+var markerColours = [numShapes]string{
+	Circle:       "#007D5A",
+	Square:       ink,
+	Diamond:      "#C24E00",
+	TriangleUp:   "#A8548A",
+	TriangleDown: "#0072B2",
+	Cross:        ink,
+}
 
 // Sizes at the chart's natural width of 768 px.
 const (
