@@ -27,9 +27,11 @@ var kno3 = []Point{
 }
 
 // na2so4 is the solubility of sodium sulfate (anhydrous basis, g per 100 g
-// water): decahydrate below 32.38 °C, anhydrous above. 10 °C and 20 °C are
-// the secondary compilation (Perry's/Seidell via the Wikipedia "Solubility
-// table"); 20–100 °C are the CRC Handbook, 98th ed., same table as kno3.
+// water): decahydrate below 32.38 °C, anhydrous above. 0 and 10 °C are the
+// secondary compilation (Perry's/Seidell, as in the Wikipedia "Solubility
+// table"), since the CRC table is blank there; 20, 25, 30 and 40–100 °C are
+// the CRC Handbook, 98th ed., same table as kno3; 49.7 at the 32.38 °C
+// transition is (from memory).
 var (
 	na2so4Deca = []Point{{0, 4.9}, {10, 9.1}, {20, 19.23}, {25, 28.11}, {30, 41.28}, {32.38, 49.7}}
 	na2so4Anh  = []Point{{32.38, 49.7}, {40, 47.82}, {50, 46.09}, {60, 44.72}, {80, 42.90}, {100, 42.19}}
