@@ -12,7 +12,8 @@
 // Units: solubility is grams of anhydrous solute per 100 g of solvent (water unless a solvent
 // molar mass is given); temperatures are °C in names and values; T in the laws is in kelvin.
 // The mole fraction counts formula units of the solute, not ions. Conversions to mass percent,
-// mole fraction, molality, g/L and mol/L (which need the solution density) are in convert.go.
+// mole fraction, molality, g/L and mol/L (the last two need the solution density) are done by
+// Convert, which checks its inputs, and by plain helpers such as MassPercent.
 //
 // Valid range: Curve.At answers inside [MinC, MaxC]; within WarnMarginK outside it the value
 // is extrapolated (a table continues with its end slope in ln x vs 1/T, which is the van 't

@@ -14,6 +14,7 @@
 // System of Units", appendix B. Degrees Celsius and Fahrenheit are offset scales, so they are
 // converted by functions, never by multiplying with a factor.
 //
-// FormatNumber prints a value for a person, rounded to significant figures; it never prints
-// NaN or Inf (it prints "—" instead).
+// FormatNumber prints a value for a person, rounded to significant figures; FormatCompact does
+// the same without trailing zeros, for numbers inside sentences. Neither ever prints NaN or Inf
+// (they print "—" instead).
 package unit

@@ -124,6 +124,13 @@ func FormatNumber(v float64, sig int) string {
 	}
 	exp := int(math.Floor(math.Log10(a)))
 	dec := sig - 1 - exp
+	// Rounding can carry into a new leading digit (99.96 → 100.0); keep sig digits then.
+	if dec > 0 && dec < 16 {
+		p := math.Pow(10, float64(dec))
+		if math.Abs(math.Round(a*p)/p) >= math.Pow(10, float64(exp+1)) {
+			dec--
+		}
+	}
 	if dec < 0 {
 		p := math.Pow(10, float64(-dec))
 		v = math.Round(v/p) * p

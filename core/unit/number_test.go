@@ -114,6 +114,8 @@ func TestFormatNumber(t *testing.T) {
 		{math.Inf(1), 3, "—"},
 		{math.Inf(-1), 3, "—"},
 		{2, 0, "2"},
+		{99.96, 3, "100"},
+		{0.09996, 3, "0.100"},
 	}
 	for _, tt := range tests {
 		if got := FormatNumber(tt.v, tt.sig); got != tt.want {
