@@ -77,43 +77,50 @@ func Onset(c *compound.Compound, g100, fromC, toC float64) (tempC float64, ok bo
 		}
 		prevG = math.Abs(prevG)
 	}
-	for _, t := range steps(c, fromC, toC) {
+	root, found := 0.0, false
+	eachStep(c, fromC, toC, func(t float64) bool {
 		gt := g(t)
 		if gt < 0 {
-			return refine(g, t, gt, prevT, prevG), true
+			root, found = refine(g, t, gt, prevT, prevG), true
+			return false
 		}
 		prevT, prevG = t, gt
+		return true
+	})
+	if found {
+		return root, true
 	}
 	return 0, false
 }
 
-// steps lists temperatures from fromC (excluded) to toC (included), at most scanStepK
-// apart, with every segment boundary in between.
-func steps(c *compound.Compound, fromC, toC float64) []float64 {
-	lo, hi := math.Min(fromC, toC), math.Max(fromC, toC)
-	out := make([]float64, 0, 48)
-	var cuts []float64
-	for i := 1; i < len(c.Segments); i++ {
-		if b := c.Segments[i].MinC; b > lo && b < hi {
-			cuts = append(cuts, b)
-		}
-	}
-	// Walk the pieces between cuts in path order.
-	pts := append([]float64{lo}, cuts...)
-	pts = append(pts, hi)
+// eachStep calls fn with temperatures from fromC (excluded) to toC (included), at most
+// scanStepK apart, with every segment boundary in between, until fn returns false.
+func eachStep(c *compound.Compound, fromC, toC float64, fn func(t float64) bool) {
+	dir := 1.0
 	if toC < fromC {
-		for i, j := 0, len(pts)-1; i < j; i, j = i+1, j-1 {
-			pts[i], pts[j] = pts[j], pts[i]
-		}
+		dir = -1
 	}
-	for i := 1; i < len(pts); i++ {
-		a, b := pts[i-1], pts[i]
+	a := fromC
+	for a != toC {
+		// The next cut: the nearest segment boundary strictly beyond a, or toC.
+		b := toC
+		for i := 1; i < len(c.Segments); i++ {
+			if m := c.Segments[i].MinC; (m-a)*dir > 0 && (b-m)*dir > 0 {
+				b = m
+			}
+		}
 		n := int(math.Ceil(math.Abs(b-a) / scanStepK))
 		for k := 1; k <= n; k++ {
-			out = append(out, a+(b-a)*float64(k)/float64(n))
+			t := a + (b-a)*float64(k)/float64(n)
+			if k == n {
+				t = b
+			}
+			if !fn(t) {
+				return
+			}
 		}
+		a = b
 	}
-	return out
 }
 
 // refine finds the root of g between a (g(a) = ga < 0) and b (g(b) = gb ≥ 0) by the
@@ -156,7 +163,7 @@ func lowestSolubility(c *compound.Compound, loC, hiC float64) float64 {
 	m, _ := solAt(c, hiC)
 	v, _ := solAt(c, loC)
 	m = math.Min(m, v)
-	for _, t := range steps(c, loC, hiC) {
+	eachStep(c, loC, hiC, func(t float64) bool {
 		v, _ := solAt(c, t)
 		m = math.Min(m, v)
 		// Both phases meet at a boundary; take the colder phase's value too.
@@ -165,6 +172,7 @@ func lowestSolubility(c *compound.Compound, loC, hiC float64) float64 {
 				m = math.Min(m, c.Segments[i-1].Curve.Model.Value(t))
 			}
 		}
-	}
+		return true
+	})
 	return m
 }

@@ -175,7 +175,8 @@ func Plan(b Batch) (Result, error) {
 	if res.MinWaterG == 0 {
 		warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
 	}
-	res.Path = append(res.Path, PathPoint{Label: "dissolve", TempC: b.DissolveTempC, G100: conc})
+	res.Path = make([]PathPoint, 1, 6)
+	res.Path[0] = PathPoint{Label: "dissolve", TempC: b.DissolveTempC, G100: conc}
 
 	// Direction of travel and the saturation (onset) temperature.
 	minC, maxC := c.Range()
@@ -280,7 +281,8 @@ func Plan(b Batch) (Result, error) {
 	}
 	if res.HasOnset && !heating && hasEnd && endC < res.SaturationTempC {
 		on := res.SaturationTempC
-		res.Supersaturation = append(res.Supersaturation, SupersaturationPoint{TempC: on, Ratio: 1, DeltaG: 0})
+		res.Supersaturation = make([]SupersaturationPoint, 1, pathPoints+1)
+		res.Supersaturation[0] = SupersaturationPoint{TempC: on, Ratio: 1, DeltaG: 0}
 		for i := 1; i <= pathPoints; i++ {
 			t := on - (on-endC)*float64(i)/pathPoints
 			s, _ := solAt(c, t)
@@ -323,6 +325,7 @@ func Plan(b Batch) (Result, error) {
 		if b.CoolingTimeMin > 0 && res.SeedHintC > b.TargetC {
 			res.ProgrammeFromC, res.ProgrammeToC = res.SeedHintC, b.TargetC
 			t0, tf := res.SeedHintC, b.TargetC
+			res.Programme = make([]ProgrammeStep, 0, programmeRows+1)
 			for i := 0; i <= programmeRows; i++ {
 				u := float64(i) / programmeRows
 				res.Programme = append(res.Programme, ProgrammeStep{
