@@ -39,9 +39,11 @@ func MolarMass(formula string) (float64, bool) {
 	return total, total > 0
 }
 
-func normalizeDots(s string) string {
-	return strings.NewReplacer("·", "·", ".", "·", "*", "·", "•", "·", "∙", "·", "⋅", "·").Replace(s)
-}
+// dots maps every way of typing the hydrate dot to '·'. Built once: a Replacer is costly to
+// build and Form/Lookup call normalizeDots on every plan.
+var dots = strings.NewReplacer("·", "·", ".", "·", "*", "·", "•", "·", "∙", "·", "⋅", "·")
+
+func normalizeDots(s string) string { return dots.Replace(s) }
 
 // leadingInt splits "12H2O" into 12 and "H2O"; no number means 1.
 func leadingInt(s string) (int, string) {
