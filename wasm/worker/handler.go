@@ -1,0 +1,378 @@
+package main
+
+import (
+	"errors"
+	"io"
+	"net/http"
+	"strconv"
+	"strings"
+	"unicode/utf8"
+
+	"saltcast/core/service"
+	"saltcast/core/unit"
+	"saltcast/core/wire"
+)
+
+// MaxBodyBytes is the largest request body the API reads; a larger one is answered 413.
+// 64 KiB holds any recipe many times over and is the limit core/wire applies to JSON too.
+const MaxBodyBytes = 64 << 10
+
+// Options say what a handler serves besides the API.
+type Options struct {
+	// Page is the single-file app served at GET /. Empty: a page saying the app was not built.
+	Page []byte
+
+	// WritePage, when set, writes the body of GET / itself and reports whether it did; the
+	// worker uses it to hand the runtime its own copy of the page instead of streaming Page
+	// through Go. Page is still needed: the Content-Security-Policy hashes its scripts.
+	WritePage func(w http.ResponseWriter) bool
+
+	// AllowOrigin is the one origin ("https://records.example") whose web pages may call the
+	// API from a browser, or "*" for any origin. Empty: CORS is off and browsers block such
+	// calls (other clients are not affected: CORS binds browsers only).
+	AllowOrigin string
+}
+
+// handler routes the HTTP API onto core/service. It holds no state between requests.
+type handler struct {
+	opt       Options
+	page      []byte
+	pageCSP   string
+	routes    map[string]route
+	openapi   []byte
+	allowCORS func(origin string) bool
+}
+
+// route is one path of the API: the methods it answers and what answers them.
+type route struct {
+	methods string // for the Allow header, e.g. "GET, HEAD"
+	serve   func(r *http.Request) ([]byte, error)
+}
+
+// NewHandler returns the worker's HTTP handler.
+func NewHandler(opt Options) http.Handler {
+	h := &handler{opt: opt, page: opt.Page, openapi: openAPI}
+	if len(h.page) == 0 {
+		h.page = []byte(placeholderPage)
+	}
+	h.pageCSP = pageCSP(h.page)
+	h.allowCORS = func(origin string) bool {
+		return opt.AllowOrigin != "" && (opt.AllowOrigin == "*" || origin == opt.AllowOrigin)
+	}
+	h.routes = map[string]route{
+		"/api/v1/plan":         {"POST", h.plan},
+		"/api/v1/solubility":   {"GET, HEAD", h.query(service.Solubility)},
+		"/api/v1/gas":          {"GET, HEAD, POST", h.gas},
+		"/api/v1/gas/outgas":   {"GET, HEAD", h.query(service.Outgas)},
+		"/api/v1/gas/table":    {"GET, HEAD", h.query(service.GasTable)},
+		"/api/v1/compounds":    {"GET, HEAD", func(*http.Request) ([]byte, error) { return service.Compounds(), nil }},
+		"/api/v1/openapi.json": {"GET, HEAD", func(*http.Request) ([]byte, error) { return h.openapi, nil }},
+	}
+	return h
+}
+
+func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
+	defer func() {
+		// A panic here is a bug, never the user's fault; the tests assert none happens.
+		if v := recover(); v != nil {
+			if v == http.ErrAbortHandler {
+				panic(v)
+			}
+			println("saltcast worker: panic serving", r.Method, r.URL.Path+":", panicText(v))
+			writeJSON(w, http.StatusInternalServerError,
+				service.ErrorJSON(errors.New("internal error in the Saltcast worker; the request was not the cause")))
+		}
+	}()
+	hdr := w.Header()
+	hdr.Set("X-Content-Type-Options", "nosniff")
+	hdr.Set("Referrer-Policy", "no-referrer")
+
+	if r.URL.Path == "/" {
+		h.servePage(w, r)
+		return
+	}
+	rt, ok := h.routes[r.URL.Path]
+	if !ok {
+		writeError(w, http.StatusNotFound, errors.New("no such address: "+r.URL.Path+
+			"; the API is described at /api/v1/openapi.json"))
+		return
+	}
+	origin := r.Header.Get("Origin")
+	cors := origin != "" && h.allowCORS(origin)
+	if cors {
+		if h.opt.AllowOrigin == "*" {
+			hdr.Set("Access-Control-Allow-Origin", "*")
+		} else {
+			hdr.Set("Access-Control-Allow-Origin", origin)
+			hdr.Add("Vary", "Origin")
+		}
+	}
+	if r.Method == http.MethodOptions {
+		// A CORS preflight, or a client asking what the address allows.
+		hdr.Set("Allow", rt.methods+", OPTIONS")
+		if cors {
+			hdr.Set("Access-Control-Allow-Methods", rt.methods)
+			hdr.Set("Access-Control-Allow-Headers", "Content-Type")
+			hdr.Set("Access-Control-Max-Age", "86400")
+		}
+		w.WriteHeader(http.StatusNoContent)
+		return
+	}
+	if !allows(rt.methods, r.Method) {
+		hdr.Set("Allow", rt.methods+", OPTIONS")
+		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+			" is not allowed at "+r.URL.Path+"; allowed: "+rt.methods))
+		return
+	}
+	body, err := rt.serve(r)
+	if err != nil {
+		writeError(w, statusOf(err), err)
+		return
+	}
+	hdr.Set("Cache-Control", "no-store")
+	writeJSON(w, http.StatusOK, body)
+}
+
+// servePage answers GET / with the single-file app and the headers that fence it in.
+func (h *handler) servePage(w http.ResponseWriter, r *http.Request) {
+	hdr := w.Header()
+	if r.Method != http.MethodGet && r.Method != http.MethodHead {
+		hdr.Set("Allow", "GET, HEAD")
+		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+			" is not allowed at /; allowed: GET, HEAD"))
+		return
+	}
+	hdr.Set("Content-Type", "text/html; charset=utf-8")
+	hdr.Set("Content-Security-Policy", h.pageCSP)
+	hdr.Set("Cache-Control", "no-cache")
+	if r.Method == http.MethodHead {
+		hdr.Set("Content-Length", strconv.Itoa(len(h.page)))
+		w.WriteHeader(http.StatusOK)
+		return
+	}
+	if h.opt.WritePage != nil && len(h.opt.Page) > 0 && h.opt.WritePage(w) {
+		return
+	}
+	hdr.Set("Content-Length", strconv.Itoa(len(h.page)))
+	w.WriteHeader(http.StatusOK)
+	w.Write(h.page)
+}
+
+// plan answers POST /api/v1/plan: a recipe in, the plan out.
+func (h *handler) plan(r *http.Request) ([]byte, error) {
+	body, err := readBody(r)
+	if err != nil {
+		return nil, err
+	}
+	return service.Plan(body)
+}
+
+// query adapts a service call that takes the query string's parameters.
+func (h *handler) query(call func(service.Params) ([]byte, error)) func(*http.Request) ([]byte, error) {
+	return func(r *http.Request) ([]byte, error) {
+		p, err := parseQuery(r.URL.RawQuery)
+		if err != nil {
+			return nil, err
+		}
+		return call(p)
+	}
+}
+
+// gas answers GET /api/v1/gas?… and POST /api/v1/gas with the same keys in a JSON object.
+func (h *handler) gas(r *http.Request) ([]byte, error) {
+	if r.Method != http.MethodPost {
+		return h.query(service.Gas)(r)
+	}
+	body, err := readBody(r)
+	if err != nil {
+		return nil, err
+	}
+	p, err := bodyParams(body)
+	if err != nil {
+		return nil, err
+	}
+	return service.Gas(p)
+}
+
+// errBodyTooLarge marks a body over MaxBodyBytes (413).
+var errBodyTooLarge = errors.New("the request body is larger than " + strconv.Itoa(MaxBodyBytes) +
+	" bytes; send one recipe of at most 64 KiB")
+
+// errMediaType marks a body that is not declared as JSON (415).
+var errMediaType = errors.New("the request body must be JSON: send Content-Type: application/json")
+
+// readBody reads a JSON request body of at most MaxBodyBytes.
+func readBody(r *http.Request) ([]byte, error) {
+	if ct := r.Header.Get("Content-Type"); ct != "" {
+		mt, _, _ := strings.Cut(ct, ";")
+		if !strings.EqualFold(strings.TrimSpace(mt), "application/json") {
+			return nil, errMediaType
+		}
+	}
+	if r.ContentLength > MaxBodyBytes {
+		return nil, errBodyTooLarge
+	}
+	if r.Body == nil {
+		return nil, &unit.FieldError{Field: "body", Value: "", Allowed: "a JSON object"}
+	}
+	body, err := io.ReadAll(io.LimitReader(r.Body, MaxBodyBytes+1))
+	if err != nil {
+		return nil, &unit.FieldError{Field: "body", Value: "(unreadable)", Allowed: "a JSON object"}
+	}
+	if len(body) > MaxBodyBytes {
+		return nil, errBodyTooLarge
+	}
+	return body, nil
+}
+
+// parseQuery decodes a query string strictly: every key once, valid percent-escapes.
+func parseQuery(raw string) (service.Params, error) {
+	p := service.Params{}
+	for raw != "" {
+		var pair string
+		pair, raw, _ = strings.Cut(raw, "&")
+		if pair == "" {
+			continue
+		}
+		k, v, _ := strings.Cut(pair, "=")
+		key, err := unescape(k)
+		if err != nil {
+			return nil, &unit.FieldError{Field: "query", Value: k, Allowed: "percent-escaped UTF-8 (%XX)"}
+		}
+		val, err := unescape(v)
+		if err != nil {
+			return nil, &unit.FieldError{Field: key, Value: v, Allowed: "percent-escaped UTF-8 (%XX)"}
+		}
+		if _, dup := p[key]; dup {
+			return nil, &unit.FieldError{Field: key, Value: val, Allowed: "the parameter once"}
+		}
+		p[key] = val
+	}
+	return p, nil
+}
+
+// unescape decodes one query component ('+' is a space, %XX a byte) and requires UTF-8.
+func unescape(s string) (string, error) {
+	if !strings.ContainsAny(s, "%+") {
+		if !utf8.ValidString(s) {
+			return "", errBadEscape
+		}
+		return s, nil
+	}
+	b := make([]byte, 0, len(s))
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; c {
+		case '+':
+			b = append(b, ' ')
+		case '%':
+			if i+2 >= len(s) {
+				return "", errBadEscape
+			}
+			hi, lo := unhex(s[i+1]), unhex(s[i+2])
+			if hi < 0 || lo < 0 {
+				return "", errBadEscape
+			}
+			b = append(b, byte(hi<<4|lo))
+			i += 2
+		default:
+			b = append(b, c)
+		}
+	}
+	if !utf8.ValidString(string(b)) {
+		return "", errBadEscape
+	}
+	return string(b), nil
+}
+
+var errBadEscape = errors.New("bad escape")
+
+func unhex(c byte) int {
+	switch {
+	case '0' <= c && c <= '9':
+		return int(c - '0')
+	case 'a' <= c && c <= 'f':
+		return int(c - 'a' + 10)
+	case 'A' <= c && c <= 'F':
+		return int(c - 'A' + 10)
+	}
+	return -1
+}
+
+// bodyParams reads a JSON object of the query's keys; values are numbers or strings.
+func bodyParams(body []byte) (service.Params, error) {
+	v, err := wire.DecodeLimits(body, wire.Limits{MaxBytes: MaxBodyBytes, MaxDepth: 2})
+	if err != nil {
+		return nil, err
+	}
+	if v.Kind != wire.Object {
+		return nil, &unit.FieldError{Field: "body", Value: v.Kind.String(), Allowed: "a JSON object of parameters"}
+	}
+	p := make(service.Params, len(v.Members))
+	for _, m := range v.Members {
+		switch m.Value.Kind {
+		case wire.Number, wire.String:
+			p[m.Key] = m.Value.Text
+		default:
+			return nil, &unit.FieldError{Field: m.Key, Value: m.Value.Kind.String(), Allowed: "a number or a string"}
+		}
+	}
+	return p, nil
+}
+
+// statusOf maps an error from the glue or core/service to an HTTP status. Only an error that
+// is neither the user's (IsInputError) nor the glue's own is a 500.
+func statusOf(err error) int {
+	var syn *wire.SyntaxError
+	switch {
+	case errors.Is(err, errBodyTooLarge):
+		return http.StatusRequestEntityTooLarge
+	case errors.Is(err, errMediaType):
+		return http.StatusUnsupportedMediaType
+	case errors.As(err, &syn), service.IsInputError(err):
+		return http.StatusBadRequest
+	}
+	var fe *unit.FieldError
+	if errors.As(err, &fe) {
+		return http.StatusBadRequest
+	}
+	return http.StatusInternalServerError
+}
+
+func writeError(w http.ResponseWriter, status int, err error) {
+	w.Header().Set("Cache-Control", "no-store")
+	writeJSON(w, status, service.ErrorJSON(err))
+}
+
+func writeJSON(w http.ResponseWriter, status int, body []byte) {
+	hdr := w.Header()
+	hdr.Set("Content-Type", "application/json")
+	hdr.Set("Content-Length", strconv.Itoa(len(body)))
+	w.WriteHeader(status)
+	w.Write(body)
+}
+
+// allows reports whether methods ("GET, HEAD") lists method.
+func allows(methods, method string) bool {
+	for m := range strings.SplitSeq(methods, ", ") {
+		if m == method {
+			return true
+		}
+	}
+	return false
+}
+
+func panicText(v any) string {
+	switch v := v.(type) {
+	case error:
+		return v.Error()
+	case string:
+		return v
+	}
+	return "(a value that is not an error)"
+}
+
+const placeholderPage = `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><title>Saltcast: app not built</title></head>
+<body><h1>Saltcast</h1><p>The single-file app was not built into this worker. Run
+<code>make build worker</code> and deploy again. The JSON API under /api/v1/ works.</p></body></html>
+`
