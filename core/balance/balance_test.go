@@ -327,6 +327,10 @@ func TestRefusals(t *testing.T) {
 		// The trihydrate holds 151.8 g acetate per 100 g of its own water (reference §3);
 		// saturation at 100 °C (169.5, CRC 98th) cannot be reached by charging it.
 		{"hydrate richer target than itself", Batch{Compound: ac, Form: tri, WaterG: 100, DissolveTempC: 100}, "saturation_pct"},
+		// 97 % of saturation at 95 °C (CRC 98th: ≈164 g/100 g) is richer than the trihydrate
+		// itself (151.8): at 14 °C the whole batch would set solid.
+		{"batch sets solid", Batch{Compound: ac, WaterG: 100, DissolveTempC: 95, SaturationPct: 97, HasTarget: true, TargetC: 14}, "saturation_pct"},
+		{"sets solid by evaporation", Batch{Compound: ac, WaterG: 100, DissolveTempC: 60, SaturationPct: 80, HasTarget: true, TargetC: 14, EvaporatedWaterG: 40}, "evaporated_water_g"},
 		{"clear down above dissolving", Batch{Compound: kno3, WaterG: 100, DissolveTempC: 20, HasClearDown: true, ClearDownToC: 30}, "clear_down_to_C"},
 	}
 	for _, tt := range tests {

@@ -223,8 +223,7 @@ func Plan(b Batch) (Result, error) {
 		}
 		k, ok := CrashAt(segT.Form, sT, S, Wt-b.EvaporatedWaterG, b.TargetC)
 		if !ok {
-			return Result{}, unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
-				"less evaporation: what is left cannot hold "+segT.Form.Formula+" and its liquor at "+fmtC(b.TargetC))
+			return Result{}, setsSolid(b, segT.Form, form, p, S, Wt, sD)
 		}
 		res.HasTarget = true
 		res.TargetC = b.TargetC
@@ -393,6 +392,33 @@ func Plan(b Batch) (Result, error) {
 		return Result{}, err
 	}
 	return res, nil
+}
+
+// setsSolid explains a batch whose crystals at the target would take up all the water:
+// the liquor is at least as rich as the solid phase itself. It names evaporated_water_g when
+// the batch works without the evaporation, else the key that set the charge.
+func setsSolid(b Batch, phase, form *compound.Form, p, S, Wt, sD float64) error {
+	f := phase.AnhydrousFraction
+	limit := 100 * f / (1 - f) // g per 100 g water: the phase's own composition
+	why := " (" + phase.Formula + " holds " + unit.FormatCompact(limit, 4) + " g per 100 g of its own water; a richer batch sets solid at " + fmtC(b.TargetC) + ")"
+	if b.EvaporatedWaterG > 0 && 100*S/Wt < limit {
+		most := Wt - 100*S/limit
+		return unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
+			"less than "+unit.FormatCompact(most, 4)+" g of water evaporated"+why)
+	}
+	switch {
+	case b.ChargeG > 0:
+		most, _ := ChargeFor(form, p, b.WaterG, limit, "charge_g")
+		return unit.NumberError("charge_g", b.ChargeG, "a charge below "+unit.FormatCompact(most, 4)+" g"+why)
+	case b.HasClearDown:
+		return unit.NumberError("clear_down_to_C", b.ClearDownToC, "a lower storage temperature, so the charge stays below "+
+			unit.FormatCompact(limit, 4)+" g per 100 g water"+why)
+	}
+	q := b.SaturationPct
+	if q == 0 {
+		q = 100
+	}
+	return unit.NumberError("saturation_pct", q, "a saturation below "+unit.FormatCompact(100*limit/sD, 4)+" %"+why)
 }
 
 // Water freezes below 0 °C and boils above 100 °C at 101.325 kPa (99.97 °C on ITS-90,

@@ -6,11 +6,16 @@ import "saltcast/core/wire"
 // balance can weigh, coarse enough that the last digit is not noise.
 const sig = 6
 
+// resultSizeHint is about the size of a plan's JSON with its sources and cautions, so the
+// encoder allocates once.
+const resultSizeHint = 6 << 10
+
 // Encode writes the result as JSON with a fixed set of keys in a fixed order (see the
 // README's command-line section). A key that does not apply to this batch is null (for
 // instance crystals_g without cool_to_C), so scripts can rely on every key being present.
 func (res Result) Encode() []byte {
 	var e wire.Encoder
+	e.Grow(resultSizeHint)
 	res.encode(&e)
 	b, err := e.Bytes()
 	if err != nil {

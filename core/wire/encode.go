@@ -38,6 +38,16 @@ type frame struct {
 	key    bool // object: a key is written and waits for its value
 }
 
+// Grow makes room for n more bytes, so a writer that knows the size of its output
+// allocates once.
+func (e *Encoder) Grow(n int) {
+	if cap(e.buf)-len(e.buf) < n {
+		b := make([]byte, len(e.buf), len(e.buf)+n)
+		copy(b, e.buf)
+		e.buf = b
+	}
+}
+
 // Bytes returns the JSON written so far. It is an error to call it with an object or
 // array still open; a NaN or ±Inf written anywhere makes it return a *NotFiniteError.
 func (e *Encoder) Bytes() ([]byte, error) {
@@ -174,18 +184,48 @@ func (e *Encoder) Round(v float64, sig int) *Encoder {
 }
 
 // RoundSig rounds v to sig significant decimal digits (1 ≤ sig ≤ 17, clamped). Non-finite
-// values are returned unchanged.
+// values are returned unchanged. The result is the float64 nearest to the rounded decimal,
+// so its shortest form prints no more than sig digits.
 func RoundSig(v float64, sig int) float64 {
 	if math.IsNaN(v) || math.IsInf(v, 0) || v == 0 {
 		return v
 	}
 	sig = max(1, min(sig, 17))
+	a := math.Abs(v)
+	e := int(math.Floor(math.Log10(a)))
+	if a < pow10(e) { // Log10 rounded up across a power of ten
+		e--
+	}
+	k := sig - 1 - e
+	// Scaling by an exact power of ten (up to 1e22) and dividing back gives the correctly
+	// rounded double of the decimal. The scaled value stays below 2^44, so its own rounding
+	// error (under 2^-9) can only move a value within 0.002 units of a tie; outside that
+	// range strconv does it.
+	switch {
+	case k >= 0 && k <= 22 && a*pow10(k) < 1<<44:
+		p := pow10(k)
+		return math.Round(v*p) / p
+	case k < 0 && -k <= 22 && a/pow10(-k) < 1<<44:
+		p := pow10(-k)
+		return math.Round(v/p) * p
+	}
 	r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'e', sig-1, 64), 64)
 	if err != nil {
 		return v
 	}
 	return r
 }
+
+// pow10 returns 10^n for 0 ≤ n ≤ 22 exactly (and math.Pow10 otherwise).
+func pow10(n int) float64 {
+	if n >= 0 && n < len(powers) {
+		return powers[n]
+	}
+	return math.Pow10(n)
+}
+
+var powers = [...]float64{1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
+	1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22}
 
 // AppendFloat appends the shortest JSON form of a finite v: plain decimals between 1e-6
 // and 1e15, exponent form outside; -0 is written 0. The caller ensures v is finite.

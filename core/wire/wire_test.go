@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"math"
+	"math/rand/v2"
 	"strconv"
 	"strings"
 	"testing"
@@ -277,4 +278,34 @@ func BenchmarkDecodeRecipe(b *testing.B) {
 		}
 		sink = v
 	}
+}
+
+// RoundSig must agree with rounding the decimal text (strconv 'e' formatting) everywhere
+// except within 0.002 units of the last digit of a tie (see RoundSig).
+func TestRoundSigMatchesStrconv(t *testing.T) {
+	rng := rand.New(rand.NewPCG(5, 6))
+	for range 200000 {
+		v := math.Pow(10, 40*rng.Float64()-20) * (rng.Float64() - 0.5)
+		sig := 1 + rng.IntN(17)
+		want, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'e', sig-1, 64), 64)
+		got := RoundSig(v, sig)
+		if got != want {
+			// Allow a near tie to go the other way: the three digits after the last kept
+			// one are 498 to 502.
+			alt := strconv.FormatFloat(math.Abs(v), 'e', sig+2, 64)
+			mant := strings.Replace(alt[:strings.IndexByte(alt, 'e')], ".", "", 1)
+			if next := mant[sig:]; next >= "498" && next <= "502" {
+				continue
+			}
+			t.Fatalf("RoundSig(%v, %d) = %v, want %v", v, sig, got, want)
+		}
+	}
+}
+
+func BenchmarkRoundSig(b *testing.B) {
+	var s float64
+	for b.Loop() {
+		s += RoundSig(77.270123, 6)
+	}
+	_ = s
 }
