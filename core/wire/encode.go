@@ -277,6 +277,14 @@ func Encode(v Value) ([]byte, error) {
 
 const hexDigits = "0123456789abcdef"
 
+// plain marks the ASCII bytes AppendString copies as they are.
+var plain = func() (t [utf8.RuneSelf]bool) {
+	for c := 0x20; c < utf8.RuneSelf; c++ {
+		t[c] = c != '"' && c != '\\' && c != '<' && c != '>' && c != '&'
+	}
+	return t
+}()
+
 // AppendString appends s as a JSON string. Besides the required escapes it escapes <, >
 // and & (so the text is safe inside HTML) and U+2028 and U+2029 (line separators in
 // JavaScript). Invalid UTF-8 is replaced by U+FFFD.
@@ -286,7 +294,7 @@ func AppendString(buf []byte, s string) []byte {
 	for i := 0; i < len(s); {
 		c := s[i]
 		if c < utf8.RuneSelf {
-			if c >= 0x20 && c != '"' && c != '\\' && c != '<' && c != '>' && c != '&' {
+			if plain[c] {
 				i++
 				continue
 			}
