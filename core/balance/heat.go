@@ -85,11 +85,13 @@ func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heatin
 			res.CrystalEnthalpyKJPerMol = e.kJPerMol
 			res.EnthalpyBasis = e.basis
 			res.CrystallizationHeatKJ = res.CrystalsG / phase.MolarMassGPerMol * e.kJPerMol
-			if phase.HasEnthalpy {
+			if res.CrystalsG > 0 && phase.HasEnthalpy {
 				srcs.add(phase.EnthalpySource)
 			}
-			srcs.add(heatSource)
-			if phase.HasEnthalpy && e.hasApp && differ(e.kJPerMol, e.apparent) {
+			if res.CrystalsG > 0 {
+				srcs.add(heatSource)
+			}
+			if res.CrystalsG > 0 && phase.HasEnthalpy && e.hasApp && differ(e.kJPerMol, e.apparent) {
 				warn.add("the library ΔsolH of " + phase.Formula + " (" + unit.FormatCompact(e.kJPerMol, 3) +
 					" kJ/mol) and the apparent value from the curve slope (" + unit.FormatCompact(e.apparent, 3) +
 					" kJ/mol) differ by more than " + unit.FormatCompact(enthalpyDiffPct, 2) +

@@ -60,9 +60,9 @@ func (s *sheet) row(label, value string) {
 
 func (s *sheet) bullet(t string) { s.b.WriteString("  - " + t + "\n") }
 
-func n(v float64) string  { return unit.FormatNumber(v, 4) }
-func g(v float64) string  { return unit.FormatNumber(v, 4) + " g" }
-func tc(v float64) string { return unit.FormatNumber(v, 3) + " °C" }
+func n(v float64) string  { return unit.FormatCompact(v, 4) }
+func g(v float64) string  { return unit.FormatCompact(v, 4) + " g" }
+func tc(v float64) string { return unit.FormatCompact(v, 3) + " °C" }
 
 // signed writes v with an explicit + for positive numbers.
 func signed(v float64) string {
@@ -98,7 +98,7 @@ func Sheet(res recipe.Result) string {
 		s.row("hydrate water joins it", g(r.HydrateWaterG)+" (total "+g(r.TotalWaterG)+")")
 	}
 	if r.ImpurityG > 0 {
-		s.row("insoluble impurity", g(r.ImpurityG)+" (stays with the solid)")
+		s.row("insoluble impurity", g(r.ImpurityG)+" (taken as inert: it is filtered off with any solid)")
 	}
 	s.row("dissolve at", tc(r.DissolveTempC)+", "+n(r.SaturationPct)+" % of saturation")
 	s.row("concentration", n(r.ConcentrationG100)+" g per 100 g water (saturated: "+n(r.SolubilityAtStart)+")")
@@ -161,11 +161,11 @@ func Sheet(res recipe.Result) string {
 	}
 	if r.HasTarget {
 		s.row("crystallization releases", n(r.CrystallizationHeatKJ)+" kJ")
-		if r.EnthalpyBasis != "" {
+		if r.EnthalpyBasis != "" && r.CrystalsG > 0 {
 			s.row("enthalpy used", r.EnthalpyBasis)
-		}
-		if r.HasApparent {
-			s.row("apparent (curve slope)", n(r.ApparentEnthalpyKJPerMol)+" kJ/mol")
+			if r.HasApparent {
+				s.row("apparent (curve slope)", n(r.ApparentEnthalpyKJPerMol)+" kJ/mol")
+			}
 		}
 		s.row("sensible heat to remove", n(r.SensibleHeatKJ)+" kJ")
 		duty := n(r.CoolingDutyKJ) + " kJ"
