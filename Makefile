@@ -41,12 +41,13 @@ bench: build worker
 	$(GO) test -run '^$$' -bench . -benchmem ./core/...
 	SALTCAST_BENCH=1 $(GO) test -run 'TestFigures' -v ./web/... ./wasm/...
 
-## worker: the Cloudflare Workers build in build/worker
+## worker: the Cloudflare Workers build in build/worker (scripts/build-worker.sh; sizes printed)
 worker:
 	bash scripts/build-worker.sh
 
-## worker-run: serve the worker locally on 127.0.0.1:8787 with workerd
-worker-run: worker test-deps
+## worker-run: serve the worker locally on http://127.0.0.1:8787 with workerd (Ctrl-C stops it)
+worker-run: worker
+	bash scripts/deps-workerd.sh
 	./node_modules/.bin/workerd serve wasm/worker/workerd.capnp --verbose
 
 clean:
