@@ -43,28 +43,28 @@ type app struct {
 	planErr  string // the field that the last plan error is shown beside
 	compound *compound.Compound
 
-	recipeForm dom.Element
-	inputs     map[string]dom.Element // recipe inputs by name
-	msgs       map[string]dom.Element // the message beside each input
-	tiles      []tile                 // one per Figure
+	recipeForm js.Value
+	inputs     map[string]js.Value // recipe inputs by name
+	msgs       map[string]js.Value // the message beside each input
+	tiles      []tile              // one per Figure
 }
 
 // tile is where one Figure shows on the batch screen.
 type tile struct {
 	fig  Figure
-	out  dom.Element // the element with data-key
-	unit dom.Element // the unit beside it, if any
-	box  dom.Element // the tile to hide when the plan has no such figure
+	out  js.Value // the element with data-key
+	unit js.Value // the unit beside it, if any
+	box  js.Value // the tile to hide when the plan has no such figure
 }
 
 func newApp() *app {
-	return &app{u: DefaultUnits, d: NewDraft(), inputs: map[string]dom.Element{}, msgs: map[string]dom.Element{}}
+	return &app{u: DefaultUnits, d: NewDraft(), inputs: map[string]js.Value{}, msgs: map[string]js.Value{}}
 }
 
 func (a *app) start() {
 	a.recipeForm = byID("recipe")
-	for _, el := range a.recipeForm.QuerySelectorAll("[name]") {
-		name := el.GetAttribute("name")
+	for _, el := range qa(a.recipeForm, "[name]") {
+		name := attr(el, "name")
 		if Known(name) {
 			a.inputs[name] = el
 			a.msgs[name] = byID("m-" + name)
@@ -96,30 +96,30 @@ func (a *app) start() {
 	}
 
 	on(a.recipeForm, "input", a.onRecipeInput)
-	on(a.recipeForm, "submit", func(ev dom.Event) { ev.PreventDefault() })
+	on(a.recipeForm, "submit", func(_ js.Value, ev dom.Event) { ev.PreventDefault() })
 	on(byID("units"), "change", a.onUnits)
-	for _, b := range doc.QuerySelectorAll(".screens [data-screen]") {
+	for _, b := range qa(doc, ".screens [data-screen]") {
 		b := b
-		on(b, "click", func(dom.Event) { a.showScreen(b.GetAttribute("data-screen")) })
+		on(b, "click", func(js.Value, dom.Event) { a.showScreen(attr(b, "data-screen")) })
 	}
-	for _, b := range doc.QuerySelectorAll("[data-demo]") {
+	for _, b := range qa(doc, "[data-demo]") {
 		b := b
-		on(b, "click", func(dom.Event) {
-			if r, err := recipe.Decode([]byte(demos[b.GetAttribute("data-demo")])); err == nil {
+		on(b, "click", func(js.Value, dom.Event) {
+			if r, err := recipe.Decode([]byte(demos[attr(b, "data-demo")])); err == nil {
 				a.load(r)
 			}
 		})
 	}
 	on(byID("solute-matches"), "click", a.onPickMatch)
-	for _, el := range doc.QuerySelectorAll(`[name="programme_kind"]`) {
-		on(el, "change", func(dom.Event) { a.renderProgramme() })
+	for _, el := range qa(doc, `[name="programme_kind"]`) {
+		on(el, "change", func(js.Value, dom.Event) { a.renderProgramme() })
 	}
-	for _, b := range doc.QuerySelectorAll("[data-print]") {
+	for _, b := range qa(doc, "[data-print]") {
 		b := b
-		on(b, "click", func(dom.Event) { a.print(b.GetAttribute("data-print")) })
+		on(b, "click", func(js.Value, dom.Event) { a.print(attr(b, "data-print")) })
 	}
-	win.AddEventListener("beforeprint", false, func(dom.Event) { byID("s-date").SetTextContent(today()) })
-	win.AddEventListener("afterprint", false, func(dom.Event) { doc.(dom.HTMLDocument).Body().Class().Remove("print-gas") })
+	win.AddEventListener("beforeprint", false, func(dom.Event) { setText(byID("s-date"), today()) })
+	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
 	a.bindBox()
 	a.startGas()
 
@@ -147,12 +147,12 @@ func (a *app) showDraft() {
 	}
 	setChecked(byID("f-use_custom"), a.d.Custom)
 	if a.d.Custom {
-		byID("custom-box").SetAttribute("open", "")
+		setAttr(byID("custom-box"), "open", "")
 	}
-	for _, el := range a.recipeForm.QuerySelectorAll(`[name="water_basis"]`) {
+	for _, el := range qa(a.recipeForm, `[name="water_basis"]`) {
 		setChecked(el, value(el) == a.d.Water)
 	}
-	for _, el := range a.recipeForm.QuerySelectorAll(`[name="amount_basis"]`) {
+	for _, el := range qa(a.recipeForm, `[name="amount_basis"]`) {
 		setChecked(el, value(el) == a.d.Amount)
 	}
 	a.showBases()
@@ -160,17 +160,16 @@ func (a *app) showDraft() {
 }
 
 func (a *app) showBases() {
-	for _, el := range a.recipeForm.QuerySelectorAll("[data-basis]") {
-		setHidden(el, el.GetAttribute("data-basis") != a.d.Water)
+	for _, el := range qa(a.recipeForm, "[data-basis]") {
+		setHidden(el, attr(el, "data-basis") != a.d.Water)
 	}
-	for _, el := range a.recipeForm.QuerySelectorAll("[data-amount]") {
-		setHidden(el, el.GetAttribute("data-amount") != a.d.Amount)
+	for _, el := range qa(a.recipeForm, "[data-amount]") {
+		setHidden(el, attr(el, "data-amount") != a.d.Amount)
 	}
 }
 
-func (a *app) onRecipeInput(ev dom.Event) {
-	el := ev.Target()
-	name := el.GetAttribute("name")
+func (a *app) onRecipeInput(el js.Value, _ dom.Event) {
+	name := attr(el, "name")
 	switch name {
 	case "water_basis":
 		a.d.Water = value(el)
@@ -200,19 +199,19 @@ func (a *app) onRecipeInput(ev dom.Event) {
 // showFieldError puts err's message beside field name (or clears it).
 func (a *app) showFieldError(name string, err error) {
 	in, msg := a.inputs[name], a.msgs[name]
-	if in == nil {
+	if !exists(in) {
 		return
 	}
 	if err == nil {
-		in.RemoveAttribute("aria-invalid")
-		if msg != nil {
-			msg.SetTextContent("")
+		in.Call("removeAttribute", "aria-invalid")
+		if exists(msg) {
+			setText(msg, "")
 		}
 		return
 	}
-	in.SetAttribute("aria-invalid", "true")
-	if msg != nil {
-		msg.SetTextContent(fieldMessage(err, value(in)))
+	setAttr(in, "aria-invalid", "true")
+	if exists(msg) {
+		setText(msg, fieldMessage(err, value(in)))
 	}
 }
 
@@ -237,7 +236,7 @@ func (a *app) recompute() {
 	stale := byID("stale")
 	if len(a.d.Errs) > 0 {
 		a.clearPlanError()
-		stale.SetTextContent("Showing the last good result: correct the marked field to update.")
+		setText(stale, "Showing the last good result: correct the marked field to update.")
 		a.setStale(true)
 		return
 	}
@@ -260,11 +259,7 @@ func (a *app) recompute() {
 func (a *app) setStale(s bool) {
 	setHidden(byID("stale"), !s)
 	out := byID("outcome")
-	if s {
-		out.Class().Add("is-stale")
-	} else {
-		out.Class().Remove("is-stale")
-	}
+	classSet(out, "is-stale", s)
 }
 
 // showPlanError shows a recipe or plan error beside the field it names, or above the
@@ -286,15 +281,15 @@ func (a *app) showPlanError(err error) {
 	if in, ok := a.inputs[field]; ok && !inHiddenPart(in) {
 		a.planErr = field
 		a.showFieldError(field, err)
-		stale.SetTextContent("Showing the last good result: correct the marked field to update.")
+		setText(stale, "Showing the last good result: correct the marked field to update.")
 	} else {
-		stale.SetTextContent("Showing the last good result. " + fieldMessage(err, ""))
+		setText(stale, "Showing the last good result. "+fieldMessage(err, ""))
 	}
 	a.setStale(true)
 }
 
-func inHiddenPart(el dom.Element) bool {
-	return el.Closest("[hidden]") != nil
+func inHiddenPart(el js.Value) bool {
+	return exists(closest(el, "[hidden]"))
 }
 
 func (a *app) clearPlanError() {
@@ -315,19 +310,19 @@ func (a *app) updateSolute(typing bool) {
 	clear(matches)
 	a.compound = nil
 	if a.d.Custom {
-		picked.SetTextContent("Planning with your own compound (below).")
+		setText(picked, "Planning with your own compound (below).")
 		clear(sel)
 		opt := add(sel, "option", "", "anhydrous (own compound)")
-		opt.SetAttribute("value", "")
+		setAttr(opt, "value", "")
 		return
 	}
 	text := a.d.Text["solute"]
 	c, f, err := compound.Lookup(text)
 	if err == nil {
 		a.compound = c
-		picked.SetTextContent(c.Name + " · " + c.ID)
+		setText(picked, c.Name+" · "+c.ID)
 	} else {
-		picked.SetTextContent("")
+		setText(picked, "")
 	}
 	if typing || err != nil {
 		a.listMatches(matches, text)
@@ -341,7 +336,7 @@ func (a *app) updateSolute(typing bool) {
 	clear(sel)
 	if c == nil {
 		opt := add(sel, "option", "", "choose a solute first")
-		opt.SetAttribute("value", want)
+		setAttr(opt, "value", want)
 		return
 	}
 	for i, form := range c.Forms {
@@ -356,7 +351,7 @@ func (a *app) updateSolute(typing bool) {
 		if i == 0 {
 			v = ""
 		}
-		opt.SetAttribute("value", v)
+		setAttr(opt, "value", v)
 	}
 	if want != "" {
 		if form, err := c.Form(want); err == nil && form != c.Forms[0] {
@@ -368,7 +363,7 @@ func (a *app) updateSolute(typing bool) {
 		}
 		// A form the compound does not have stays in the draft so the plan names it.
 		opt := add(sel, "option", "", want+" (not a form of "+c.ID+")")
-		opt.SetAttribute("value", want)
+		setAttr(opt, "value", want)
 		setValue(sel, want)
 		return
 	}
@@ -378,7 +373,7 @@ func (a *app) updateSolute(typing bool) {
 // maxMatches is how many compounds the search lists at once.
 const maxMatches = 8
 
-func (a *app) listMatches(box dom.Element, text string) {
+func (a *app) listMatches(box js.Value, text string) {
 	q := strings.ToLower(strings.TrimSpace(text))
 	n := 0
 	for _, c := range compound.All() {
@@ -396,20 +391,20 @@ func (a *app) listMatches(box dom.Element, text string) {
 			continue
 		}
 		b := add(box, "button", "", c.ID+" ")
-		b.SetAttribute("type", "button")
-		b.SetAttribute("role", "option")
-		b.SetAttribute("data-id", c.ID)
+		setAttr(b, "type", "button")
+		setAttr(b, "role", "option")
+		setAttr(b, "data-id", c.ID)
 		add(b, "small", "", c.Name)
 		n++
 	}
 }
 
-func (a *app) onPickMatch(ev dom.Event) {
-	b := ev.Target().Closest("[data-id]")
-	if b == nil {
+func (a *app) onPickMatch(t js.Value, _ dom.Event) {
+	b := closest(t, "[data-id]")
+	if !exists(b) {
 		return
 	}
-	id := b.GetAttribute("data-id")
+	id := attr(b, "data-id")
 	setValue(a.inputs["solute"], id)
 	a.d.Set("solute", id, a.u)
 	a.showFieldError("solute", nil)
@@ -427,30 +422,30 @@ func (a *app) loadUnits() {
 		}
 	}
 	uf := byID("units")
-	setValue(uf.QuerySelector(`[name="unit_temp"]`), a.u.Temp)
-	setValue(uf.QuerySelector(`[name="unit_mass"]`), a.u.Mass)
-	setValue(uf.QuerySelector(`[name="unit_volume"]`), a.u.Volume)
+	setValue(q(uf, `[name="unit_temp"]`), a.u.Temp)
+	setValue(q(uf, `[name="unit_mass"]`), a.u.Mass)
+	setValue(q(uf, `[name="unit_volume"]`), a.u.Volume)
 	// A stored value the select does not offer leaves it empty: fall back to the defaults.
-	if value(uf.QuerySelector(`[name="unit_temp"]`)) == "" || value(uf.QuerySelector(`[name="unit_mass"]`)) == "" ||
-		value(uf.QuerySelector(`[name="unit_volume"]`)) == "" {
+	if value(q(uf, `[name="unit_temp"]`)) == "" || value(q(uf, `[name="unit_mass"]`)) == "" ||
+		value(q(uf, `[name="unit_volume"]`)) == "" {
 		a.u = DefaultUnits
 		a.loadUnitsInto(uf)
 	}
 	a.showUnitLabels()
 }
 
-func (a *app) loadUnitsInto(uf dom.Element) {
-	setValue(uf.QuerySelector(`[name="unit_temp"]`), a.u.Temp)
-	setValue(uf.QuerySelector(`[name="unit_mass"]`), a.u.Mass)
-	setValue(uf.QuerySelector(`[name="unit_volume"]`), a.u.Volume)
+func (a *app) loadUnitsInto(uf js.Value) {
+	setValue(q(uf, `[name="unit_temp"]`), a.u.Temp)
+	setValue(q(uf, `[name="unit_mass"]`), a.u.Mass)
+	setValue(q(uf, `[name="unit_volume"]`), a.u.Volume)
 }
 
-func (a *app) onUnits(dom.Event) {
+func (a *app) onUnits(js.Value, dom.Event) {
 	uf := byID("units")
 	a.u = Units{
-		Temp:   value(uf.QuerySelector(`[name="unit_temp"]`)),
-		Mass:   value(uf.QuerySelector(`[name="unit_mass"]`)),
-		Volume: value(uf.QuerySelector(`[name="unit_volume"]`)),
+		Temp:   value(q(uf, `[name="unit_temp"]`)),
+		Mass:   value(q(uf, `[name="unit_mass"]`)),
+		Volume: value(q(uf, `[name="unit_volume"]`)),
 	}
 	a.store.set(keyUnits, a.u.Temp+" "+a.u.Mass+" "+a.u.Volume)
 	a.showUnitLabels()
@@ -468,40 +463,35 @@ func (a *app) onUnits(dom.Event) {
 }
 
 func (a *app) showUnitLabels() {
-	for _, el := range doc.QuerySelectorAll("[data-unit]") {
-		switch el.GetAttribute("data-unit") {
+	for _, el := range qa(doc, "[data-unit]") {
+		switch attr(el, "data-unit") {
 		case "temp":
-			el.SetTextContent(a.u.TempSymbol())
+			setText(el, a.u.TempSymbol())
 		case "mass":
-			el.SetTextContent(a.u.Mass)
+			setText(el, a.u.Mass)
 		case "volume":
-			el.SetTextContent(a.u.VolumeSymbol())
+			setText(el, a.u.VolumeSymbol())
 		}
 	}
 }
 
 func (a *app) showScreen(name string) {
-	for _, b := range doc.QuerySelectorAll(".screens [data-screen]") {
-		sel := b.GetAttribute("data-screen") == name
+	for _, b := range qa(doc, ".screens [data-screen]") {
+		sel := attr(b, "data-screen") == name
 		if sel {
-			b.SetAttribute("aria-selected", "true")
+			setAttr(b, "aria-selected", "true")
 		} else {
-			b.SetAttribute("aria-selected", "false")
+			setAttr(b, "aria-selected", "false")
 		}
-		setHidden(byID("screen-"+b.GetAttribute("data-screen")), !sel)
+		setHidden(byID("screen-"+attr(b, "data-screen")), !sel)
 	}
 	if name == "sheet" {
-		byID("s-date").SetTextContent(today())
+		setText(byID("s-date"), today())
 	}
 }
 
 func (a *app) print(what string) {
-	body := doc.(dom.HTMLDocument).Body()
-	if what == "gas" {
-		body.Class().Add("print-gas")
-	} else {
-		body.Class().Remove("print-gas")
-	}
-	byID("s-date").SetTextContent(today())
+	classSet(doc.Get("body"), "print-gas", what == "gas")
+	setText(byID("s-date"), today())
 	js.Global().Call("print")
 }

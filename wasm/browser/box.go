@@ -15,9 +15,9 @@ import (
 // collection files, CSV of the results, and the share link.
 
 func (a *app) bindBox() {
-	on(byID("save-btn"), "click", func(dom.Event) { a.save() })
+	on(byID("save-btn"), "click", func(js.Value, dom.Event) { a.save() })
 	on(byID("saved"), "click", a.onSavedClick)
-	on(byID("export-one"), "click", func(dom.Event) {
+	on(byID("export-one"), "click", func(js.Value, dom.Event) {
 		if r, err := a.d.Recipe(); err == nil {
 			setValue(byID("transfer"), string(recipe.EncodeCollection([]recipe.Recipe{r})))
 			a.boxMessage("m-import", "This recipe is in the box above: copy it, or download it as a file.")
@@ -25,20 +25,20 @@ func (a *app) bindBox() {
 			a.boxMessage("m-import", "The recipe on the Batch screen has an error to correct first: "+fieldMessage(err, ""))
 		}
 	})
-	on(byID("export-all"), "click", func(dom.Event) {
+	on(byID("export-all"), "click", func(js.Value, dom.Event) {
 		setValue(byID("transfer"), string(a.shelf.Encode()))
 		a.boxMessage("m-import", itoa(len(a.shelf.Recipes))+" saved recipes are in the box above.")
 	})
-	on(byID("download-json"), "click", func(dom.Event) {
+	on(byID("download-json"), "click", func(js.Value, dom.Event) {
 		text := value(byID("transfer"))
 		if strings.TrimSpace(text) == "" {
 			text = string(a.shelf.Encode())
 		}
 		download("saltcast-recipes.json", "application/json", text)
 	})
-	on(byID("import-btn"), "click", func(dom.Event) { a.importText(value(byID("transfer"))) })
-	on(byID("import-file"), "change", func(ev dom.Event) {
-		files := ev.Target().Underlying().Get("files")
+	on(byID("import-btn"), "click", func(js.Value, dom.Event) { a.importText(value(byID("transfer"))) })
+	on(byID("import-file"), "change", func(t js.Value, _ dom.Event) {
+		files := t.Get("files")
 		if files.Length() == 0 {
 			return
 		}
@@ -50,9 +50,9 @@ func (a *app) bindBox() {
 			return nil
 		})
 		files.Index(0).Call("text").Call("then", done)
-		setValue(ev.Target(), "")
+		setValue(t, "")
 	})
-	on(byID("csv-btn"), "click", func(dom.Event) {
+	on(byID("csv-btn"), "click", func(js.Value, dom.Event) {
 		if a.last == nil {
 			return
 		}
@@ -62,13 +62,13 @@ func (a *app) bindBox() {
 		}
 		download(fileName(name)+".csv", "text/csv", CSV(a.last, a.u))
 	})
-	on(byID("share-btn"), "click", func(dom.Event) { a.share() })
-	on(byID("copy-link"), "click", func(dom.Event) {
+	on(byID("share-btn"), "click", func(js.Value, dom.Event) { a.share() })
+	on(byID("copy-link"), "click", func(js.Value, dom.Event) {
 		link := byID("share-link")
 		if value(link) == "" {
 			a.share()
 		}
-		link.Underlying().Call("select")
+		link.Call("select")
 		nav := js.Global().Get("navigator")
 		if cb := nav.Get("clipboard"); cb.Truthy() {
 			cb.Call("writeText", value(link))
@@ -139,25 +139,25 @@ func (a *app) renderShelf() {
 		li := add(list, "li", "", "")
 		add(li, "span", "nm", r.Name) // the user's text, as text
 		open := add(li, "button", "act", "Open")
-		open.SetAttribute("type", "button")
-		open.SetAttribute("data-open", itoa(i))
+		setAttr(open, "type", "button")
+		setAttr(open, "data-open", itoa(i))
 		del := add(li, "button", "act danger", "Delete")
-		del.SetAttribute("type", "button")
-		del.SetAttribute("data-delete", itoa(i))
-		del.SetAttribute("aria-label", "Delete "+r.Name)
+		setAttr(del, "type", "button")
+		setAttr(del, "data-delete", itoa(i))
+		setAttr(del, "aria-label", "Delete "+r.Name)
 	}
 	if value(byID("save-name")) == "" {
 		setValue(byID("save-name"), a.d.Text["name"])
 	}
 }
 
-func (a *app) onSavedClick(ev dom.Event) {
-	b := ev.Target().Closest("button")
-	if b == nil {
+func (a *app) onSavedClick(t js.Value, _ dom.Event) {
+	b := closest(t, "button")
+	if !exists(b) {
 		return
 	}
-	idx := func(attr string) int {
-		s := b.GetAttribute(attr)
+	idx := func(name string) int {
+		s := attr(b, name)
 		n := 0
 		for _, c := range s {
 			n = n*10 + int(c-'0')
@@ -165,14 +165,14 @@ func (a *app) onSavedClick(ev dom.Event) {
 		return n
 	}
 	switch {
-	case b.HasAttribute("data-open"):
+	case hasAttr(b, "data-open"):
 		if i := idx("data-open"); i < len(a.shelf.Recipes) {
 			r := a.shelf.Recipes[i]
 			a.load(r)
 			setValue(byID("save-name"), r.Name)
 			a.showScreen("batch")
 		}
-	case b.HasAttribute("data-delete"):
+	case hasAttr(b, "data-delete"):
 		if i := idx("data-delete"); i < len(a.shelf.Recipes) {
 			name := a.shelf.Recipes[i].Name
 			if !win.Confirm("Delete the saved recipe “" + name + "”?") {
@@ -208,8 +208,8 @@ func (a *app) share() {
 }
 
 func (a *app) boxMessage(id, text string) {
-	if el := byID(id); el != nil {
-		el.SetTextContent(text)
+	if el := byID(id); exists(el) {
+		setText(el, text)
 	}
 }
 

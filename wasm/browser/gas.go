@@ -4,6 +4,7 @@ package main
 
 import (
 	"errors"
+	"syscall/js"
 
 	"honnef.co/go/js/dom/v2"
 
@@ -26,7 +27,7 @@ var gasDefaults = map[string]float64{"temp_C": 12, "from_C": 12, "to_C": 80}
 
 type gasTile struct {
 	key, label, unit string
-	out, box         dom.Element
+	out, box         js.Value
 }
 
 var (
@@ -42,7 +43,7 @@ func (a *app) startGas() {
 	}
 	for name := range gasFields {
 		if v, ok := gasNums[name]; ok {
-			in := form.QuerySelector(`[name="` + name + `"]`)
+			in := q(form, `[name="`+name+`"]`)
 			setValue(in, editable(a.gasShow(name, v)))
 		}
 	}
@@ -58,18 +59,17 @@ func (a *app) startGas() {
 		add(box, "span", "lbl", t.label)
 		val := add(box, "span", "val", "")
 		out := add(val, "output", "", "—")
-		out.SetAttribute("data-key", t.key)
-		val.AppendChild(doc.CreateTextNode(" "))
+		setAttr(out, "data-key", t.key)
+		val.Call("appendChild", doc.Call("createTextNode", " "))
 		u := add(val, "span", "u", t.unit)
 		if t.unit == "temp" {
-			u.SetAttribute("data-unit", "temp")
-			u.SetTextContent(a.u.TempSymbol())
+			setAttr(u, "data-unit", "temp")
+			setText(u, a.u.TempSymbol())
 		}
 		gasTiles = append(gasTiles, gasTile{key: t.key, label: t.label, unit: t.unit, out: out, box: box})
 	}
-	on(form, "input", func(ev dom.Event) {
-		el := ev.Target()
-		name := el.GetAttribute("name")
+	on(form, "input", func(el js.Value, _ dom.Event) {
+		name := attr(el, "name")
 		if _, ok := gasFields[name]; !ok {
 			return
 		}
@@ -86,7 +86,7 @@ func (a *app) startGas() {
 		}
 		a.recomputeGas()
 	})
-	on(form, "submit", func(ev dom.Event) { ev.PreventDefault() })
+	on(form, "submit", func(_ js.Value, ev dom.Event) { ev.PreventDefault() })
 	a.recomputeGas()
 }
 
@@ -106,31 +106,31 @@ func (a *app) gasParse(name, text string) (float64, error) {
 }
 
 func (a *app) gasFieldError(name string, err error) {
-	in := byID("gas").QuerySelector(`[name="` + name + `"]`)
+	in := q(byID("gas"), `[name="`+name+`"]`)
 	msg := byID("m-g-" + name)
-	if in == nil || msg == nil {
+	if !exists(in) || !exists(msg) {
 		return
 	}
 	if err == nil {
-		in.RemoveAttribute("aria-invalid")
-		msg.SetTextContent("")
+		in.Call("removeAttribute", "aria-invalid")
+		setText(msg, "")
 		return
 	}
-	in.SetAttribute("aria-invalid", "true")
-	msg.SetTextContent(fieldMessage(err, value(in)))
+	setAttr(in, "aria-invalid", "true")
+	setText(msg, fieldMessage(err, value(in)))
 }
 
 // recomputeGas works out the gas screen; on an error it keeps the last good figures.
 func (a *app) recomputeGas() {
 	form := byID("gas")
-	if form == nil {
+	if !exists(form) {
 		return
 	}
 	// Temperatures on screen follow the unit switch; a field being corrected keeps its text.
 	for name, isTemp := range gasFields {
 		if v, ok := gasNums[name]; ok && isTemp && !gasBad[name] {
-			in := form.QuerySelector(`[name="` + name + `"]`)
-			if in != nil && doc.(dom.HTMLDocument).ActiveElement() != in {
+			in := q(form, `[name="`+name+`"]`)
+			if exists(in) && !doc.Get("activeElement").Equal(in) {
 				setValue(in, editable(a.gasShow(name, v)))
 			}
 		}
@@ -147,12 +147,12 @@ func (a *app) recomputeGas() {
 				a.gasFieldError(fe.Field, err)
 			}
 		}
-		stale.SetTextContent("Showing the last good result. " + fieldMessage(err, ""))
+		setText(stale, "Showing the last good result. "+fieldMessage(err, ""))
 		setHidden(stale, false)
 		return
 	}
 	setHidden(stale, true)
-	stale.SetTextContent("Showing the last good result: correct the marked field to update.")
+	setText(stale, "Showing the last good result: correct the marked field to update.")
 }
 
 func (a *app) gasCompute() error {
@@ -220,7 +220,7 @@ func (a *app) gasCompute() error {
 		if !ok {
 			s = "—"
 		}
-		t.out.SetTextContent(s)
+		setText(t.out, s)
 		setHidden(t.box, !ok)
 	}
 	svg := chart.Placeholder("Oxygen saturation", "No chart")
@@ -236,7 +236,7 @@ func (a *app) gasCompute() error {
 			svg = s
 		}
 	}
-	byID("gas-chart").SetInnerHTML(svg) // SVG from core/chart, text escaped there
+	setHTML(byID("gas-chart"), svg) // SVG from core/chart, text escaped there
 	a.gasTable(tbl)
 	fillList(byID("gas-warnings"), orNone(append(warnings, cautions...)))
 	fillList(byID("gas-sources"), sources)
@@ -270,20 +270,20 @@ func (a *app) gasTable(t gas.Table) {
 	head := add(tbl, "thead", "", "")
 	tr := add(head, "tr", "", "")
 	th := add(tr, "th", "", a.u.TempSymbol()+" \\ kPa")
-	th.SetAttribute("scope", "col")
+	setAttr(th, "scope", "col")
 	for _, p := range t.Columns {
 		th := add(tr, "th", "", unit.FormatNumber(p, 4))
-		th.SetAttribute("scope", "col")
+		setAttr(th, "scope", "col")
 	}
 	body := add(tbl, "tbody", "", "")
 	for i, tc := range t.TempsC {
 		tr := add(body, "tr", "", "")
 		th := add(tr, "th", "", fixed(TempFromC(tc, a.u), 1))
-		th.SetAttribute("scope", "row")
+		setAttr(th, "scope", "row")
 		for _, v := range t.MgPerL[i] {
 			add(tr, "td", "", fixed(v, 2))
 		}
 	}
 	cap := add(tbl, "caption", "", "Salinity "+unit.FormatNumber(t.Fixed, 3)+" g/kg · "+t.Method)
-	tbl.Underlying().Call("prepend", cap.Underlying())
+	tbl.Call("prepend", cap)
 }

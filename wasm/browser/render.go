@@ -3,7 +3,7 @@
 package main
 
 import (
-	"honnef.co/go/js/dom/v2"
+	"syscall/js"
 
 	"saltcast/core/chart"
 	"saltcast/core/compound"
@@ -19,19 +19,19 @@ func (a *app) bindTiles() {
 	extra := byID("extra-figures")
 	for _, f := range Figures {
 		t := tile{fig: f}
-		if el := outcome.QuerySelector(`[data-key="` + f.Key + `"]`); el != nil {
+		if el := q(outcome, `[data-key="`+f.Key+`"]`); exists(el) {
 			t.out = el
-			t.box = el.Closest(".fig")
-			if p := el.ParentElement(); p != nil {
-				t.unit = p.QuerySelector(".u")
+			t.box = closest(el, ".fig")
+			if p := el.Get("parentElement"); exists(p) {
+				t.unit = q(p, ".u")
 			}
 		} else {
 			t.box = add(extra, "div", "fig", "")
 			add(t.box, "span", "lbl", f.Label)
 			val := add(t.box, "span", "val", "")
 			t.out = add(val, "output", "", "—")
-			t.out.SetAttribute("data-key", f.Key)
-			val.AppendChild(doc.CreateTextNode(" "))
+			setAttr(t.out, "data-key", f.Key)
+			val.Call("appendChild", doc.Call("createTextNode", " "))
 			t.unit = add(val, "span", "u", "")
 		}
 		a.tiles = append(a.tiles, t)
@@ -46,13 +46,13 @@ func (a *app) render() {
 		if !ok {
 			text = "—"
 		}
-		t.out.SetTextContent(text)
-		if t.unit != nil && ut != "" {
-			t.unit.SetTextContent(ut)
+		setText(t.out, text)
+		if exists(t.unit) && ut != "" {
+			setText(t.unit, ut)
 		}
 		// A tile of its own hides when the plan has no such figure; a figure inside
 		// another tile (crystal_phase) follows its tile.
-		if t.box != nil && t.box.QuerySelector("output") == t.out {
+		if exists(t.box) && q(t.box, "output").Equal(t.out) {
 			setHidden(t.box, !ok)
 		}
 	}
@@ -63,15 +63,15 @@ func (a *app) render() {
 			cf += " at " + unit.FormatNumber(r.PurityPct, 4) + " % purity"
 		}
 	}
-	byID("charge-form").SetTextContent(cf)
+	setText(byID("charge-form"), cf)
 
 	fillList(byID("cautions"), r.Cautions)
 	fillList(byID("warnings"), orNone(r.Warnings))
 	fillList(byID("sources"), r.Sources)
-	byID("curve-range").SetTextContent(a.curveText(r))
+	setText(byID("curve-range"), a.curveText(r))
 
 	a.lastSVG = a.chartSVG(r)
-	byID("chart").SetInnerHTML(a.lastSVG) // SVG from core/chart: every text in it is escaped
+	setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
 	a.renderProgramme()
 	a.renderSheet()
 }
@@ -239,16 +239,16 @@ func (a *app) fit() (solubility.FitResult, error) {
 func (a *app) showFit() {
 	out := byID("custom-fit")
 	if len(a.d.Points) < 3 || a.d.Num["custom.molar_mass_g_per_mol"] <= 0 {
-		out.SetTextContent("Give the molar mass and at least three points to see the curve.")
+		setText(out, "Give the molar mass and at least three points to see the curve.")
 		return
 	}
 	f, err := a.fit()
 	if err != nil {
-		out.SetTextContent("No curve yet: " + fieldMessage(err, ""))
+		setText(out, "No curve yet: "+fieldMessage(err, ""))
 		return
 	}
-	out.SetTextContent("Curve over " + TempText(f.Curve.MinC, a.u) + " to " + TempText(f.Curve.MaxC, a.u) +
-		": R² " + unit.FormatNumber(f.R2, 4) + ", RMS deviation " + unit.FormatNumber(f.RMS, 3) + " g per 100 g water.")
+	setText(out, "Curve over "+TempText(f.Curve.MinC, a.u)+" to "+TempText(f.Curve.MaxC, a.u)+
+		": R² "+unit.FormatNumber(f.R2, 4)+", RMS deviation "+unit.FormatNumber(f.RMS, 3)+" g per 100 g water.")
 }
 
 func (a *app) renderProgramme() {
@@ -260,17 +260,17 @@ func (a *app) renderProgramme() {
 	}
 	setHidden(box, false)
 	cubic := false
-	for _, el := range doc.QuerySelectorAll(`[name="programme_kind"]`) {
+	for _, el := range qa(doc, `[name="programme_kind"]`) {
 		if checked(el) && value(el) == "cubic" {
 			cubic = true
 		}
 	}
-	body := byID("programme").QuerySelector("tbody")
+	body := q(byID("programme"), "tbody")
 	fillProgramme(body, r, a.u, cubic, false)
 }
 
 // fillProgramme writes the rows of the cooling programme; both columns when both is set.
-func fillProgramme(body dom.Element, r *recipe.Result, u Units, cubic, both bool) {
+func fillProgramme(body js.Value, r *recipe.Result, u Units, cubic, both bool) {
 	clear(body)
 	for _, s := range r.Programme {
 		tr := add(body, "tr", "", "")
@@ -291,22 +291,22 @@ func (a *app) renderSheet() {
 	if name == "" {
 		name = "unnamed batch"
 	}
-	byID("s-name").SetTextContent(name)
-	byID("s-date").SetTextContent(today())
+	setText(byID("s-name"), name)
+	setText(byID("s-date"), today())
 	fillList(byID("s-cautions"), r.Cautions)
 	fillList(byID("s-warnings"), orNone(r.Warnings))
 	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
-	byID("s-notes").SetTextContent(r.Recipe.Notes)
+	setText(byID("s-notes"), r.Recipe.Notes)
 
 	in := byID("s-inputs")
 	clear(in)
-	row := func(tb dom.Element, label, val string) {
+	row := func(tb js.Value, label, val string) {
 		if val == "" {
 			return
 		}
 		tr := add(tb, "tr", "", "")
 		th := add(tr, "th", "", label)
-		th.SetAttribute("scope", "row")
+		setAttr(th, "scope", "row")
 		add(tr, "td", "", val)
 	}
 	solute := r.SoluteName
@@ -337,7 +337,7 @@ func (a *app) renderSheet() {
 			row(out, f.Label, text+" "+ut)
 		}
 	}
-	byID("s-chart").SetInnerHTML(a.lastSVG)
+	setHTML(byID("s-chart"), a.lastSVG)
 
 	pt := byID("s-programme")
 	clear(pt)
@@ -345,12 +345,12 @@ func (a *app) renderSheet() {
 		head := add(pt, "tr", "", "")
 		for _, h := range []string{"time, min", "linear, " + a.u.TempSymbol(), "cubic (Mullin & Nývlt), " + a.u.TempSymbol()} {
 			th := add(head, "th", "", h)
-			th.SetAttribute("scope", "col")
+			setAttr(th, "scope", "col")
 		}
 		body := add(pt, "tbody", "", "")
 		fillProgramme(body, r, a.u, false, true)
 	}
-	setHidden(pt.ParentElement(), len(r.Programme) == 0)
+	setHidden(pt.Get("parentElement"), len(r.Programme) == 0)
 }
 
 // unitOf is the unit shown beside a recipe field on the sheet.
