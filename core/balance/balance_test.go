@@ -493,3 +493,16 @@ func BenchmarkPlanAcrossTransition(b *testing.B) {
 		sink = r
 	}
 }
+
+// A target in the extrapolated margin below the data still has its onset found: KNO3 at
+// 13 g/100 g saturates just below the first row (13.64 at 0 °C, CRC 98th ed.).
+func TestOnsetInMargin(t *testing.T) {
+	c, _ := lookup(t, "KNO3")
+	r := plan(t, Batch{Compound: c, WaterG: 100, DissolveTempC: 20, ChargeG: 13, HasTarget: true, TargetC: -4})
+	if !r.HasOnset || !(r.SaturationTempC < 0 && r.SaturationTempC > -4) || !(r.CrystalsG > 0) {
+		t.Errorf("onset %v (%v), crystals %v; want an onset between −4 and 0 °C and crystals", r.SaturationTempC, r.HasOnset, r.CrystalsG)
+	}
+	if !strings.Contains(strings.Join(r.Warnings, "\n"), "freez") {
+		t.Errorf("no freezing warning at −4 °C: %q", r.Warnings)
+	}
+}

@@ -200,12 +200,17 @@ func Plan(b Batch) (Result, error) {
 		}
 	}
 	if heating {
-		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, maxC)
+		hi := math.Max(maxC, b.TargetC)
+		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, hi)
 		if !res.HasOnset {
-			res.OnsetNote = "stays unsaturated on heating up to " + fmtC(maxC) + " (end of the data)"
+			res.OnsetNote = "stays unsaturated on heating up to " + fmtC(hi) + " (end of the data)"
 		}
 	} else {
+		// Down to the end of the data, or to a target in the extrapolated margin below it.
 		lo := math.Min(minC, b.DissolveTempC)
+		if b.HasTarget {
+			lo = math.Min(lo, b.TargetC)
+		}
 		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, lo)
 		if !res.HasOnset {
 			res.OnsetNote = "stays unsaturated on cooling down to " + fmtC(lo) + " (end of the data)"
@@ -315,7 +320,12 @@ func Plan(b Batch) (Result, error) {
 			drop = math.Min(drop, b.MetastableWidthK/2)
 		}
 		res.HasSeedHint = true
-		res.SeedHintC = math.Max(res.SaturationTempC-drop, b.TargetC)
+		res.SeedHintC = res.SaturationTempC - drop
+		if res.SeedHintC < b.TargetC {
+			res.SeedHintC = b.TargetC
+			warn.add("the seeding suggestion is held at the target " + fmtC(b.TargetC) +
+				", less than " + unit.FormatCompact(drop, 2) + " K below the saturation temperature")
+		}
 		res.SeedPhase = c.SegmentAt(res.SeedHintC).Form.Formula
 		res.SeedLowG = 0.01 * res.CrystalsG
 		res.SeedHighG = 0.02 * res.CrystalsG
