@@ -38,7 +38,7 @@ func chooseEnthalpy(c *compound.Compound, phase *compound.Form, t1, t2 float64) 
 
 // heat fills the heat fields of res: batch heat capacity, heat of dissolving, heat of
 // crystallization at the target, cooling duty, and the adiabatic end temperature.
-func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heating bool, warn, srcs *notes) error {
+func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heating bool, warn, srcs *notes) {
 	c := b.Compound
 	tMean := b.DissolveTempC
 	if b.HasTarget {
@@ -115,7 +115,6 @@ func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heatin
 	if b.HasSeedAt {
 		adiabatic(res, b, S, Wt, capAt, warn)
 	}
-	return nil
 }
 
 func differ(a, b float64) bool {

@@ -348,9 +348,7 @@ func Plan(b Batch) (Result, error) {
 	}
 
 	// Heat.
-	if err := heat(&res, b, form, m, p, S, Wt, heating, &warn, &srcs); err != nil {
-		return Result{}, err
-	}
+	heat(&res, b, form, m, p, S, Wt, heating, &warn, &srcs)
 	if res.HasAdiabatic {
 		res.Path = append(res.Path, PathPoint{Label: "adiabatic end", TempC: res.AdiabaticEndC, G100: res.AdiabaticG100})
 	}
