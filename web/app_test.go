@@ -1,8 +1,13 @@
 package web_test
 
 import (
+	"context"
+	"math"
+	"strconv"
 	"strings"
 	"testing"
+
+	"saltcast/core/recipe"
 )
 
 // The page computes on load: the demo batch's charge is on screen without any input.
@@ -35,5 +40,212 @@ func TestNoNetworkRequests(t *testing.T) {
 	}
 	if len(extra) > 0 {
 		t.Errorf("the page made %d network requests: %s", len(extra), strings.Join(extra, ", "))
+	}
+}
+
+// current is the recipe the page has on screen (it keeps it in localStorage) and the core's
+// plan of that same recipe.
+func current(t *testing.T, ctx context.Context) (recipe.Recipe, recipe.Result) {
+	t.Helper()
+	src := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current") || ""`)
+	r, err := recipe.Decode([]byte(src))
+	if err != nil {
+		t.Fatalf("the page's current recipe %q: %v", src, err)
+	}
+	res, err := recipe.Plan(r)
+	if err != nil {
+		t.Fatalf("core plan of the page's recipe: %v", err)
+	}
+	return r, res
+}
+
+func click(t *testing.T, ctx context.Context, sel string) {
+	t.Helper()
+	if !mustEval[bool](t, ctx, `(function(){const b=document.querySelector(`+strconv.Quote(sel)+`); if(!b) return false; b.click(); return true})()`) {
+		t.Fatalf("nothing to click at %s", sel)
+	}
+}
+
+// shownTol is the relative rounding of a mass shown with four significant figures.
+const shownTol = 5e-4
+
+// Changing water_g changes charge_g to what the core computes for the same recipe; at a fixed
+// % of saturation the charge is proportional to the water (mass balance).
+func TestWaterChangesCharge(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	setField(t, ctx, "recipe", "water_g", "1000")
+	before := outputNumber(t, ctx, "charge_g")
+	setField(t, ctx, "recipe", "water_g", "1500")
+	after := outputNumber(t, ctx, "charge_g")
+	r, res := current(t, ctx)
+	if !r.WaterG.Set || r.WaterG.Value != 1500 {
+		t.Fatalf("the page's recipe has water_g %v, want 1500", r.WaterG)
+	}
+	if math.Abs(after-res.ChargeG) > shownTol*res.ChargeG {
+		t.Errorf("charge_g shown %v, core says %v for the same recipe", after, res.ChargeG)
+	}
+	if ratio := after / before; math.Abs(ratio-1.5) > 2*shownTol {
+		t.Errorf("charge for 1500 g water / charge for 1000 g = %v, want 1.5", ratio)
+	}
+}
+
+// An entry that cannot be read shows a message beside its field, keeps the user's text and
+// keeps the last good results on screen.
+func TestInvalidEntryKeepsResults(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	good := output(t, ctx, "charge_g")
+	setField(t, ctx, "recipe", "water_g", "12,5,0")
+	if msg := mustEval[string](t, ctx, `document.getElementById("m-water_g").textContent`); !strings.Contains(msg, "12,5,0") {
+		t.Errorf("message beside water_g = %q, want one naming what was typed", msg)
+	}
+	if v := mustEval[string](t, ctx, `document.querySelector('#recipe [name="water_g"]').value`); v != "12,5,0" {
+		t.Errorf("water_g now holds %q, want the user's text", v)
+	}
+	if got := output(t, ctx, "charge_g"); got != good {
+		t.Errorf("charge_g after a bad entry = %q, want the last good %q", got, good)
+	}
+	if mustEval[bool](t, ctx, `document.getElementById("stale").hidden`) {
+		t.Error("the results are not marked as the last good ones")
+	}
+	setField(t, ctx, "recipe", "water_g", "1000")
+	if mustEval[string](t, ctx, `document.getElementById("m-water_g").textContent`) != "" {
+		t.Error("the message stays after a good entry")
+	}
+}
+
+const hostileName = `<img src=x onerror=alert(1)>`
+
+// Saved, reloaded, exported and imported recipes come back identical; a hostile name shows
+// as text everywhere.
+func TestSaveReloadExportImport(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	resetStorage(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	setField(t, ctx, "recipe", "name", hostileName)
+	mustEval[bool](t, ctx, `document.getElementById("save-name").value="", true`)
+	click(t, ctx, "#save-btn")
+	click(t, ctx, `[data-demo="kno3"]`)
+	click(t, ctx, "#save-btn") // saved under the example's own name
+	saved := mustEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`)
+	if !strings.Contains(saved, `"recipes":[`) {
+		t.Fatalf("nothing saved: %q", saved)
+	}
+
+	open(t, ctx, u) // reload
+	click(t, ctx, "#tab-box")
+	names := mustEval[[]string](t, ctx, `[...document.querySelectorAll("#saved .nm")].map(e => e.textContent)`)
+	if len(names) != 2 || names[0] != hostileName {
+		t.Fatalf("saved list after reload = %q", names)
+	}
+	if n := mustEval[int](t, ctx, `document.querySelectorAll("img").length`); n != 0 {
+		t.Errorf("the page holds %d img elements: a name became markup", n)
+	}
+	click(t, ctx, "#export-all")
+	exported := mustEval[string](t, ctx, `document.getElementById("transfer").value`)
+	if exported != saved {
+		t.Errorf("export differs from what was saved:\n%s\n%s", exported, saved)
+	}
+
+	// A fresh browser imports the file.
+	mustEval[bool](t, ctx, `localStorage.removeItem("saltcast.recipes"), true`)
+	open(t, ctx, u)
+	mustEval[bool](t, ctx, `document.getElementById("transfer").value=`+strconv.Quote(exported)+`, true`)
+	click(t, ctx, "#import-btn")
+	click(t, ctx, "#export-all")
+	again := mustEval[string](t, ctx, `document.getElementById("transfer").value`)
+	if again != exported {
+		t.Errorf("after import the recipes differ:\n%s\nwant\n%s", again, exported)
+	}
+	rs, err := recipe.DecodeCollection([]byte(again))
+	if err != nil || len(rs) != 2 || rs[0].Name != hostileName {
+		t.Errorf("the imported collection reads back as %v, %v", rs, err)
+	}
+
+	// The hostile name opened on the batch screen and on the sheet is text too.
+	click(t, ctx, `#saved [data-open="0"]`)
+	if got := mustEval[string](t, ctx, `document.getElementById("s-name").textContent`); got != hostileName {
+		t.Errorf("sheet name = %q, want %q as text", got, hostileName)
+	}
+	if n := mustEval[int](t, ctx, `document.querySelectorAll("img").length`); n != 0 {
+		t.Errorf("the page holds %d img elements after opening the recipe", n)
+	}
+}
+
+// A corrupt import file changes nothing and says so.
+func TestCorruptImportLeavesSaved(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	resetStorage(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	click(t, ctx, "#save-btn")
+	before := mustEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`)
+	if before == "" {
+		t.Fatal("nothing saved")
+	}
+	for _, bad := range []string{
+		`{"format":1,"kind":"saltcast-recipes","recipes":[{"name":"ok","solute":"KNO3","water_g":100,"dissolve_temp_C":30},{"name":"bad","solute":"KNO3","water_g":-1,"dissolve_temp_C":30}]}`,
+		`{"format":1,"kind":"saltcast-recipes","recipes":[{"name":"cut`,
+		"\x00\x01 not a recipe file",
+	} {
+		mustEval[bool](t, ctx, `document.getElementById("transfer").value=`+strconv.Quote(bad)+`, true`)
+		click(t, ctx, "#import-btn")
+		if msg := mustEval[string](t, ctx, `document.getElementById("m-import").textContent`); !strings.HasPrefix(msg, "Nothing was imported") {
+			t.Errorf("import of %q says %q", bad, msg)
+		}
+		if after := mustEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`); after != before {
+			t.Errorf("import of %q changed the saved recipes to %s", bad, after)
+		}
+		if n := mustEval[int](t, ctx, `document.querySelectorAll("#saved li").length`); n != 1 {
+			t.Errorf("import of %q: %d recipes listed, want 1", bad, n)
+		}
+	}
+}
+
+// Printing shows the batch sheet, and it holds every caution and source of the plan.
+func TestPrintViewHasSourcesAndCautions(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="kno3"]`)
+	_, res := current(t, ctx)
+	if len(res.Cautions) == 0 || len(res.Sources) == 0 {
+		t.Fatalf("the example has %d cautions and %d sources; the test needs both", len(res.Cautions), len(res.Sources))
+	}
+	if err := emulatePrint(ctx); err != nil {
+		t.Fatal(err)
+	}
+	if d := mustEval[string](t, ctx, `getComputedStyle(document.getElementById("screen-sheet")).display`); d == "none" {
+		t.Fatal("the batch sheet is not shown in print")
+	}
+	if d := mustEval[string](t, ctx, `getComputedStyle(document.getElementById("screen-batch")).display`); d != "none" {
+		t.Error("the batch screen prints too")
+	}
+	text := mustEval[string](t, ctx, `document.getElementById("screen-sheet").innerText`)
+	for _, c := range res.Cautions {
+		if !strings.Contains(text, c) {
+			t.Errorf("printed sheet lacks the caution %q", c)
+		}
+	}
+	for _, s := range res.Sources {
+		if !strings.Contains(text, s) {
+			t.Errorf("printed sheet lacks the source %q", s)
+		}
+	}
+	for _, want := range []string{"Prepared by", "Checked by", "SDS"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("printed sheet lacks %q", want)
+		}
+	}
+	if v := mustEval[string](t, ctx, `document.querySelector('meta[name="saltcast-version"]').content`); v == "" || !strings.Contains(text, v) {
+		t.Errorf("printed sheet lacks the app version %q", v)
 	}
 }

@@ -130,6 +130,7 @@ func (a *app) start() {
 func (a *app) load(r recipe.Recipe) {
 	a.d = FromRecipe(r)
 	a.showDraft()
+	setValue(byID("save-name"), r.Name)
 	a.recompute()
 }
 
@@ -188,6 +189,9 @@ func (a *app) onRecipeInput(el js.Value, _ dom.Event) {
 		a.showFieldError(name, err)
 		if name == "solute" {
 			a.updateSolute(true)
+		}
+		if name == "name" {
+			setValue(byID("save-name"), a.d.Text["name"])
 		}
 		if strings.HasPrefix(name, "custom.") {
 			a.showFit()
@@ -260,6 +264,7 @@ func (a *app) setStale(s bool) {
 	setHidden(byID("stale"), !s)
 	out := byID("outcome")
 	classSet(out, "is-stale", s)
+	classSet(byID("strip"), "stale", s)
 }
 
 // showPlanError shows a recipe or plan error beside the field it names, or above the

@@ -146,9 +146,6 @@ func (a *app) renderShelf() {
 		setAttr(del, "data-delete", itoa(i))
 		setAttr(del, "aria-label", "Delete "+r.Name)
 	}
-	if value(byID("save-name")) == "" {
-		setValue(byID("save-name"), a.d.Text["name"])
-	}
 }
 
 func (a *app) onSavedClick(t js.Value, _ dom.Event) {

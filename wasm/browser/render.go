@@ -25,6 +25,8 @@ func (a *app) bindTiles() {
 			if p := el.Get("parentElement"); exists(p) {
 				t.unit = q(p, ".u")
 			}
+		} else if f.Kind == kText {
+			continue // words such as the form weighed already show beside their numbers
 		} else {
 			t.box = add(extra, "div", "fig", "")
 			add(t.box, "span", "lbl", f.Label)
@@ -55,6 +57,15 @@ func (a *app) render() {
 		if exists(t.box) && q(t.box, "output").Equal(t.out) {
 			setHidden(t.box, !ok)
 		}
+	}
+	for _, el := range qa(byID("strip"), "[data-strip]") {
+		text := "—"
+		if f, ok := FigureByKey(attr(el, "data-strip")); ok {
+			if s, _, ok := f.Show(r, a.u); ok {
+				text = s
+			}
+		}
+		setText(el, text)
 	}
 	cf := ""
 	if r.ChargedForm != "" {
