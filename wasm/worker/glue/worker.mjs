@@ -23,6 +23,33 @@ globalThis.tryCatch = (fn) => {
   }
 };
 
+// saltcastReadBody reads a request body stream for the Go program (main_js.go), in one
+// promise instead of one per chunk, and stops once it has more than limit bytes.
+globalThis.saltcastReadBody = async (stream, limit) => {
+  const reader = stream.getReader();
+  const chunks = [];
+  let n = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) {
+      break;
+    }
+    chunks.push(value);
+    n += value.byteLength;
+    if (n > limit) {
+      reader.cancel().catch(() => {});
+      break;
+    }
+  }
+  const body = new Uint8Array(n);
+  let at = 0;
+  for (const c of chunks) {
+    body.set(c, at);
+    at += c.byteLength;
+  }
+  return body;
+};
+
 // running is the Go program serving this isolate: { go, binding } once ready.
 let running;
 
