@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"saltcast/core/gas"
 	"saltcast/core/recipe"
 )
 
@@ -247,5 +248,35 @@ func TestPrintViewHasSourcesAndCautions(t *testing.T) {
 	}
 	if v := mustEval[string](t, ctx, `document.querySelector('meta[name="saltcast-version"]').content`); v == "" || !strings.Contains(text, v) {
 		t.Errorf("printed sheet lacks the app version %q", v)
+	}
+}
+
+// The gas screen shows the day's O2 saturation as the core computes it.
+func TestGasScreen(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, "#tab-gas")
+	mustEval[bool](t, ctx, `document.querySelector('#units [name="unit_temp"]').value="C", document.querySelector('#units [name="unit_temp"]').dispatchEvent(new Event("change",{bubbles:true})), true`)
+	setField(t, ctx, "gas", "temp_C", "12")
+	setField(t, ctx, "gas", "salinity", "0")
+	setField(t, ctx, "gas", "pressure_kPa", "101,325")
+	got := outputNumber(t, ctx, "saturation_mg_per_L")
+	want, err := gas.OxygenSaturation(gas.Conditions{TempC: 12, PressureKPa: 101.325}, gas.BensonKrause)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(got-want.MgPerL) > shownTol*want.MgPerL {
+		t.Errorf("saturation_mg_per_L = %v, core says %v", got, want.MgPerL)
+	}
+	// Fresh water at 12 °C and 760 mm Hg: 10.77 mg/L (USGS dissolved-oxygen solubility
+	// table after Benson & Krause; from memory). gasTol is the table's last digit plus memory.
+	const gasTol = 0.05
+	if math.Abs(got-10.77) > gasTol {
+		t.Errorf("saturation at 12 °C = %v mg/L, want about 10.77", got)
+	}
+	setField(t, ctx, "gas", "measured_mg_per_L", "8")
+	if pct := outputNumber(t, ctx, "percent_saturation"); math.Abs(pct-100*8/got) > 0.1 {
+		t.Errorf("percent_saturation = %v, want 100·8/%v", pct, got)
 	}
 }

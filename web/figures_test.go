@@ -47,28 +47,32 @@ func TestFigures(t *testing.T) {
 	}
 	t.Logf("page dist/saltcast.html: %d bytes (%.2f MB)", fi.Size(), float64(fi.Size())/1e6)
 
-	// What stripping and wasm-opt buy, on the same source.
+	// What each build step buys, on the same source.
+	const pkg = "./wasm/browser"
 	for _, v := range []struct {
 		name string
 		cfg  web.Config
 	}{
-		{"no -s -w, no wasm-opt", web.Config{Dir: "..", Package: "./wasm/browser", KeepSymbols: true}},
-		{"-s -w", web.Config{Dir: "..", Package: "./wasm/browser"}},
-		{"-s -w, wasm-opt " + web.DefaultWasmOpt, web.Config{Dir: "..", Package: "./wasm/browser", WasmOpt: web.DefaultWasmOpt}},
+		{"plain go build, compress/gzip", web.Config{Package: pkg, KeepSymbols: true, KeepInlining: true, Gzip: "go"}},
+		{"-s -w", web.Config{Package: pkg, KeepInlining: true, Gzip: "go"}},
+		{"-s -w, no inlining", web.Config{Package: pkg, Gzip: "go"}},
+		{"-s -w, no inlining, zopfli", web.Config{Package: pkg, Gzip: "zopfli"}},
+		{"-s -w, no inlining, wasm-opt " + web.DefaultWasmOpt + ", zopfli", web.Config{Package: pkg, WasmOpt: web.DefaultWasmOpt, Gzip: "zopfli"}},
 	} {
-		if v.cfg.WasmOpt != "" && !haveWasmOpt() {
-			t.Logf("size %-28s wasm-opt not installed", v.name)
+		v.cfg.Dir = ".."
+		if (v.cfg.WasmOpt != "" && !have("wasm-opt")) || (v.cfg.Gzip == "zopfli" && !have("zopfli")) {
+			t.Logf("size %-44s tool not installed", v.name)
 			continue
 		}
 		_, rep, err := web.Build(v.cfg)
 		if err != nil {
 			t.Fatal(err)
 		}
-		t.Logf("size %-28s wasm %8d B  after opt %8d B  gzip %7d B  page %8d B", v.name, rep.WasmBytes, rep.OptBytes, rep.GzipBytes, rep.PageBytes)
+		t.Logf("size %-44s wasm %8d B  after opt %8d B  gzip %8d B  page %8d B", v.name, rep.WasmBytes, rep.OptBytes, rep.GzipBytes, rep.PageBytes)
 	}
 
 	// The floor: the smallest Go program, inlined the same way.
-	floor, rep, err := web.Build(web.Config{Dir: "..", Package: "./web/floor", WasmOpt: optIfInstalled()})
+	floor, rep, err := web.Build(web.Config{Dir: "..", Package: "./web/floor"})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -114,16 +118,9 @@ func loadTimes(t *testing.T, ctx context.Context, u string) []float64 {
 	return ms
 }
 
-func haveWasmOpt() bool {
-	_, err := exec.LookPath("wasm-opt")
+func have(tool string) bool {
+	_, err := exec.LookPath(tool)
 	return err == nil
-}
-
-func optIfInstalled() string {
-	if haveWasmOpt() {
-		return web.DefaultWasmOpt
-	}
-	return ""
 }
 
 func median(v []float64) float64 {

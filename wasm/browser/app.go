@@ -43,6 +43,11 @@ type app struct {
 	planErr  string // the field that the last plan error is shown beside
 	compound *compound.Compound
 
+	sheetDirty bool // the batch sheet shows an older plan
+	gasShown   bool // the gas screen has been opened, so it follows the unit switch
+	pending    []func()
+	tick       js.Func
+
 	recipeForm js.Value
 	inputs     map[string]js.Value // recipe inputs by name
 	msgs       map[string]js.Value // the message beside each input
@@ -118,12 +123,36 @@ func (a *app) start() {
 		b := b
 		on(b, "click", func(js.Value, dom.Event) { a.print(attr(b, "data-print")) })
 	}
-	win.AddEventListener("beforeprint", false, func(dom.Event) { setText(byID("s-date"), today()) })
+	win.AddEventListener("beforeprint", false, func(dom.Event) {
+		a.sheetIfDirty()
+		setText(byID("s-date"), today())
+	})
+	// Print media emulated or chosen without beforeprint (some print paths) still get a
+	// current sheet.
+	if mq := js.Global().Call("matchMedia", "print"); exists(mq) {
+		var f js.Func
+		f = js.FuncOf(func(js.Value, []js.Value) any { a.sheetIfDirty(); return nil })
+		mq.Call("addEventListener", "change", f)
+	}
+	a.tick = js.FuncOf(func(js.Value, []js.Value) any {
+		p := a.pending
+		a.pending = nil
+		for _, f := range p {
+			f()
+		}
+		return nil
+	})
 	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
 	a.bindBox()
-	a.startGas()
-
 	a.load(start)
+}
+
+// later runs f once the browser has painted what is on screen now (a zero timeout).
+func (a *app) later(f func()) {
+	if len(a.pending) == 0 {
+		js.Global().Call("setTimeout", a.tick, 0)
+	}
+	a.pending = append(a.pending, f)
 }
 
 // load shows recipe r in the form and plans it.
@@ -464,7 +493,9 @@ func (a *app) onUnits(js.Value, dom.Event) {
 	if a.last != nil {
 		a.render()
 	}
-	a.recomputeGas()
+	if a.gasShown {
+		a.recomputeGas()
+	}
 }
 
 func (a *app) showUnitLabels() {
@@ -490,13 +521,21 @@ func (a *app) showScreen(name string) {
 		}
 		setHidden(byID("screen-"+attr(b, "data-screen")), !sel)
 	}
-	if name == "sheet" {
+	switch name {
+	case "sheet":
+		a.sheetIfDirty()
 		setText(byID("s-date"), today())
+	case "gas":
+		if !a.gasShown {
+			a.gasShown = true
+			a.startGas()
+		}
 	}
 }
 
 func (a *app) print(what string) {
 	classSet(doc.Get("body"), "print-gas", what == "gas")
+	a.sheetIfDirty()
 	setText(byID("s-date"), today())
 	js.Global().Call("print")
 }

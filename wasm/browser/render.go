@@ -10,6 +10,7 @@ import (
 	"saltcast/core/recipe"
 	"saltcast/core/solubility"
 	"saltcast/core/unit"
+	"saltcast/core/wire"
 )
 
 // bindTiles finds the element of each Figure on the batch screen, making a small tile in
@@ -71,7 +72,7 @@ func (a *app) render() {
 	if r.ChargedForm != "" {
 		cf = "of " + r.ChargedForm
 		if r.PurityPct > 0 && r.PurityPct < 100 {
-			cf += " at " + unit.FormatNumber(r.PurityPct, 4) + " % purity"
+			cf += " at " + exact(wire.RoundSig(r.PurityPct, 4)) + " % purity"
 		}
 	}
 	setText(byID("charge-form"), cf)
@@ -84,7 +85,19 @@ func (a *app) render() {
 	a.lastSVG = a.chartSVG(r)
 	setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
 	a.renderProgramme()
-	a.renderSheet()
+	if !a.sheetDirty {
+		a.sheetDirty = true
+		a.later(a.sheetIfDirty)
+	}
+}
+
+// sheetIfDirty brings the batch sheet up to date. The sheet is drawn after the batch screen
+// (in a timeout, on showing it, and before printing) so typing stays quick.
+func (a *app) sheetIfDirty() {
+	if a.sheetDirty && a.last != nil {
+		a.sheetDirty = false
+		a.renderSheet()
+	}
 }
 
 func orNone(s []string) []string {
@@ -326,7 +339,7 @@ func (a *app) renderSheet() {
 	}
 	row(in, "Solute", solute)
 	row(in, "Form on the shelf", r.ChargedForm)
-	row(in, "Purity", unit.FormatNumber(r.PurityPct, 4)+" %")
+	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" %")
 	d := FromRecipe(r.Recipe)
 	for _, k := range []struct{ key, label string }{
 		{"water_g", "Water"}, {"water_mL", "Water (volume)"}, {"water_temp_C", "measured at"},
