@@ -1,0 +1,658 @@
+package recipe
+
+import (
+	"bytes"
+	"errors"
+	"strconv"
+	"strings"
+	"unicode/utf8"
+
+	"saltcast/core/unit"
+	"saltcast/core/wire"
+)
+
+// A Saltcast page can carry recipes to whoever opens it: a copy of the app's HTML with one
+// inert block
+//
+//	<script type="application/x-saltcast-recipes" id="saltcast-carried">{...}</script>
+//
+// The type is not a JavaScript type, so the browser never runs the block, and the page's
+// Content-Security-Policy does not need to change. The block holds one JSON object of
+// carried format 1:
+//
+//	{"format":1,"kind":"saltcast-carried-recipes","app_version":"v1.2","saved_at":"2026-12-01T09:30:00Z",
+//	 "sent_by":"R. Ilves","recipes":{<a recipe collection file>},"crc32":"0a1b2c3d"}
+//
+// "crc32" is the CRC-32 of the canonical encoding of the object without "crc32" (the
+// bytes EncodeCarried writes up to that key), so any changed value, lost recipe or cut
+// text is refused, while a mail program that turns LF into CR LF changes nothing. A CRC
+// guards against accident, not against someone who means harm (no checksum without a
+// secret key could), so the recipes read from a block are checked exactly like recipes
+// typed in. CRC-32 rather than SHA-256 because crypto/sha256 adds about 73 KB of gzip to
+// the page (it brings os, AES and a random generator with it) and a table CRC-32 about
+// 0.4 KB, measured on the browser build; both catch every accidental change that matters
+// here.
+
+// Names and limits of the carried-recipes block.
+const (
+	CarriedFormat = 1                                // the carried format this Saltcast writes and the newest it reads
+	CarriedKind   = "saltcast-carried-recipes"       // the "kind" of a carried block
+	CarriedType   = "application/x-saltcast-recipes" // the type attribute of the <script> element
+	CarriedID     = "saltcast-carried"               // the id attribute of the <script> element
+
+	// MaxCarrierBytes bounds a file read by ExtractCarried: a Saltcast page is about
+	// 1.5 MB and a full collection at most MaxCollectionBytes.
+	MaxCarrierBytes = 16 << 20
+
+	maxSentBy     = 200
+	maxAppVersion = 100
+)
+
+// Carried is the content of a carried-recipes block, or of a JSON export read by
+// ExtractCarried.
+type Carried struct {
+	AppVersion string   // "app_version": the version of the Saltcast that saved the copy
+	SavedAt    string   // "saved_at": when, as 2026-12-01T09:30:00Z (UTC); "" if not known
+	SentBy     string   // "sent_by": who saved it, as they typed it; may be ""
+	Recipes    []Recipe // "recipes": a recipe collection
+
+	// Sealed reports that the recipes came in a carried block whose checksum matched.
+	// Recipes read from a plain JSON export have no checksum and Sealed false.
+	Sealed bool
+}
+
+// The kinds of error ExtractCarried returns; test them with errors.Is. Each comes inside a
+// *CarryError that says more.
+var (
+	ErrNoRecipes   = errors.New("this file carries no Saltcast recipes")
+	ErrMalformed   = errors.New("the recipes in this file are damaged or not in a Saltcast format")
+	ErrChecksum    = errors.New("the recipes block was changed or cut short after it was saved (its checksum does not match)")
+	ErrNewerFormat = errors.New("the recipes were saved by a newer Saltcast; update Saltcast to read them")
+)
+
+// CarryError is an error of ExtractCarried or WithCarried: Kind is one of the Err values
+// above (or nil when the carried content itself was refused) and Err, when set, the
+// detail, often a *unit.FieldError naming the key or a *wire.SyntaxError giving the line.
+type CarryError struct {
+	Kind error
+	Err  error
+}
+
+func (e *CarryError) Error() string {
+	switch {
+	case e.Kind == nil:
+		return e.Err.Error()
+	case e.Err == nil:
+		return e.Kind.Error()
+	}
+	return e.Kind.Error() + ": " + e.Err.Error()
+}
+
+// Unwrap gives both the kind and the detail to errors.Is and errors.As.
+func (e *CarryError) Unwrap() []error {
+	var out []error
+	if e.Kind != nil {
+		out = append(out, e.Kind)
+	}
+	if e.Err != nil {
+		out = append(out, e.Err)
+	}
+	return out
+}
+
+func carryErr(kind, err error) error { return &CarryError{Kind: kind, Err: err} }
+
+// EncodeCarried writes c as the JSON of a carried block, checksum last. It refuses what
+// ExtractCarried would refuse (too many recipes, too long a sender or version text, a
+// SavedAt not of the form 2026-12-01T09:30:00Z), naming the key. The output contains no
+// '<', so it cannot end the <script> element that holds it.
+func EncodeCarried(c Carried) ([]byte, error) {
+	if err := c.check(); err != nil {
+		return nil, err
+	}
+	body := c.body()
+	out := make([]byte, 0, len(body)+24)
+	out = append(out, body...)
+	out = append(out, `,"crc32":"`...)
+	out = appendHex32(out, crc32(body))
+	out = append(out, `"}`...)
+	return out, nil
+}
+
+// body is the canonical encoding of c without the checksum and without the closing
+// brace: the bytes the checksum covers.
+func (c Carried) body() []byte {
+	coll := EncodeCollection(c.Recipes)
+	var e wire.Encoder
+	e.Grow(len(coll) + 256)
+	e.BeginObject()
+	e.Key("format").Int(CarriedFormat)
+	e.Key("kind").String(CarriedKind)
+	e.Key("app_version").String(c.AppVersion)
+	e.Key("saved_at").String(c.SavedAt)
+	e.Key("sent_by").String(c.SentBy)
+	e.Key("recipes").BeginObject().EndObject() // a place holder, replaced below
+	e.EndObject()
+	b, err := e.Bytes()
+	if err != nil {
+		panic("recipe: carried header: " + err.Error()) // only strings and an int were written
+	}
+	// b ends in `"recipes":{}}`; put the collection in place of {} and drop the last brace.
+	b = b[:len(b)-3]
+	return append(b, coll...)
+}
+
+// check applies the limits ExtractCarried applies.
+func (c Carried) check() error {
+	fe := func(field, value, allowed string) error {
+		return &CarryError{Err: &unit.FieldError{Field: field, Value: value, Allowed: allowed}}
+	}
+	switch {
+	case len(c.Recipes) > MaxCollectionRecipes:
+		return fe("recipes", strconv.Itoa(len(c.Recipes))+" recipes",
+			"at most "+strconv.Itoa(MaxCollectionRecipes)+" recipes in one copy")
+	case len(c.SentBy) > maxSentBy || !utf8.ValidString(c.SentBy):
+		return fe("sent_by", clip(c.SentBy), "a name of at most "+strconv.Itoa(maxSentBy)+" bytes of UTF-8 text")
+	case len(c.AppVersion) > maxAppVersion || !utf8.ValidString(c.AppVersion):
+		return fe("app_version", clip(c.AppVersion), "a version of at most "+strconv.Itoa(maxAppVersion)+" bytes of UTF-8 text")
+	case c.SavedAt != "" && !isStamp(c.SavedAt):
+		return fe("saved_at", clip(c.SavedAt), "a UTC time written 2026-12-01T09:30:00Z, or nothing")
+	}
+	for i, r := range c.Recipes {
+		if err := r.encodable(); err != nil {
+			return fe("recipes["+strconv.Itoa(i)+"]", clip(r.Name), err.Error())
+		}
+	}
+	return nil
+}
+
+// encodable reports what would make Encode panic or Decode refuse the text of r: texts
+// longer than Decode reads. Numbers are the caller's: a Recipe from Decode is always fine.
+func (r Recipe) encodable() error {
+	for _, t := range []struct {
+		s   string
+		max int
+	}{{r.Name, maxTextName}, {r.Notes, maxTextNote}, {r.Solute, maxTextName}, {r.ChargedForm, maxTextName}} {
+		if len(t.s) > t.max {
+			return errors.New("texts of at most " + strconv.Itoa(t.max) + " bytes")
+		}
+	}
+	var e wire.Encoder
+	r.encode(&e)
+	if _, err := e.Bytes(); err != nil {
+		return errors.New("finite numbers only")
+	}
+	return nil
+}
+
+// CarriedBlock returns the whole <script> element that carries c.
+func CarriedBlock(c Carried) ([]byte, error) {
+	js, err := EncodeCarried(c)
+	if err != nil {
+		return nil, err
+	}
+	var b bytes.Buffer
+	b.Grow(len(js) + 96)
+	b.WriteString(`<script type="` + CarriedType + `" id="` + CarriedID + `">`)
+	b.Write(js)
+	b.WriteString("</script>")
+	return b.Bytes(), nil
+}
+
+// WithCarried returns a copy of page, the app's own HTML, carrying c: the page's carried
+// block, empty or not, is replaced; a page without one gets it just before </body>. page
+// itself is not changed. A page with more than one block, or with neither a block nor
+// </body>, is refused: it is not a page Saltcast wrote.
+func WithCarried(page []byte, c Carried) ([]byte, error) {
+	block, err := CarriedBlock(c)
+	if err != nil {
+		return nil, err
+	}
+	found, bodyEnd, err := scanBlocks(page)
+	if err != nil {
+		return nil, err
+	}
+	var at, end int
+	switch len(found) {
+	case 0:
+		at = bodyEnd
+		if at < 0 {
+			return nil, carryErr(ErrMalformed, errors.New("the page has no </body>, so it is not a Saltcast page"))
+		}
+		end = at
+	case 1:
+		at, end = found[0].start, found[0].end
+	default:
+		return nil, carryErr(ErrMalformed, errors.New("the page holds "+strconv.Itoa(len(found))+" recipes blocks; a Saltcast page has one"))
+	}
+	out := make([]byte, 0, len(page)-(end-at)+len(block)+1)
+	out = append(out, page[:at]...)
+	out = append(out, block...)
+	if len(found) == 0 {
+		out = append(out, '\n')
+	}
+	return append(out, page[end:]...), nil
+}
+
+// ExtractCarried reads the recipes a file carries without running anything in it: a
+// Saltcast HTML page with a carried block, the JSON of a carried block, a recipe
+// collection file (a JSON export) or a single recipe. It is all or nothing: on any error
+// the Carried is empty, and the error is a *CarryError of kind ErrNoRecipes (a page or
+// file with no recipes, or an empty block), ErrMalformed (not our format, broken JSON, a
+// recipe that does not read — the detail names the key), ErrChecksum or ErrNewerFormat.
+// Recipes without a name are refused too, since recipes are kept by name.
+func ExtractCarried(data []byte) (Carried, error) {
+	if len(data) > MaxCarrierBytes {
+		return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: "file",
+			Value: strconv.Itoa(len(data)) + " bytes", Allowed: "a file of at most " + strconv.Itoa(MaxCarrierBytes>>20) + " MB"})
+	}
+	text := bytes.TrimLeft(bytes.TrimPrefix(data, []byte("\xEF\xBB\xBF")), " \t\r\n")
+	if len(text) == 0 {
+		return Carried{}, carryErr(ErrNoRecipes, nil)
+	}
+	if text[0] == '{' || text[0] == '[' {
+		return readCarriedJSON(text, false)
+	}
+	found, _, err := scanBlocks(data)
+	if err != nil {
+		return Carried{}, err
+	}
+	switch len(found) {
+	case 0:
+		return Carried{}, carryErr(ErrNoRecipes, nil)
+	case 1:
+	default:
+		return Carried{}, carryErr(ErrMalformed, errors.New("the file holds "+strconv.Itoa(len(found))+" recipes blocks; a Saltcast page has one"))
+	}
+	inner := bytes.TrimSpace(data[found[0].textStart:found[0].textEnd])
+	if len(inner) == 0 {
+		return Carried{}, carryErr(ErrNoRecipes, nil)
+	}
+	return readCarriedJSON(inner, true)
+}
+
+// readCarriedJSON reads a carried block, a collection or a single recipe. inBlock says the
+// JSON came from a carried block in a page, where only the carried format belongs.
+func readCarriedJSON(text []byte, inBlock bool) (Carried, error) {
+	v, err := wire.DecodeLimits(text, wire.Limits{MaxBytes: MaxCollectionBytes + 64<<10, MaxDepth: 32})
+	if err != nil {
+		return Carried{}, carryErr(ErrMalformed, err)
+	}
+	if v.Kind != wire.Object {
+		return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: "file", Value: v.Kind.String(),
+			Allowed: "a JSON object: a Saltcast recipe, recipe collection or carried block"})
+	}
+	kind, _ := v.Get("kind")
+	if inBlock {
+		// A newer Saltcast may name its blocks differently; say "update" before "damaged".
+		if err := newer(v, CarriedFormat); err != nil {
+			return Carried{}, err
+		}
+	}
+	if kind.Kind == wire.String && kind.Text == CarriedKind {
+		return readCarriedValue(v)
+	}
+	if inBlock {
+		return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: "kind", Value: literal(kind),
+			Allowed: `"` + CarriedKind + `" in a recipes block`})
+	}
+	if err := newer(v, CurrentFormat); err != nil {
+		return Carried{}, err
+	}
+	var rs []Recipe
+	if _, ok := v.Get("kind"); ok {
+		rs, err = DecodeCollection(text)
+	} else {
+		var r Recipe
+		if r, err = fromValue(v, ""); err == nil {
+			rs = []Recipe{r}
+		}
+	}
+	if err != nil {
+		return Carried{}, carryErr(ErrMalformed, err)
+	}
+	if err := named(rs); err != nil {
+		return Carried{}, err
+	}
+	if len(rs) == 0 {
+		return Carried{}, carryErr(ErrNoRecipes, nil)
+	}
+	return Carried{Recipes: rs}, nil
+}
+
+// readCarriedValue reads the object of a carried block and checks its checksum.
+func readCarriedValue(v wire.Value) (Carried, error) {
+	if err := newer(v, CarriedFormat); err != nil {
+		return Carried{}, err
+	}
+	var c Carried
+	var coll wire.Value
+	var sum string
+	d := reader{}
+	for _, m := range v.Members {
+		switch m.Key {
+		case "format":
+			d.format(m.Value)
+		case "kind":
+			// already checked by the caller
+		case "app_version":
+			c.AppVersion = d.text(m.Key, m.Value, maxAppVersion)
+		case "saved_at":
+			c.SavedAt = d.text(m.Key, m.Value, 40)
+			if d.err == nil && c.SavedAt != "" && !isStamp(c.SavedAt) {
+				d.fail(m.Key, c.SavedAt, "a UTC time written 2026-12-01T09:30:00Z, or nothing")
+			}
+		case "sent_by":
+			c.SentBy = d.text(m.Key, m.Value, maxSentBy)
+		case "recipes":
+			if m.Value.Kind != wire.Object {
+				d.fail(m.Key, literal(m.Value), "a recipe collection {\"format\":1,\"kind\":\""+CollectionKind+"\",\"recipes\":[...]}")
+			}
+			coll = m.Value
+		case "crc32":
+			sum = d.text(m.Key, m.Value, 8)
+			if d.err == nil && !isHex32(sum) {
+				d.fail(m.Key, sum, "8 lowercase hexadecimal digits")
+			}
+		default:
+			d.fail(m.Key, m.Key, "one of the keys of a recipes block: format, kind, app_version, saved_at, sent_by, recipes, crc32")
+		}
+		if d.err != nil {
+			return Carried{}, carryErr(ErrMalformed, d.err)
+		}
+	}
+	for _, k := range []string{"format", "app_version", "saved_at", "sent_by", "recipes", "crc32"} {
+		if _, ok := v.Get(k); !ok {
+			return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: k, Value: "",
+				Allowed: "the key " + k + " (every recipes block has it)"})
+		}
+	}
+	if err := newer(coll, CurrentFormat); err != nil {
+		return Carried{}, err
+	}
+	collJSON, err := wire.Encode(coll)
+	if err != nil {
+		return Carried{}, carryErr(ErrMalformed, err)
+	}
+	if c.Recipes, err = DecodeCollection(collJSON); err != nil {
+		return Carried{}, carryErr(ErrMalformed, err)
+	}
+	if crc32(c.body()) != parseHex32(sum) {
+		return Carried{}, carryErr(ErrChecksum, nil)
+	}
+	if err := named(c.Recipes); err != nil {
+		return Carried{}, err
+	}
+	if len(c.Recipes) == 0 {
+		return Carried{}, carryErr(ErrNoRecipes, nil)
+	}
+	c.Sealed = true
+	return c, nil
+}
+
+// newer refuses an object whose "format" is a number above max, before its keys are read
+// (a newer format may have keys this Saltcast does not know).
+func newer(v wire.Value, max int) error {
+	f, ok := v.Get("format")
+	if ok && f.Kind == wire.Number && f.Num > float64(max) {
+		return carryErr(ErrNewerFormat, &unit.FieldError{Field: "format", Value: f.Text,
+			Allowed: "format " + strconv.Itoa(max) + " or older"})
+	}
+	return nil
+}
+
+// named refuses recipes without a name: the recipe box keeps recipes by name.
+func named(rs []Recipe) error {
+	for i, r := range rs {
+		if strings.TrimSpace(r.Name) == "" {
+			return carryErr(ErrMalformed, &unit.FieldError{Field: "recipes[" + strconv.Itoa(i) + "].name", Value: "",
+				Allowed: "a name for every recipe (recipes are kept by name)"})
+		}
+	}
+	return nil
+}
+
+// block is where a carried <script> element sits in a page: [start, end) is the whole
+// element, [textStart, textEnd) its text.
+type block struct{ start, textStart, textEnd, end int }
+
+// scanBlocks finds the carried blocks of an HTML page without building a DOM: it walks the
+// markup as the HTML tokenizer does for what matters here, stepping over comments and over
+// the text of <script>, <style>, <textarea> and <title> elements (where "<script" is only
+// text), and reads the attributes of every <script> start tag. A carried block that never
+// ends is malformed (the file was cut short). bodyEnd is where the last </body> tag
+// outside such text starts, or -1.
+func scanBlocks(page []byte) (found []block, bodyEnd int, err error) {
+	bodyEnd = -1
+	for i := 0; i < len(page); {
+		lt := bytes.IndexByte(page[i:], '<')
+		if lt < 0 {
+			break
+		}
+		i += lt
+		if bytes.HasPrefix(page[i:], []byte("<!--")) {
+			end := bytes.Index(page[i+4:], []byte("-->"))
+			if end < 0 {
+				break
+			}
+			i += 4 + end + 3
+			continue
+		}
+		if i+1 < len(page) && page[i+1] == '/' {
+			if name, _ := tagName(page, i+2); name == "body" {
+				bodyEnd = i
+			}
+			i += 2
+			continue
+		}
+		name, nameEnd := tagName(page, i+1)
+		if name == "" {
+			i++
+			continue
+		}
+		attrs, tagEnd := readAttrs(page, nameEnd)
+		if tagEnd < 0 {
+			break // a start tag cut short: nothing after it is markup
+		}
+		switch name {
+		case "script", "style", "textarea", "title":
+		default:
+			i = tagEnd
+			continue
+		}
+		closing := indexFold(page, tagEnd, "</"+name)
+		carried := name == "script" && strings.EqualFold(strings.TrimSpace(attrs["type"]), CarriedType)
+		if closing < 0 {
+			if carried {
+				return nil, bodyEnd, carryErr(ErrMalformed, errors.New("the recipes block has no end: the file was cut short"))
+			}
+			break
+		}
+		end := bytes.IndexByte(page[closing:], '>')
+		if end < 0 {
+			end = len(page)
+		} else {
+			end += closing + 1
+		}
+		if carried {
+			found = append(found, block{start: i, textStart: tagEnd, textEnd: closing, end: end})
+		}
+		i = end
+	}
+	return found, bodyEnd, nil
+}
+
+// tagName reads a start tag's name at p (just after '<'), lower-cased; "" if p does not
+// start one.
+func tagName(page []byte, p int) (string, int) {
+	start := p
+	for p < len(page) && (isASCIILetter(page[p]) || (p > start && page[p] >= '0' && page[p] <= '9')) {
+		p++
+	}
+	if p == start {
+		return "", p
+	}
+	return strings.ToLower(string(page[start:p])), p
+}
+
+// readAttrs reads attributes from p up to and including the '>' that ends the tag, and
+// returns them (names lower-cased, first occurrence wins as in HTML) with the index after
+// the '>'; -1 if the tag never ends.
+func readAttrs(page []byte, p int) (map[string]string, int) {
+	attrs := map[string]string{}
+	for p < len(page) {
+		c := page[p]
+		switch {
+		case c == '>':
+			return attrs, p + 1
+		case isHTMLSpace(c) || c == '/':
+			p++
+			continue
+		}
+		start := p
+		p++ // the first character belongs to the name, even an '='
+		for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' && page[p] != '/' && page[p] != '=' {
+			p++
+		}
+		name := strings.ToLower(string(page[start:p]))
+		for p < len(page) && isHTMLSpace(page[p]) {
+			p++
+		}
+		val := ""
+		if p < len(page) && page[p] == '=' {
+			p++
+			for p < len(page) && isHTMLSpace(page[p]) {
+				p++
+			}
+			if p < len(page) && (page[p] == '"' || page[p] == '\'') {
+				q := page[p]
+				end := bytes.IndexByte(page[p+1:], q)
+				if end < 0 {
+					return attrs, -1
+				}
+				val = string(page[p+1 : p+1+end])
+				p += end + 2
+			} else {
+				vs := p
+				for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' {
+					p++
+				}
+				val = string(page[vs:p])
+			}
+		}
+		if _, dup := attrs[name]; !dup {
+			attrs[name] = val
+		}
+	}
+	return attrs, -1
+}
+
+// indexFold finds sub (ASCII, starting with '<') in page from p on, ignoring ASCII case;
+// -1 if absent.
+func indexFold(page []byte, p int, sub string) int {
+	for i := p; i+len(sub) <= len(page); i++ {
+		j := bytes.IndexByte(page[i:len(page)-len(sub)+1], sub[0])
+		if j < 0 {
+			return -1
+		}
+		i += j
+		if bytes.EqualFold(page[i:i+len(sub)], []byte(sub)) {
+			return i
+		}
+	}
+	return -1
+}
+
+func isHTMLSpace(c byte) bool   { return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' }
+func isASCIILetter(c byte) bool { return c|0x20 >= 'a' && c|0x20 <= 'z' }
+
+// isStamp reports whether s reads 2026-12-01T09:30:00Z: digits where the digits go.
+func isStamp(s string) bool {
+	const shape = "dddd-dd-ddTdd:dd:ddZ"
+	if len(s) != len(shape) {
+		return false
+	}
+	for i := 0; i < len(s); i++ {
+		if shape[i] == 'd' {
+			if s[i] < '0' || s[i] > '9' {
+				return false
+			}
+		} else if s[i] != shape[i] {
+			return false
+		}
+	}
+	return true
+}
+
+// clip shortens a text for an error message.
+func clip(s string) string {
+	if len(s) <= 40 {
+		return s
+	}
+	n := 40
+	for n > 0 && !utf8.RuneStart(s[n]) {
+		n--
+	}
+	return s[:n] + "…"
+}
+
+// crcTable is the table of the reflected CRC-32 of IEEE 802.3 (polynomial 0xEDB88320).
+// A dozen lines instead of hash/crc32, which costs 2.8 KB of gzip in the page (measured).
+var crcTable = func() (t [256]uint32) {
+	for i := range t {
+		c := uint32(i)
+		for range 8 {
+			if c&1 != 0 {
+				c = 0xEDB88320 ^ c>>1
+			} else {
+				c >>= 1
+			}
+		}
+		t[i] = c
+	}
+	return t
+}()
+
+// crc32 is CRC-32/ISO-HDLC (the CRC of zip, PNG and Ethernet): check value 0xCBF43926
+// for "123456789".
+func crc32(b []byte) uint32 {
+	c := ^uint32(0)
+	for _, x := range b {
+		c = crcTable[byte(c)^x] ^ c>>8
+	}
+	return ^c
+}
+
+func appendHex32(b []byte, v uint32) []byte {
+	const digits = "0123456789abcdef"
+	for s := 28; s >= 0; s -= 4 {
+		b = append(b, digits[v>>uint(s)&0xF])
+	}
+	return b
+}
+
+func isHex32(s string) bool {
+	if len(s) != 8 {
+		return false
+	}
+	for i := 0; i < 8; i++ {
+		c := s[i]
+		if !(c >= '0' && c <= '9' || c >= 'a' && c <= 'f') {
+			return false
+		}
+	}
+	return true
+}
+
+func parseHex32(s string) uint32 {
+	var v uint32
+	for i := 0; i < len(s); i++ {
+		c := s[i]
+		d := uint32(c - '0')
+		if c >= 'a' {
+			d = uint32(c-'a') + 10
+		}
+		v = v<<4 | d
+	}
+	return v
+}
