@@ -91,21 +91,27 @@ func TestFigures(t *testing.T) {
 	t.Logf("  floor loads ms: %v", fmtMs(floorMs))
 
 	open(t, ctx, app)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	// Each run changes one input, as a technician does: the water (results change, the
+	// chart does not, since it is drawn per 100 g water) or the target temperature (results
+	// and chart change). The first warmup runs let the browser's compiler settle.
+	const warmup = 20
 	times := mustEval[[]float64](t, ctx, `(function(){
-		const el = document.querySelector('#recipe [name="water_g"]');
+		const water = document.querySelector('#recipe [name="water_g"]');
+		const cool = document.querySelector('#recipe [name="cool_to_C"]');
 		const out = [];
-		for (let i = 0; i < `+strconv.Itoa(recomputes)+`; i++) {
+		for (let i = 0; i < `+strconv.Itoa(warmup+recomputes)+`; i++) {
 			const t0 = performance.now();
-			el.value = String(900 + (i % 7) * 25);
-			el.dispatchEvent(new Event("input", {bubbles: true}));
+			if (i % 2 == 0) { water.value = String(900 + (i % 7) * 25); water.dispatchEvent(new Event("input", {bubbles: true})); }
+			else { cool.value = String(10 + (i % 9)); cool.dispatchEvent(new Event("input", {bubbles: true})); }
 			document.body.offsetHeight; // include style and layout
 			out.push(performance.now() - t0);
 		}
-		return out;
+		return out.slice(`+strconv.Itoa(warmup)+`);
 	})()`)
 	slices.Sort(times)
 	p95 := times[len(times)*95/100]
-	t.Logf("recompute after one input (DOM, chart, layout), %d runs: median %.2f ms, p95 %.2f ms (aim ≤ 8 ms)", len(times), median(times), p95)
+	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ 8 ms)", len(times), warmup, median(times), p95, times[len(times)-1])
 }
 
 func loadTimes(t *testing.T, ctx context.Context, u string) []float64 {

@@ -43,8 +43,9 @@ type app struct {
 	planErr  string // the field that the last plan error is shown beside
 	compound *compound.Compound
 
-	sheetDirty bool // the batch sheet shows an older plan
-	gasShown   bool // the gas screen has been opened, so it follows the unit switch
+	shown      map[string]string // what parts of the page show now (see changed)
+	sheetDirty bool              // the batch sheet shows an older plan
+	gasShown   bool              // the gas screen has been opened, so it follows the unit switch
 	pending    []func()
 	tick       js.Func
 

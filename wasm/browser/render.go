@@ -3,6 +3,7 @@
 package main
 
 import (
+	"strings"
 	"syscall/js"
 
 	"saltcast/core/chart"
@@ -49,8 +50,10 @@ func (a *app) render() {
 		if !ok {
 			text = "—"
 		}
-		setText(t.out, text)
-		if exists(t.unit) && ut != "" {
+		if a.changed("out:"+t.fig.Key, text) {
+			setText(t.out, text)
+		}
+		if exists(t.unit) && ut != "" && a.changed("unit:"+t.fig.Key, ut) {
 			setText(t.unit, ut)
 		}
 		// A tile of its own hides when the plan has no such figure; a figure inside
@@ -77,13 +80,17 @@ func (a *app) render() {
 	}
 	setText(byID("charge-form"), cf)
 
-	fillList(byID("cautions"), r.Cautions)
-	fillList(byID("warnings"), orNone(r.Warnings))
-	fillList(byID("sources"), r.Sources)
-	setText(byID("curve-range"), a.curveText(r))
+	a.fillListOnce("cautions", r.Cautions)
+	a.fillListOnce("warnings", orNone(r.Warnings))
+	a.fillListOnce("sources", r.Sources)
+	if ct := a.curveText(r); a.changed("curve-range", ct) {
+		setText(byID("curve-range"), ct)
+	}
 
 	a.lastSVG = a.chartSVG(r)
-	setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
+	if a.changed("chart", a.lastSVG) {
+		setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
+	}
 	a.renderProgramme()
 	if !a.sheetDirty {
 		a.sheetDirty = true
@@ -97,6 +104,25 @@ func (a *app) sheetIfDirty() {
 	if a.sheetDirty && a.last != nil {
 		a.sheetDirty = false
 		a.renderSheet()
+	}
+}
+
+// changed records text as what element key shows and reports whether it differs from
+// before, so unchanged parts of the page are not rewritten on every keystroke.
+func (a *app) changed(key, text string) bool {
+	if a.shown == nil {
+		a.shown = map[string]string{}
+	}
+	if old, ok := a.shown[key]; ok && old == text {
+		return false
+	}
+	a.shown[key] = text
+	return true
+}
+
+func (a *app) fillListOnce(id string, items []string) {
+	if a.changed(id, strings.Join(items, "\x00")) {
+		fillList(byID(id), items)
 	}
 }
 
@@ -289,8 +315,16 @@ func (a *app) renderProgramme() {
 			cubic = true
 		}
 	}
-	body := q(byID("programme"), "tbody")
-	fillProgramme(body, r, a.u, cubic, false)
+	key := a.u.Temp
+	if cubic {
+		key += "c"
+	}
+	for _, st := range r.Programme {
+		key += ";" + fixed(st.TimeMin, 3) + "," + fixed(st.LinearC, 2) + "," + fixed(st.CubicC, 2)
+	}
+	if a.changed("programme", key) {
+		fillProgramme(q(byID("programme"), "tbody"), r, a.u, cubic, false)
+	}
 }
 
 // fillProgramme writes the rows of the cooling programme; both columns when both is set.
