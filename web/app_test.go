@@ -7,6 +7,8 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/chromedp/chromedp"
+
 	"saltcast/core/gas"
 	"saltcast/core/recipe"
 )
@@ -278,5 +280,36 @@ func TestGasScreen(t *testing.T) {
 	setField(t, ctx, "gas", "measured_mg_per_L", "8")
 	if pct := outputNumber(t, ctx, "percent_saturation"); math.Abs(pct-100*8/got) > 0.1 {
 		t.Errorf("percent_saturation = %v, want 100·8/%v", pct, got)
+	}
+}
+
+// minTarget is the smallest touch target, in CSS px (WCAG 2.1 SC 2.5.5 "Target Size", and
+// the 44 pt of Apple's Human Interface Guidelines; common practice for tablets).
+const minTarget = 44
+
+// Every control a finger uses is at least minTarget on each side, on every screen, in both
+// tablet orientations.
+func TestTouchTargets(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	for _, size := range [][2]int64{{768, 1024}, {1280, 800}} {
+		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
+			t.Fatal(err)
+		}
+		open(t, ctx, u)
+		click(t, ctx, `[data-demo="cuso4"]`)
+		mustEval[bool](t, ctx, `document.getElementById("custom-box").open = true, true`)
+		for _, screen := range []string{"batch", "gas", "box", "sheet"} {
+			click(t, ctx, "#tab-"+screen)
+			small := mustEval[[]string](t, ctx, `[...document.querySelectorAll(
+				'button, select, textarea, summary, .seg span, label.check, label.act, a.strip, ' +
+				'input:not([type=radio]):not([type=checkbox]):not([type=file])')]
+				.filter(e => e.getClientRects().length > 0)
+				.filter(e => { const r = e.getBoundingClientRect(); return r.width < `+strconv.Itoa(minTarget)+` || r.height < `+strconv.Itoa(minTarget)+` })
+				.map(e => (e.name || e.id || e.className || e.tagName) + " " + Math.round(e.getBoundingClientRect().width) + "×" + Math.round(e.getBoundingClientRect().height))`)
+			for _, s := range small {
+				t.Errorf("%dx%d %s: control %s is smaller than %d px", size[0], size[1], screen, s, minTarget)
+			}
+		}
 	}
 }
