@@ -91,6 +91,12 @@ type workerdServer struct {
 // SALTCAST_ALLOW_ORIGIN binding. It does not wait for the worker to answer.
 func startWorkerd(t testing.TB, bin, allowOrigin string) *workerdServer {
 	t.Helper()
+	return startWorkerdWith(t, bin, allowOrigin, nil)
+}
+
+// startWorkerdWith is startWorkerd with a last change to the config text (nil: none).
+func startWorkerdWith(t testing.TB, bin, allowOrigin string, edit func(cfg string) string) *workerdServer {
+	t.Helper()
 	// The committed config, with its paths made relative to build/worker/ (capnp embeds
 	// only relative paths) and the origin binding set.
 	src, err := os.ReadFile("workerd.capnp")
@@ -104,6 +110,9 @@ func startWorkerd(t testing.TB, bin, allowOrigin string) *workerdServer {
 	}
 	cfg = strings.Replace(cfg, binding, `(name = "SALTCAST_ALLOW_ORIGIN", text = "`+allowOrigin+`")`, 1)
 	cfg = strings.ReplaceAll(cfg, `"../../build/worker/`, `"`)
+	if edit != nil {
+		cfg = edit(cfg)
+	}
 	f, err := os.CreateTemp(repoPath("build", "worker"), "test-*.capnp")
 	if err != nil {
 		t.Fatal(err)
