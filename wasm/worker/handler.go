@@ -45,8 +45,9 @@ type handler struct {
 
 // route is one path of the API: the methods it answers and what answers them.
 type route struct {
-	methods string // for the Allow header, e.g. "GET, HEAD"
-	serve   func(r *http.Request) ([]byte, error)
+	methods     string // for the Allow header, e.g. "GET, HEAD"
+	serve       func(r *http.Request) ([]byte, error)
+	contentType string // of a successful answer; "" is application/json
 }
 
 // NewHandler returns the worker's HTTP handler.
@@ -60,13 +61,13 @@ func NewHandler(opt Options) http.Handler {
 		return opt.AllowOrigin != "" && (opt.AllowOrigin == "*" || origin == opt.AllowOrigin)
 	}
 	h.routes = map[string]route{
-		"/api/v1/plan":         {"POST", h.plan},
-		"/api/v1/solubility":   {"GET, HEAD", h.query(service.Solubility)},
-		"/api/v1/gas":          {"GET, HEAD, POST", h.gas},
-		"/api/v1/gas/outgas":   {"GET, HEAD", h.query(service.Outgas)},
-		"/api/v1/gas/table":    {"GET, HEAD", h.query(service.GasTable)},
-		"/api/v1/compounds":    {"GET, HEAD", func(*http.Request) ([]byte, error) { return service.Compounds(), nil }},
-		"/api/v1/openapi.json": {"GET, HEAD", func(*http.Request) ([]byte, error) { return h.openapi, nil }},
+		"/api/v1/plan":         {methods: "POST", serve: h.plan},
+		"/api/v1/solubility":   {methods: "GET, HEAD", serve: h.query(service.Solubility)},
+		"/api/v1/gas":          {methods: "GET, HEAD, POST", serve: h.gas},
+		"/api/v1/gas/outgas":   {methods: "GET, HEAD", serve: h.query(service.Outgas)},
+		"/api/v1/gas/table":    {methods: "GET, HEAD", serve: h.query(service.GasTable)},
+		"/api/v1/compounds":    {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return service.Compounds(), nil }},
+		"/api/v1/openapi.json": {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return h.openapi, nil }},
 	}
 	return h
 }
@@ -130,6 +131,13 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 		return
 	}
 	hdr.Set("Cache-Control", "no-store")
+	if rt.contentType != "" {
+		hdr.Set("Content-Type", rt.contentType)
+		hdr.Set("Content-Length", strconv.Itoa(len(body)))
+		w.WriteHeader(http.StatusOK)
+		w.Write(body)
+		return
+	}
 	writeJSON(w, http.StatusOK, body)
 }
 

@@ -180,7 +180,7 @@ func TestCORS(t *testing.T) {
 // A panic inside a route is a bug; the answer is still JSON, and a 500.
 func TestPanicIsA500(t *testing.T) {
 	h := NewHandler(Options{}).(*handler)
-	h.routes["/api/v1/boom"] = route{"GET", func(*http.Request) ([]byte, error) { panic("boom") }}
+	h.routes["/api/v1/boom"] = route{methods: "GET", serve: func(*http.Request) ([]byte, error) { panic("boom") }}
 	res, _ := inProcess(h)(httptest.NewRequest("GET", "/api/v1/boom", nil))
 	body, _ := io.ReadAll(res.Body)
 	if res.StatusCode != 500 || res.Header.Get("Content-Type") != "application/json" {

@@ -50,6 +50,7 @@ func TestWorkerdDoesNotLeak(t *testing.T) {
 	if err := os.WriteFile(probe, []byte(probeModule), 0o644); err != nil {
 		t.Fatal(err)
 	}
+	defer os.Remove(probe)
 	s := startWorkerdWith(t, bin, "", func(cfg string) string {
 		const first = `    (name = "worker.mjs", esModule = embed "worker.mjs"),`
 		if !strings.Contains(cfg, first) {
