@@ -1,0 +1,148 @@
+package main
+
+import (
+	"encoding/json"
+	"slices"
+	"strings"
+	"testing"
+
+	"saltcast/core/service"
+)
+
+// openAPIDoc is the part of openapi.json these tests read.
+type openAPIDoc struct {
+	OpenAPI string `json:"openapi"`
+	Paths   map[string]map[string]struct {
+		Parameters []struct {
+			Ref  string `json:"$ref"`
+			Name string `json:"name"`
+			In   string `json:"in"`
+		} `json:"parameters"`
+		Responses map[string]any `json:"responses"`
+	} `json:"paths"`
+	Components struct {
+		Parameters map[string]struct {
+			Name string `json:"name"`
+		} `json:"parameters"`
+		Schemas map[string]struct {
+			Properties map[string]any `json:"properties"`
+		} `json:"schemas"`
+	} `json:"components"`
+}
+
+func readOpenAPI(t *testing.T) openAPIDoc {
+	t.Helper()
+	var doc openAPIDoc
+	if err := json.Unmarshal(openAPI, &doc); err != nil {
+		t.Fatalf("openapi.json: %v", err)
+	}
+	if doc.OpenAPI != "3.1.0" {
+		t.Fatalf("openapi.json: version %q, want 3.1.0", doc.OpenAPI)
+	}
+	return doc
+}
+
+// Every route the handler answers is described, with the same methods, and nothing else is.
+func TestOpenAPIDescribesEveryRoute(t *testing.T) {
+	doc := readOpenAPI(t)
+	h := NewHandler(Options{}).(*handler)
+	routes := map[string]string{"/": "GET, HEAD"}
+	for p, rt := range h.routes {
+		routes[p] = rt.methods
+	}
+	for path, methods := range routes {
+		ops, ok := doc.Paths[path]
+		if !ok {
+			t.Errorf("openapi.json does not describe %s", path)
+			continue
+		}
+		var want []string
+		for m := range strings.SplitSeq(methods, ", ") {
+			if m != "HEAD" { // HEAD follows GET; OpenAPI may leave it out
+				want = append(want, strings.ToLower(m))
+			}
+		}
+		var got []string
+		for m, op := range ops {
+			got = append(got, m)
+			if _, ok := op.Responses["200"]; !ok {
+				t.Errorf("openapi.json: %s %s has no 200 answer", m, path)
+			}
+		}
+		slices.Sort(want)
+		slices.Sort(got)
+		if !slices.Equal(got, want) {
+			t.Errorf("openapi.json: %s has methods %v, the handler answers %v", path, got, want)
+		}
+	}
+	for path := range doc.Paths {
+		if _, ok := routes[path]; !ok {
+			t.Errorf("openapi.json describes %s, which the handler does not answer", path)
+		}
+	}
+}
+
+// The parameters described are the ones core/service takes: each service names its keys when
+// given one it does not know, and the description must list exactly those.
+func TestOpenAPIParametersMatchService(t *testing.T) {
+	doc := readOpenAPI(t)
+	const bogus = "zz_not_a_key"
+	known := func(call func() ([]byte, error)) []string {
+		_, err := call()
+		msg := ""
+		if err != nil {
+			msg = err.Error()
+		}
+		i := strings.LastIndex(msg, "keys")
+		if i < 0 || !strings.Contains(msg, bogus) {
+			t.Fatalf("no list of keys in %q", msg)
+		}
+		list := strings.TrimLeft(msg[i+len("keys"):], ": ")
+		var keys []string
+		for k := range strings.SplitSeq(list, ", ") {
+			keys = append(keys, strings.TrimSpace(k))
+		}
+		slices.Sort(keys)
+		return keys
+	}
+	query := func(call func(service.Params) ([]byte, error)) func() ([]byte, error) {
+		return func() ([]byte, error) { return call(service.Params{bogus: "1"}) }
+	}
+	described := func(path, method string) []string {
+		var names []string
+		for _, p := range doc.Paths[path][method].Parameters {
+			name := p.Name
+			if p.Ref != "" {
+				name = doc.Components.Parameters[strings.TrimPrefix(p.Ref, "#/components/parameters/")].Name
+			}
+			names = append(names, name)
+		}
+		slices.Sort(names)
+		return names
+	}
+	schema := func(name string) []string {
+		var names []string
+		for k := range doc.Components.Schemas[name].Properties {
+			names = append(names, k)
+		}
+		slices.Sort(names)
+		return names
+	}
+	for _, tt := range []struct {
+		what      string
+		got, want []string
+	}{
+		{"GET /api/v1/solubility", described("/api/v1/solubility", "get"), known(query(service.Solubility))},
+		{"GET /api/v1/gas", described("/api/v1/gas", "get"), known(query(service.Gas))},
+		{"POST /api/v1/gas", schema("GasRequest"), known(query(service.Gas))},
+		{"GET /api/v1/gas/outgas", described("/api/v1/gas/outgas", "get"), known(query(service.Outgas))},
+		{"GET /api/v1/gas/table", described("/api/v1/gas/table", "get"), known(query(service.GasTable))},
+		{"POST /api/v1/plan", schema("Recipe"), known(func() ([]byte, error) {
+			return service.Plan([]byte(`{"` + bogus + `":1,"dissolve_temp_C":20}`))
+		})},
+	} {
+		if !slices.Equal(tt.got, tt.want) {
+			t.Errorf("%s: openapi.json lists %v, core/service takes %v", tt.what, tt.got, tt.want)
+		}
+	}
+}
