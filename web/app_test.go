@@ -313,3 +313,30 @@ func TestTouchTargets(t *testing.T) {
 		}
 	}
 }
+
+// The share link carries the recipe in its fragment: opened in a fresh browser it shows the
+// same recipe.
+func TestShareLink(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	setField(t, ctx, "recipe", "water_g", "777")
+	want := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current")`)
+	click(t, ctx, "#share-btn")
+	link := mustEval[string](t, ctx, `document.getElementById("share-link").value`)
+	if !strings.HasPrefix(link, u+"#recipe=") {
+		t.Fatalf("share link %q does not start with the page and #recipe=", link)
+	}
+	resetStorage(t, ctx, u)
+	if err := chromedp.Do(ctx, chromedp.Navigate("about:blank"), chromedp.Navigate(link)); err != nil {
+		t.Fatal(err)
+	}
+	waitReady(t, ctx)
+	if got := mustEval[string](t, ctx, `document.querySelector('#recipe [name="water_g"]').value`); got != "777" {
+		t.Errorf("water_g from the link = %q, want 777", got)
+	}
+	if got := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current")`); got != want {
+		t.Errorf("recipe from the link =\n%s\nwant\n%s", got, want)
+	}
+}
