@@ -81,6 +81,13 @@
     if (root.getAttribute("data-offline") !== "update-ready") {
       root.setAttribute("data-offline", "ready");
     }
+    var foot = document.querySelector(".foot");
+    if (foot && !document.getElementById("offline-note")) {
+      var note = document.createElement("span");
+      note.id = "offline-note";
+      note.textContent = " Kept on this device: Saltcast opens here without a network.";
+      foot.append(note);
+    }
   }).catch(function (err) {
     // Offline use is a convenience: the app itself runs either way.
     root.setAttribute("data-offline", "error");
