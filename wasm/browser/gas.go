@@ -238,10 +238,16 @@ func (a *app) gasCompute() error {
 	}
 	setHTML(byID("gas-chart"), svg) // SVG from core/chart, text escaped there
 	a.gasTable(tbl)
-	fillList(byID("gas-warnings"), orNone(append(warnings, cautions...)))
+	fillList(byID("gas-cautions"), append(cautions, gasCaution))
+	fillList(byID("gas-warnings"), orNone(warnings))
 	fillList(byID("gas-sources"), sources)
 	return nil
 }
+
+// gasCaution closes the gas screen's cautions, as the planner's general caution closes a
+// batch's.
+const gasCaution = "Saltcast is a planning aid, not a safety assessment: hot water scalds and heated " +
+	"closed vessels build pressure; follow your local rules and licensed practice, and the SDS of anything added to the water."
 
 func steps(from, to, step float64) []float64 {
 	var out []float64

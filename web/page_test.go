@@ -1,0 +1,94 @@
+package web_test
+
+import (
+	"bytes"
+	"compress/gzip"
+	"encoding/base64"
+	"io"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+
+	"saltcast/web"
+)
+
+// The page is one self-contained file: the policy forbids every request, nothing refers to
+// another file or host, and the inlined module unpacks to what went in.
+func TestPageIsSelfContained(t *testing.T) {
+	module := []byte("\x00asm\x01\x00\x00\x00 a stand-in for the module, not run here")
+	var gz bytes.Buffer
+	zw := gzip.NewWriter(&gz)
+	zw.Write(module)
+	zw.Close()
+	wasmExec, err := os.ReadFile(filepath.Join(goroot(t), "lib", "wasm", "wasm_exec.js"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	page, err := web.Page(gz.Bytes(), string(wasmExec), `v1 <b>"&"</b>`)
+	if err != nil {
+		t.Fatal(err)
+	}
+	html := string(page)
+
+	if !strings.Contains(html, `<meta http-equiv="Content-Security-Policy" content="`+web.CSP+`">`) {
+		t.Error("the page lacks its Content-Security-Policy meta element")
+	}
+	for _, directive := range []string{"default-src 'none'", "connect-src 'none'", "form-action 'none'",
+		"script-src 'unsafe-inline' 'wasm-unsafe-eval'", "img-src data:", "base-uri 'none'"} {
+		if !strings.Contains(web.CSP, directive) {
+			t.Errorf("CSP lacks %q", directive)
+		}
+	}
+	if strings.Contains(web.CSP, "unsafe-eval'") && !strings.Contains(web.CSP, "'wasm-unsafe-eval'") {
+		t.Error("CSP allows eval")
+	}
+	// No element loads anything: no src or href to another file, no link or iframe. Script
+	// and style contents are code, not markup, so they are left out of this look.
+	markup := regexp.MustCompile(`(?s)(<script[^>]*>).*?</script>|(<style>).*?</style>`).ReplaceAllString(html, "$1$2")
+	for _, re := range []string{`(?i)<(link|iframe|object|embed|img|audio|video|source)\b`, `(?i)\ssrc\s*=`, `(?i)\shref\s*=\s*"(?:[^"#]|$)`} {
+		if m := regexp.MustCompile(re).FindString(markup); m != "" {
+			t.Errorf("the page refers to something outside itself: %q", m)
+		}
+	}
+	if regexp.MustCompile(`(?i)@import|url\(`).MatchString(html) {
+		t.Error("the styles load something")
+	}
+	if strings.Contains(html, `<b>"&"</b>`) {
+		t.Error("the version text became markup")
+	}
+
+	// The module comes back byte for byte from the base64 block.
+	m := regexp.MustCompile(`<script id="saltcast-wasm" type="application/octet-stream">([A-Za-z0-9+/=]+)</script>`).FindStringSubmatch(html)
+	if m == nil {
+		t.Fatal("no inlined module")
+	}
+	raw, err := base64.StdEncoding.DecodeString(m[1])
+	if err != nil {
+		t.Fatal(err)
+	}
+	zr, err := gzip.NewReader(bytes.NewReader(raw))
+	if err != nil {
+		t.Fatal(err)
+	}
+	back, err := io.ReadAll(zr)
+	if err != nil || !bytes.Equal(back, module) {
+		t.Errorf("the inlined module unpacks to %q, %v", back, err)
+	}
+}
+
+func goroot(t *testing.T) string {
+	t.Helper()
+	out, err := execOutput("go", "env", "GOROOT")
+	if err != nil {
+		t.Fatal(err)
+	}
+	return strings.TrimSpace(out)
+}
+
+func execOutput(name string, args ...string) (string, error) {
+	out, err := exec.Command(name, args...).Output()
+	return string(out), err
+}
