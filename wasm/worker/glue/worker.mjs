@@ -50,7 +50,7 @@ globalThis.saltcastReadBody = async (stream, limit) => {
   return body;
 };
 
-// running is the Go program serving this isolate: { go, binding } once ready.
+// running is the Go program serving this isolate: a promise of { go, binding }.
 let running;
 
 function start(env, ctx) {
@@ -87,7 +87,7 @@ function start(env, ctx) {
 
 function internalError(err) {
   console.error("saltcast worker:", err);
-  return new Response('{"error":"internal error in the Saltcast worker; try again"}', {
+  return new Response('{"error":"internal error in the Saltcast worker; try again","field":""}', {
     status: 500,
     headers: {
       "Content-Type": "application/json",
@@ -98,13 +98,16 @@ function internalError(err) {
 }
 
 async function fetch(request, env, ctx) {
-  running ??= start(env, ctx);
-  const mine = running;
+  let mine;
   try {
+    mine = running ??= start(env, ctx);
     const { go, binding } = await mine;
     if (go.exited) {
       throw new Error("the Go program has exited");
     }
+    // No race against the program's exit here: workerd refuses to settle, in a later request,
+    // a promise made in an earlier one (handle_cross_request_promise_resolution). A request
+    // caught in flight by a crash is ended by the runtime; the next one starts afresh.
     return await binding.handleRequest(request);
   } catch (err) {
     if (running === mine) {
