@@ -50,7 +50,8 @@ func TestNoNetworkRequests(t *testing.T) {
 // plan of that same recipe.
 func current(t *testing.T, ctx context.Context) (recipe.Recipe, recipe.Result) {
 	t.Helper()
-	src := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current") || ""`)
+	// The page stores it in a zero timeout after planning; a later timeout runs after it.
+	src := mustEval[string](t, ctx, `new Promise(r => setTimeout(() => r(localStorage.getItem("saltcast.current") || ""), 0))`)
 	r, err := recipe.Decode([]byte(src))
 	if err != nil {
 		t.Fatalf("the page's current recipe %q: %v", src, err)
@@ -322,7 +323,7 @@ func TestShareLink(t *testing.T) {
 	open(t, ctx, u)
 	click(t, ctx, `[data-demo="cuso4"]`)
 	setField(t, ctx, "recipe", "water_g", "777")
-	want := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current")`)
+	want := mustEval[string](t, ctx, `new Promise(r => setTimeout(() => r(localStorage.getItem("saltcast.current")), 0))`)
 	click(t, ctx, "#share-btn")
 	link := mustEval[string](t, ctx, `document.getElementById("share-link").value`)
 	if !strings.HasPrefix(link, u+"#recipe=") {
@@ -336,7 +337,7 @@ func TestShareLink(t *testing.T) {
 	if got := mustEval[string](t, ctx, `document.querySelector('#recipe [name="water_g"]').value`); got != "777" {
 		t.Errorf("water_g from the link = %q, want 777", got)
 	}
-	if got := mustEval[string](t, ctx, `localStorage.getItem("saltcast.current")`); got != want {
+	if got := mustEval[string](t, ctx, `new Promise(r => setTimeout(() => r(localStorage.getItem("saltcast.current")), 0))`); got != want {
 		t.Errorf("recipe from the link =\n%s\nwant\n%s", got, want)
 	}
 }

@@ -45,9 +45,12 @@ type app struct {
 
 	shown      map[string]string // what parts of the page show now (see changed)
 	sheetDirty bool              // the batch sheet shows an older plan
-	gasShown   bool              // the gas screen has been opened, so it follows the unit switch
-	pending    []func()
-	tick       js.Func
+
+	current       recipe.Recipe // the recipe last planned
+	currentQueued bool          // keepCurrent will run
+	gasShown      bool          // the gas screen has been opened, so it follows the unit switch
+	pending       []func()
+	tick          js.Func
 
 	recipeForm js.Value
 	inputs     map[string]js.Value // recipe inputs by name
@@ -146,6 +149,12 @@ func (a *app) start() {
 	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
 	a.bindBox()
 	a.load(start)
+}
+
+// keepCurrent stores the recipe on screen so a reload (or a closed tab) finds it.
+func (a *app) keepCurrent() {
+	a.currentQueued = false
+	a.store.set(keyCurrent, string(a.current.Encode()))
 }
 
 // later runs f once the browser has painted what is on screen now (a zero timeout).
@@ -282,8 +291,14 @@ func (a *app) recompute() {
 			a.clearPlanError()
 			a.setStale(false)
 			a.last = &res
-			a.store.set(keyCurrent, string(r.Encode()))
 			a.render()
+			// Kept for the next visit once the browser is idle: writing storage on every
+			// keystroke costs about a millisecond here.
+			a.current = r
+			if !a.currentQueued {
+				a.currentQueued = true
+				a.later(a.keepCurrent)
+			}
 			return
 		}
 	}

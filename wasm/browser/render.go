@@ -87,9 +87,13 @@ func (a *app) render() {
 		setText(byID("curve-range"), ct)
 	}
 
-	a.lastSVG = a.chartSVG(r)
-	if a.changed("chart", a.lastSVG) {
-		setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
+	// The chart depends on the compound, the units and the path in g per 100 g water, not
+	// on the batch size: redraw it only when those change.
+	if a.changed("chart-input", a.chartKey(r)) {
+		a.lastSVG = a.chartSVG(r)
+		if a.changed("chart", a.lastSVG) {
+			setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
+		}
 	}
 	a.renderProgramme()
 	if !a.sheetDirty {
@@ -161,6 +165,21 @@ func pointRange(pts []recipe.Point) (lo, hi float64) {
 		lo, hi = min(lo, p.TempC), max(hi, p.TempC)
 	}
 	return lo, hi
+}
+
+// chartKey names everything the batch chart is drawn from.
+func (a *app) chartKey(r *recipe.Result) string {
+	k := a.u.Temp + "|" + r.SoluteID + "|" + r.Recipe.Solute
+	if a.d.Custom {
+		k += "|" + string(a.d.JSON())
+	}
+	if r.HasMetastable {
+		k += "|m" + exact(r.MetastableWidthK)
+	}
+	for _, p := range r.Path {
+		k += "|" + p.Label + "," + exact(p.TempC) + "," + exact(p.G100)
+	}
+	return k
 }
 
 // chartUnit maps the page's temperature unit to the chart's.
