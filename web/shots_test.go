@@ -41,9 +41,14 @@ func TestScreenshots(t *testing.T) {
 		}
 		if size[0] == 1280 {
 			click(t, ctx, "#tab-batch")
-			png, err := chromedp.Run(ctx, chromedp.FullScreenshot(80))
-			if err == nil {
-				os.WriteFile(filepath.Join(dir, "batch-full-1280.jpg"), png, 0o644)
+			if png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100)); err == nil {
+				os.WriteFile(filepath.Join(dir, "batch-full-1280.png"), png, 0o644)
+			}
+			if err := emulatePrint(ctx); err != nil {
+				t.Fatal(err)
+			}
+			if png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100)); err == nil {
+				os.WriteFile(filepath.Join(dir, "print-1280.png"), png, 0o644)
 			}
 		}
 	}

@@ -351,7 +351,7 @@ func fillProgramme(body js.Value, r *recipe.Result, u Units, cubic, both bool) {
 	clear(body)
 	for _, s := range r.Programme {
 		tr := add(body, "tr", "", "")
-		add(tr, "td", "", unit.FormatNumber(s.TimeMin, 4))
+		add(tr, "td", "", exact(wire.RoundSig(s.TimeMin, 4)))
 		if both || !cubic {
 			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), 1))
 		}
