@@ -110,7 +110,7 @@ func (w *bufferedWriter) finish() {
 }
 
 // jsBody reads a request body stream in one call to glue/worker.mjs's saltcastReadBody,
-// which stops after MaxBodyBytes+1 bytes so an oversize body is seen without being read whole.
+// which keeps MaxBodyBytes+1 bytes, enough to see an oversize body, and drains the rest.
 type jsBody struct {
 	stream js.Value
 	data   *bytes.Reader
@@ -118,7 +118,7 @@ type jsBody struct {
 
 func (b *jsBody) Read(p []byte) (int, error) {
 	if b.data == nil {
-		v, err := await(js.Global().Call("saltcastReadBody", b.stream, MaxBodyBytes+1))
+		v, err := await(js.Global().Call("saltcastReadBody", b.stream, MaxBodyBytes+1, maxDrainBytes))
 		if err != nil {
 			return 0, err
 		}

@@ -23,25 +23,32 @@ globalThis.tryCatch = (fn) => {
   }
 };
 
-// saltcastReadBody reads a request body stream for the Go program (main_js.go), in one
-// promise instead of one per chunk, and stops once it has more than limit bytes.
-globalThis.saltcastReadBody = async (stream, limit) => {
+// saltcastReadBody reads a request body stream for the Go program (main_js.go) in one promise
+// instead of one per chunk. It keeps the first `keep` bytes, reads and drops the rest up to
+// `drain` bytes in all (so a client still sending gets its 413 rather than a closed
+// connection), and cancels what is beyond.
+globalThis.saltcastReadBody = async (stream, keep, drain) => {
   const reader = stream.getReader();
   const chunks = [];
-  let n = 0;
+  let kept = 0;
+  let seen = 0;
   for (;;) {
     const { done, value } = await reader.read();
     if (done) {
       break;
     }
-    chunks.push(value);
-    n += value.byteLength;
-    if (n > limit) {
+    seen += value.byteLength;
+    if (kept < keep) {
+      const part = value.subarray(0, keep - kept);
+      chunks.push(part);
+      kept += part.byteLength;
+    }
+    if (seen > drain) {
       reader.cancel().catch(() => {});
       break;
     }
   }
-  const body = new Uint8Array(n);
+  const body = new Uint8Array(kept);
   let at = 0;
   for (const c of chunks) {
     body.set(c, at);
