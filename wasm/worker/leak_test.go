@@ -62,6 +62,7 @@ func TestWorkerdDoesNotLeak(t *testing.T) {
 	s.waitReady(t)
 
 	kno3 := testdataFile(t, "demo-kno3-stock.json")
+	oversize := bytes.Repeat([]byte(" "), MaxBodyBytes+10)
 	type call struct {
 		method, path, ct string
 		body             []byte
@@ -70,6 +71,7 @@ func TestWorkerdDoesNotLeak(t *testing.T) {
 		{"POST", "/api/v1/plan", "application/json", kno3},
 		{"POST", "/api/v1/plan", "application/json", []byte(`{"solute":"KNO3","dissolve_temp_C":NaN}`)},
 		{"POST", "/api/v1/gas", "application/json", []byte(`{"temp_C":[20]}`)},
+		{"POST", "/api/v1/plan", "application/json", oversize},
 		{"GET", "/api/v1/solubility?solute=KNO3&temp_C=20", "", nil},
 		{"GET", "/api/v1/solubility?solute=nope&temp_C=20", "", nil},
 		{"POST", "/api/v1/gas", "application/json", []byte(`{"temp_C":20}`)},
