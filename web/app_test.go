@@ -341,3 +341,55 @@ func TestShareLink(t *testing.T) {
 		t.Errorf("recipe from the link =\n%s\nwant\n%s", got, want)
 	}
 }
+
+// Temperatures follow the unit switch: inputs and results show °F and the recipe stays °C.
+// 70 °C is 158 °F (NIST SP 811, 2008, sec. 4.2.1.1: t/°F = 1.8 t/°C + 32).
+func TestUnitSwitch(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	onsetC := outputNumber(t, ctx, "saturation_temp_C")
+	mustEval[bool](t, ctx, `(function(){const s=document.querySelector('#units [name="unit_temp"]'); s.value="F"; s.dispatchEvent(new Event("change",{bubbles:true})); return true})()`)
+	defer mustEval[bool](t, ctx, `(function(){const s=document.querySelector('#units [name="unit_temp"]'); s.value="C"; s.dispatchEvent(new Event("change",{bubbles:true})); return true})()`)
+	if v := mustEval[string](t, ctx, `document.querySelector('#recipe [name="dissolve_temp_C"]').value`); v != "158" {
+		t.Errorf("dissolve_temp_C shows %q in °F, want 158", v)
+	}
+	onsetF := outputNumber(t, ctx, "saturation_temp_C")
+	if math.Abs(onsetF-(onsetC*1.8+32)) > 0.1 {
+		t.Errorf("onset %v °C shows as %v °F", onsetC, onsetF)
+	}
+	if unitText := mustEval[string](t, ctx, `document.querySelector('[data-key="saturation_temp_C"]').parentElement.querySelector(".u").textContent`); unitText != "°F" {
+		t.Errorf("unit beside the onset = %q, want °F", unitText)
+	}
+	r, _ := current(t, ctx)
+	if r.DissolveTempC != 70 {
+		t.Errorf("the recipe's dissolve_temp_C = %v after a unit switch, want 70", r.DissolveTempC)
+	}
+}
+
+// A compound of the user's own points is planned, and its fit is reported.
+func TestCustomCompound(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	mustEval[bool](t, ctx, `document.getElementById("custom-box").open = true, true`)
+	setField(t, ctx, "recipe", "custom.name", "bench salt (invented)")
+	setField(t, ctx, "recipe", "custom.molar_mass_g_per_mol", "101,1")
+	setField(t, ctx, "recipe", "custom.points", "10; 21\n30; 45,5\n50; 85\n70; 138")
+	mustEval[bool](t, ctx, `(function(){const c=document.querySelector('#recipe [name="use_custom"]'); c.checked=true; c.dispatchEvent(new Event("input",{bubbles:true})); return true})()`)
+	if stale := mustEval[bool](t, ctx, `!document.getElementById("stale").hidden`); stale {
+		t.Fatalf("the custom compound was not planned: %s", mustEval[string](t, ctx, `document.getElementById("stale").textContent`))
+	}
+	r, res := current(t, ctx)
+	if r.Custom == nil || len(r.Custom.Points) != 4 || r.Custom.MolarMassGPerMol != 101.1 {
+		t.Fatalf("the page's recipe custom part = %+v", r.Custom)
+	}
+	if got := outputNumber(t, ctx, "charge_g"); math.Abs(got-res.ChargeG) > shownTol*res.ChargeG {
+		t.Errorf("charge_g = %v, core says %v", got, res.ChargeG)
+	}
+	if fit := mustEval[string](t, ctx, `document.getElementById("custom-fit").textContent`); !strings.Contains(fit, "R²") {
+		t.Errorf("fit report = %q", fit)
+	}
+}
