@@ -4,6 +4,7 @@ package main
 
 import (
 	"errors"
+	"strings"
 	"syscall/js"
 
 	"honnef.co/go/js/dom/v2"
@@ -238,7 +239,10 @@ func (a *app) gasCompute() error {
 	}
 	setHTML(byID("gas-chart"), svg) // SVG from core/chart, text escaped there
 	a.gasTable(tbl)
-	fillList(byID("gas-cautions"), append(cautions, gasCaution))
+	if !mentionsSDS(cautions) {
+		cautions = append(cautions, gasCaution)
+	}
+	fillList(byID("gas-cautions"), cautions)
 	fillList(byID("gas-warnings"), orNone(warnings))
 	fillList(byID("gas-sources"), sources)
 	return nil
@@ -248,6 +252,15 @@ func (a *app) gasCompute() error {
 // batch's.
 const gasCaution = "Saltcast is a planning aid, not a safety assessment: hot water scalds and heated " +
 	"closed vessels build pressure; follow your local rules and licensed practice, and the SDS of anything added to the water."
+
+func mentionsSDS(list []string) bool {
+	for _, c := range list {
+		if strings.Contains(c, "SDS") {
+			return true
+		}
+	}
+	return false
+}
 
 func steps(from, to, step float64) []float64 {
 	var out []float64
