@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"crypto/sha256"
 	"encoding/base64"
+	"encoding/json"
 	"io"
 	"net/http"
 	"net/http/httptest"
@@ -268,4 +269,38 @@ func BenchmarkServePlanKNO3(b *testing.B) {
 		h.ServeHTTP(rec, httptest.NewRequest("POST", "/api/v1/plan", bytes.NewReader(body)))
 		sink = rec.Body.Bytes()
 	}
+}
+
+// Property: whatever a client sends, the answer is never a 5xx and an API answer is JSON.
+func FuzzHandler(f *testing.F) {
+	for _, c := range apiCases(f) {
+		if len(c.body) <= MaxBodyBytes {
+			f.Add(c.method, c.path, c.contentType, c.body)
+		}
+	}
+	f.Add("POST", "/api/v1/plan", "application/json", []byte(`{"custom":{"name":"x","molar_mass_g_per_mol":1e308,"points":[[0,1e-300],[1,1e300],[2,5]]},"water_g":1e-3,"dissolve_temp_C":1}`))
+	f.Add("GET", "/api/v1/gas?temp_C=1e308&pressure=-0&pressure_unit=atm", "", []byte(nil))
+	h := NewHandler(Options{Page: []byte("<p>page</p>")})
+	f.Fuzz(func(t *testing.T, method, target, contentType string, body []byte) {
+		if !strings.HasPrefix(target, "/") {
+			target = "/" + target
+		}
+		u, err := url.ParseRequestURI(target)
+		if err != nil {
+			return
+		}
+		req := &http.Request{Method: method, URL: u, Header: http.Header{}, Body: io.NopCloser(bytes.NewReader(body)),
+			ContentLength: int64(len(body)), Host: "saltcast.test"}
+		if contentType != "" {
+			req.Header.Set("Content-Type", contentType)
+		}
+		rec := httptest.NewRecorder()
+		h.ServeHTTP(rec, req)
+		if rec.Code >= 500 {
+			t.Fatalf("%s %s (%q, %.200q): %d %s", method, target, contentType, body, rec.Code, rec.Body.Bytes())
+		}
+		if u.Path != "/" && rec.Code != http.StatusNoContent && !json.Valid(rec.Body.Bytes()) {
+			t.Fatalf("%s %s: answer is not JSON: %.200q", method, target, rec.Body.Bytes())
+		}
+	})
 }
