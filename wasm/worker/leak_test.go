@@ -9,6 +9,8 @@ import (
 	"strings"
 	"sync"
 	"testing"
+
+	"saltcast/core/service"
 )
 
 // One Go program serves every request of an isolate (glue/worker.mjs), so whatever a request
@@ -27,30 +29,33 @@ const (
 	leakMaxMemory = 4 << 20 // Go grows its heap in steps of a few MiB
 )
 
+// probeModule sits in front of the worker in the tests' config: /__test/go-stats answers the
+// Go program's figures, /__test/stop makes the worker drop its Go program.
 const probeModule = `import worker from "./worker.mjs";
 export default {
   async fetch(request, env, ctx) {
-    if (new URL(request.url).pathname === "/__test/go-stats") {
-      const stats = globalThis.saltcastGoStats;
-      return new Response(JSON.stringify(stats ? stats() : null));
+    const hooks = globalThis.saltcastTestHooks;
+    switch (new URL(request.url).pathname) {
+      case "/__test/go-stats":
+        return new Response(JSON.stringify(hooks ? hooks.stats() : null));
+      case "/__test/stop":
+        hooks.stop();
+        return new Response("stopped");
     }
     return worker.fetch(request, env, ctx);
   },
 };
 `
 
-type goStats struct {
-	MemoryBytes int `json:"memoryBytes"`
-	JSValues    int `json:"jsValues"`
-}
-
-func TestWorkerdDoesNotLeak(t *testing.T) {
+// startProbed starts workerd with the probe module in front of the worker.
+func startProbed(t *testing.T) *workerdServer {
+	t.Helper()
 	bin := needBuild(t)
 	probe := repoPath("build", "worker", "probe.mjs")
 	if err := os.WriteFile(probe, []byte(probeModule), 0o644); err != nil {
 		t.Fatal(err)
 	}
-	defer os.Remove(probe)
+	t.Cleanup(func() { os.Remove(probe) })
 	s := startWorkerdWith(t, bin, "", func(cfg string) string {
 		const first = `    (name = "worker.mjs", esModule = embed "worker.mjs"),`
 		if !strings.Contains(cfg, first) {
@@ -58,8 +63,60 @@ func TestWorkerdDoesNotLeak(t *testing.T) {
 		}
 		return strings.Replace(cfg, first, `    (name = "probe.mjs", esModule = embed "probe.mjs"),`+"\n"+first, 1)
 	})
-	defer s.stop()
+	t.Cleanup(s.stop)
 	s.waitReady(t)
+	return s
+}
+
+func getStats(t *testing.T, s *workerdServer) goStats {
+	t.Helper()
+	res, err := http.Get(s.base + "/__test/go-stats")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer res.Body.Close()
+	var st goStats
+	if err := json.NewDecoder(res.Body).Decode(&st); err != nil || st.MemoryBytes == 0 {
+		t.Fatalf("probe: %v %+v", err, st)
+	}
+	return st
+}
+
+// When the Go program is gone, the next request starts a new one and is answered in full.
+func TestWorkerdRestartsAGoneProgram(t *testing.T) {
+	s := startProbed(t)
+	want, err := service.Solubility(service.Params{"solute": "KNO3", "temp_C": "20"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for round := range 3 {
+		res, err := http.Get(s.base + "/__test/stop")
+		if err != nil {
+			t.Fatal(err)
+		}
+		res.Body.Close()
+		if res.StatusCode != 200 {
+			t.Fatalf("round %d: the probe could not stop the program: %s", round, res.Status)
+		}
+		res, err = http.Get(s.base + "/api/v1/solubility?solute=KNO3&temp_C=20")
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, _ := io.ReadAll(res.Body)
+		res.Body.Close()
+		if res.StatusCode != 200 || !bytes.Equal(got, want) {
+			t.Errorf("round %d, after the program stopped: %d %.200s", round, res.StatusCode, got)
+		}
+	}
+}
+
+type goStats struct {
+	MemoryBytes int `json:"memoryBytes"`
+	JSValues    int `json:"jsValues"`
+}
+
+func TestWorkerdDoesNotLeak(t *testing.T) {
+	s := startProbed(t)
 
 	kno3 := testdataFile(t, "demo-kno3-stock.json")
 	oversize := bytes.Repeat([]byte(" "), MaxBodyBytes+10)
@@ -115,23 +172,11 @@ func TestWorkerdDoesNotLeak(t *testing.T) {
 		close(next)
 		wg.Wait()
 	}
-	stats := func() goStats {
-		res, err := http.Get(s.base + "/__test/go-stats")
-		if err != nil {
-			t.Fatal(err)
-		}
-		defer res.Body.Close()
-		var st goStats
-		if err := json.NewDecoder(res.Body).Decode(&st); err != nil || st.MemoryBytes == 0 {
-			t.Fatalf("probe: %v %+v", err, st)
-		}
-		return st
-	}
 
 	send(leakWarmup)
-	before := stats()
+	before := getStats(t, s)
 	send(leakRequests)
-	after := stats()
+	after := getStats(t, s)
 	t.Logf("%d requests: Go memory %d → %d bytes, live JS references %d → %d",
 		leakRequests, before.MemoryBytes, after.MemoryBytes, before.JSValues, after.JSValues)
 	if d := after.JSValues - before.JSValues; d > leakMaxValues {

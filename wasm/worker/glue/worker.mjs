@@ -73,17 +73,24 @@ function start(env, ctx) {
     ...go.importObject,
     workers: { ready: () => ready({ go, binding }) },
   });
-  // For the leak test (wasm/worker/leak_test.go), which reads it through a probe module of
-  // its own; no route of the worker exposes it. It reads fields of Go's wasm_exec.js.
-  globalThis.saltcastGoStats = () => ({
-    memoryBytes: instance.exports.mem.buffer.byteLength,
-    jsValues: go._values.length - go._idPool.length,
-  });
   const forget = (err) => {
     failed(err);
     if (running === started) {
       running = undefined;
     }
+  };
+  // For the tests (wasm/worker/leak_test.go), which reach them through a probe module of
+  // their own; no route of the worker exposes them. stats reads fields of Go's wasm_exec.js;
+  // stop marks the program as gone, as if it had exited.
+  globalThis.saltcastTestHooks = {
+    stats: () => ({
+      memoryBytes: instance.exports.mem.buffer.byteLength,
+      jsValues: go._values.length - go._idPool.length,
+    }),
+    stop: () => {
+      go.exited = true;
+      forget(new Error("stopped by a test"));
+    },
   };
   go.run(instance, { env, ctx, binding, page }).then(
     () => forget(new Error("the Go program exited")),
