@@ -391,3 +391,40 @@ func (s *syncBuffer) String() string {
 	defer s.mu.Unlock()
 	return s.b.String()
 }
+
+// Requests that arrive together on a fresh isolate all wait for the one Go program being
+// started by the first of them (a promise made in one request, awaited in the others).
+func TestWorkerdConcurrentFirstRequests(t *testing.T) {
+	bin := needBuild(t)
+	s := startWorkerd(t, bin, "")
+	defer s.stop()
+	want, err := service.Solubility(service.Params{"solute": "KNO3", "temp_C": "20"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	const clients = 16
+	var wg sync.WaitGroup
+	errs := make(chan error, clients)
+	for range clients {
+		wg.Go(func() {
+			res, err := (&http.Client{Timeout: 60 * time.Second}).Get(s.base + "/api/v1/solubility?solute=KNO3&temp_C=20")
+			if err != nil {
+				errs <- err
+				return
+			}
+			got, err := io.ReadAll(res.Body)
+			res.Body.Close()
+			if err != nil || res.StatusCode != 200 || !bytes.Equal(got, want) {
+				errs <- fmt.Errorf("%d %v %.200s", res.StatusCode, err, got)
+			}
+		})
+	}
+	wg.Wait()
+	close(errs)
+	for err := range errs {
+		t.Error(err)
+	}
+	if strings.Contains(s.log.String(), "saltcast worker:") {
+		t.Errorf("workerd log:\n%s", s.log.String())
+	}
+}
