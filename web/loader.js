@@ -29,8 +29,8 @@
   }
   async function start() {
     var node = document.getElementById("saltcast-wasm");
+    // The text stays in the page: "save a copy" rebuilds the file from it (web/pagecopy).
     var packed = bytes(node.textContent.trim());
-    node.textContent = "";
     var stream = new Blob([packed]).stream().pipeThrough(new DecompressionStream("gzip"));
     var go = new Go();
     var res = new Response(stream, { headers: { "Content-Type": "application/wasm" } });

@@ -19,6 +19,8 @@ import (
 	"path/filepath"
 	"strconv"
 	"strings"
+
+	"saltcast/web/pagecopy"
 )
 
 //go:embed shell.html
@@ -88,6 +90,36 @@ func Build(cfg Config) ([]byte, Report, error) {
 	}
 	defer os.RemoveAll(tmp)
 
+	root, err := goroot(gobin)
+	if err != nil {
+		return nil, rep, err
+	}
+	wasmExec, err := os.ReadFile(filepath.Join(root, "lib", "wasm", "wasm_exec.js"))
+	if err != nil {
+		return nil, rep, err
+	}
+	version := cfg.Version
+	if version == "" {
+		version = Version(cfg.Dir)
+	}
+	rep.Version = version
+
+	// The page's template goes into the program before it is compiled, so the running page
+	// can write an exact copy of itself (saltcast/web/pagecopy). It holds no part of the
+	// module, so a page around an empty module gives it.
+	probe, err := Page(nil, string(wasmExec), version)
+	if err != nil {
+		return nil, rep, err
+	}
+	tpl, err := pagecopy.Cut(probe, PageParts...)
+	if err != nil {
+		return nil, rep, err
+	}
+	overlay, err := templateOverlay(gobin, cfg, tpl, tmp)
+	if err != nil {
+		return nil, rep, err
+	}
+
 	out := filepath.Join(tmp, "app.wasm")
 	args := []string{"build", "-trimpath"}
 	if !cfg.KeepSymbols {
@@ -97,6 +129,9 @@ func Build(cfg Config) ([]byte, Report, error) {
 		// Without inlining Go's wasm output is 7 % smaller after gzip (measured, see
 		// TestFigures); the planner's arithmetic is microseconds either way.
 		args = append(args, "-gcflags=all=-l")
+	}
+	if overlay != "" {
+		args = append(args, "-overlay="+overlay)
 	}
 	args = append(args, "-o", out, cfg.Package)
 	cmd := exec.Command(gobin, args...)
@@ -125,20 +160,6 @@ func Build(cfg Config) ([]byte, Report, error) {
 		rep.WasmOpt = cfg.WasmOpt
 	}
 
-	root, err := goroot(gobin)
-	if err != nil {
-		return nil, rep, err
-	}
-	wasmExec, err := os.ReadFile(filepath.Join(root, "lib", "wasm", "wasm_exec.js"))
-	if err != nil {
-		return nil, rep, err
-	}
-	version := cfg.Version
-	if version == "" {
-		version = Version(cfg.Dir)
-	}
-	rep.Version = version
-
 	gz, how, err := compress(wasm, cfg.Gzip, tmp)
 	if err != nil {
 		return nil, rep, err
@@ -148,9 +169,66 @@ func Build(cfg Config) ([]byte, Report, error) {
 	if err != nil {
 		return nil, rep, err
 	}
+	if again, err := pagecopy.Cut(page, PageParts...); err != nil || again != tpl {
+		return nil, rep, errors.New("the page's template changed once the module was in it; the page could not copy itself")
+	}
 	rep.GzipBytes = len(gz)
 	rep.PageBytes = len(page)
 	return page, rep, nil
+}
+
+// PageParts are the ids of the page's <script> and <style> elements whose text the running
+// page reads back to write a copy of itself; the rest of the page is the template compiled
+// into the program (see saltcast/web/pagecopy).
+var PageParts = []string{"saltcast-css", "saltcast-wasm", "saltcast-go", "saltcast-loader"}
+
+// TemplateFile is the file of the compiled package that declares pageTemplate. Build
+// compiles the page's template in its place (go build -overlay); a package without the
+// file (the floor program) is compiled as it is.
+const TemplateFile = "pagetemplate.go"
+
+// templateOverlay writes the Go file holding tpl and the -overlay file that puts it in
+// place of cfg.Package's TemplateFile; "" when the package has no such file.
+func templateOverlay(gobin string, cfg Config, tpl pagecopy.Template, tmp string) (string, error) {
+	cmd := exec.Command(gobin, "list", "-f", "{{.Dir}}", cfg.Package)
+	cmd.Dir = cfg.Dir
+	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
+	out, err := cmd.Output()
+	if err != nil {
+		return "", errors.New("go list " + cfg.Package + ": " + err.Error())
+	}
+	target := filepath.Join(strings.TrimSpace(string(out)), TemplateFile)
+	if _, err := os.Stat(target); err != nil {
+		return "", nil
+	}
+	src := filepath.Join(tmp, TemplateFile)
+	if err := os.WriteFile(src, tpl.GoSource("main", "pageTemplate"), 0o644); err != nil {
+		return "", err
+	}
+	overlay := filepath.Join(tmp, "overlay.json")
+	js := `{"Replace":{` + jsonString(target) + `:` + jsonString(src) + `}}`
+	return overlay, os.WriteFile(overlay, []byte(js), 0o644)
+}
+
+// jsonString quotes a file path for the overlay file.
+func jsonString(s string) string {
+	var b strings.Builder
+	b.WriteByte('"')
+	for _, r := range s {
+		switch {
+		case r == '"' || r == '\\':
+			b.WriteByte('\\')
+			b.WriteRune(r)
+		case r < 0x20:
+			b.WriteString(`\u00`)
+			b.WriteByte("0123456789abcdef"[r>>4])
+			b.WriteByte("0123456789abcdef"[r&0xf])
+		default:
+			b.WriteRune(r)
+		}
+	}
+	b.WriteByte('"')
+	return b.String()
 }
 
 // compress gzips the module with zopfli when asked or installed (about 5 % smaller than

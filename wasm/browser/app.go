@@ -38,6 +38,7 @@ type app struct {
 	store storage
 	shelf Shelf
 
+	got      *received      // recipes received and not yet taken in (carry.go)
 	last     *recipe.Result // the last good plan, kept on screen while an input is wrong
 	lastSVG  string
 	planErr  string // the field that the last plan error is shown beside
@@ -148,6 +149,7 @@ func (a *app) start() {
 	})
 	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
 	a.bindBox()
+	a.bindCarry()
 	a.load(start)
 }
 

@@ -146,6 +146,9 @@ func (a *app) renderShelf() {
 		setAttr(del, "data-delete", itoa(i))
 		setAttr(del, "aria-label", "Delete "+r.Name)
 	}
+	// The list to send from and the "in your list" marks of received recipes follow.
+	a.renderCarry()
+	a.renderReceived()
 }
 
 func (a *app) onSavedClick(t js.Value, _ dom.Event) {

@@ -1,0 +1,273 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"errors"
+	"strings"
+	"syscall/js"
+
+	"honnef.co/go/js/dom/v2"
+
+	"saltcast/core/recipe"
+	"saltcast/web/pagecopy"
+)
+
+// Recipes that travel with the app: "save a copy with recipes" writes this page's own bytes
+// (rebuilt from pageTemplate, see saltcast/web/pagecopy) with the chosen recipes in an inert
+// block (core/recipe.WithCarried); a page that carries recipes, or a file the user drops or
+// picks, shows them as received, apart from the user's own list, until the user takes them in
+// (core/recipe.TakeIn: nothing of theirs is overwritten).
+
+// received is what the user has been sent and not yet dismissed.
+type received struct {
+	from   recipe.Carried
+	source string // "this copy" or the file's name
+}
+
+func (a *app) bindCarry() {
+	on(byID("carry-save"), "click", func(js.Value, dom.Event) { a.saveCopy() })
+	on(byID("carry-all"), "change", func(t js.Value, _ dom.Event) {
+		for _, el := range qa(byID("carry-pick"), "input[type=checkbox]") {
+			setChecked(el, checked(t))
+		}
+	})
+	on(byID("carry-pick"), "change", func(js.Value, dom.Event) { a.syncCarryAll() })
+	on(byID("received"), "click", a.onReceivedClick)
+	on(byID("take-all"), "click", func(js.Value, dom.Event) { a.takeIn(a.got.from.Recipes) })
+	on(byID("carry-file"), "change", func(t js.Value, _ dom.Event) {
+		files := t.Get("files")
+		if files.Length() > 0 {
+			a.readFile(files.Index(0))
+		}
+		setValue(t, "")
+	})
+	drop := byID("carry-drop")
+	on(drop, "dragover", func(_ js.Value, ev dom.Event) {
+		ev.PreventDefault()
+		classSet(drop, "over", true)
+	})
+	on(drop, "dragleave", func(js.Value, dom.Event) { classSet(drop, "over", false) })
+	on(drop, "drop", func(_ js.Value, ev dom.Event) {
+		ev.PreventDefault()
+		classSet(drop, "over", false)
+		files := ev.Underlying().Get("dataTransfer").Get("files")
+		if files.Length() > 0 {
+			a.readFile(files.Index(0))
+		}
+	})
+	on(byID("carry-note-go"), "click", func(js.Value, dom.Event) { a.showScreen("box") })
+
+	// The recipes this copy of the page carries.
+	if block := byID(recipe.CarriedID); exists(block) {
+		if text := strings.TrimSpace(block.Get("textContent").String()); text != "" {
+			c, err := recipe.ExtractCarried([]byte(text))
+			if err != nil {
+				a.boxMessage("m-received", "The recipes this copy carries could not be read, so none are shown: "+carryMessage(err))
+			} else {
+				a.got = &received{from: c, source: "this copy"}
+				note := byID("carry-note")
+				setText(byID("carry-note-text"), CarriedNote(c))
+				setHidden(note, false)
+			}
+		}
+	}
+	a.renderReceived()
+}
+
+// readFile takes the recipes out of a file the user dropped or picked; nothing in it runs.
+func (a *app) readFile(file js.Value) {
+	name := file.Get("name").String()
+	if size := file.Get("size").Int(); size > recipe.MaxCarrierBytes {
+		a.boxMessage("m-received", "“"+name+"” is too large ("+itoa(size>>20)+" MB) to be a Saltcast file; nothing was read.")
+		return
+	}
+	var done, failed js.Func
+	release := func() { done.Release(); failed.Release() }
+	done = js.FuncOf(func(_ js.Value, args []js.Value) any {
+		release()
+		c, err := recipe.ExtractCarried([]byte(args[0].String()))
+		if err != nil {
+			a.boxMessage("m-received", "Nothing was taken from “"+name+"”: "+carryMessage(err))
+			return nil
+		}
+		a.got = &received{from: c, source: name}
+		a.renderReceived()
+		a.boxMessage("m-received", "“"+name+"” holds "+plural(len(c.Recipes), "recipe")+": they are listed above, apart from yours.")
+		return nil
+	})
+	failed = js.FuncOf(func(_ js.Value, args []js.Value) any {
+		release()
+		a.boxMessage("m-received", "“"+name+"” could not be read.")
+		return nil
+	})
+	file.Call("text").Call("then", done, failed)
+}
+
+// saveCopy downloads this page with the ticked recipes in it.
+func (a *app) saveCopy() {
+	var pick []recipe.Recipe
+	for _, el := range qa(byID("carry-pick"), "input[type=checkbox]") {
+		if checked(el) {
+			i := atoi(attr(el, "data-i"))
+			if i >= 0 && i < len(a.shelf.Recipes) {
+				pick = append(pick, a.shelf.Recipes[i])
+			}
+		}
+	}
+	if len(pick) == 0 {
+		a.boxMessage("m-carry", "Tick at least one recipe to send.")
+		return
+	}
+	page, err := ownPage()
+	if err != nil {
+		a.boxMessage("m-carry", "No copy was saved: "+err.Error())
+		return
+	}
+	now := js.Global().Get("Date").New()
+	c := recipe.Carried{
+		AppVersion: strings.TrimSpace(byID("app-version").Get("textContent").String()),
+		SavedAt:    UTCStamp(now.Call("toISOString").String()),
+		SentBy:     strings.TrimSpace(value(byID("carry-by"))),
+		Recipes:    pick,
+	}
+	out, err := recipe.WithCarried(page, c)
+	if err != nil {
+		a.boxMessage("m-carry", "No copy was saved: "+carryMessage(err))
+		return
+	}
+	download(CopyFileName(localDate(now)), "text/html", string(out))
+	a.boxMessage("m-carry", "Saved a copy of Saltcast with "+plural(len(pick), "recipe")+". Send that file; whoever opens it sees the recipes as received.")
+}
+
+// ownPage rebuilds this page's bytes from the template compiled into the program and the
+// text the page's own elements hold.
+func ownPage() ([]byte, error) {
+	if pageTemplate == "" {
+		return nil, errors.New("this build of Saltcast cannot copy itself (it was not built by web/bundle)")
+	}
+	tpl := pagecopy.Template(pageTemplate)
+	missing := ""
+	page := tpl.Join(func(id string) string {
+		el := byID(id)
+		if !exists(el) {
+			missing = id
+			return ""
+		}
+		return el.Get("textContent").String()
+	})
+	if missing != "" {
+		return nil, errors.New("the page has lost its element " + missing)
+	}
+	return page, nil
+}
+
+// takeIn adds received recipes to the user's own list (core/recipe.TakeIn).
+func (a *app) takeIn(rs []recipe.Recipe) {
+	if len(rs) == 0 {
+		return
+	}
+	all, added, same := recipe.TakeIn(a.shelf.Recipes, rs, localDate(js.Global().Get("Date").New()))
+	next := Shelf{Recipes: all}
+	if !a.store.set(keyShelf, string(next.Encode())) {
+		a.boxMessage("m-received", "Nothing was taken: this browser does not let the page keep data (private window or storage full).")
+		return
+	}
+	renamed := all[len(a.shelf.Recipes):]
+	a.shelf = next
+	a.renderShelf()
+	a.boxMessage("m-received", TakeInMessage(rs, renamed, added, same))
+}
+
+func (a *app) onReceivedClick(t js.Value, _ dom.Event) {
+	b := closest(t, "button")
+	if !exists(b) || a.got == nil {
+		return
+	}
+	i := atoi(attr(b, "data-i"))
+	if i < 0 || i >= len(a.got.from.Recipes) {
+		return
+	}
+	r := a.got.from.Recipes[i]
+	switch {
+	case hasAttr(b, "data-take"):
+		a.takeIn([]recipe.Recipe{r})
+	case hasAttr(b, "data-look"):
+		a.load(r)
+		a.showScreen("batch")
+	}
+}
+
+// renderCarry lists the saved recipes with a box to tick each.
+func (a *app) renderCarry() {
+	list := byID("carry-pick")
+	if !exists(list) {
+		return
+	}
+	was := map[string]bool{}
+	for _, el := range qa(list, "input[type=checkbox]") {
+		if checked(el) {
+			was[attr(el, "data-name")] = true
+		}
+	}
+	clear(list)
+	for i, r := range a.shelf.Recipes {
+		li := add(list, "li", "", "")
+		lab := add(li, "label", "check", "")
+		box := add(lab, "input", "", "")
+		setAttr(box, "type", "checkbox")
+		setAttr(box, "data-i", itoa(i))
+		setAttr(box, "data-name", r.Name)
+		setChecked(box, was[r.Name])
+		add(lab, "span", "", r.Name) // the user's text, as text
+	}
+	setHidden(byID("carry-empty"), len(a.shelf.Recipes) > 0)
+	setHidden(byID("carry-form"), len(a.shelf.Recipes) == 0)
+	a.syncCarryAll()
+}
+
+func (a *app) syncCarryAll() {
+	boxes := qa(byID("carry-pick"), "input[type=checkbox]")
+	all := len(boxes) > 0
+	for _, el := range boxes {
+		all = all && checked(el)
+	}
+	setChecked(byID("carry-all"), all)
+}
+
+// renderReceived lists the received recipes, marking those already in the user's list.
+func (a *app) renderReceived() {
+	list := byID("received")
+	clear(list)
+	has := a.got != nil && len(a.got.from.Recipes) > 0
+	setHidden(byID("received-empty"), has)
+	setHidden(byID("take-all"), !has)
+	setText(byID("received-from"), "")
+	if !has {
+		return
+	}
+	setText(byID("received-from"), FromLine(a.got.from, a.got.source))
+	for i, r := range a.got.from.Recipes {
+		li := add(list, "li", "", "")
+		add(li, "span", "nm", r.Name) // the sender's text, as text
+		if InList(a.shelf.Recipes, r) {
+			add(li, "span", "tag", "in your list")
+		}
+		look := add(li, "button", "act", "Open")
+		setAttr(look, "type", "button")
+		setAttr(look, "data-look", "")
+		setAttr(look, "data-i", itoa(i))
+		setAttr(look, "aria-label", "Open "+r.Name)
+		take := add(li, "button", "act primary", "Take into my list")
+		setAttr(take, "type", "button")
+		setAttr(take, "data-take", "")
+		setAttr(take, "data-i", itoa(i))
+		setAttr(take, "aria-label", "Take "+r.Name+" into my list")
+	}
+}
+
+// localDate is the device's date as 2026-12-01.
+func localDate(d js.Value) string {
+	y, m, day := d.Call("getFullYear").Int(), d.Call("getMonth").Int()+1, d.Call("getDate").Int()
+	return YMD(y, m, day)
+}

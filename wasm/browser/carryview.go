@@ -1,0 +1,145 @@
+package main
+
+import (
+	"bytes"
+	"strings"
+
+	"saltcast/core/recipe"
+)
+
+// The words of the carried-recipes screens, kept apart from the DOM so host tests read them.
+
+// CarriedNote is the line shown on opening a copy that carries recipes.
+func CarriedNote(c recipe.Carried) string {
+	s := "This copy of Saltcast carries " + plural(len(c.Recipes), "recipe")
+	if c.SentBy != "" {
+		s += " from " + c.SentBy
+	}
+	return s + ". They are kept apart from your own until you take them in."
+}
+
+// FromLine says where received recipes come from.
+func FromLine(c recipe.Carried, source string) string {
+	var b strings.Builder
+	b.WriteString(plural(len(c.Recipes), "recipe"))
+	if source == "" || source == "this copy" {
+		b.WriteString(" carried by this copy")
+	} else {
+		b.WriteString(" from the file “" + source + "”")
+	}
+	if c.SentBy != "" {
+		b.WriteString(", sent by " + c.SentBy)
+	}
+	if c.SavedAt != "" {
+		b.WriteString(", saved " + c.SavedAt[:10] + " " + c.SavedAt[11:16] + " UTC")
+	}
+	if c.AppVersion != "" {
+		b.WriteString(" with Saltcast " + c.AppVersion)
+	}
+	if !c.Sealed {
+		b.WriteString(" (a recipe export: no sender or checksum recorded)")
+	}
+	return b.String() + "."
+}
+
+// TakeInMessage reports what TakeIn did: rs were offered, added of them are new to the
+// list (renamed holds them as kept), same were there already.
+func TakeInMessage(rs, kept []recipe.Recipe, added, same int) string {
+	var b strings.Builder
+	if added > 0 {
+		b.WriteString("Took " + plural(added, "recipe") + " into your list.")
+	}
+	if same > 0 {
+		if b.Len() > 0 {
+			b.WriteString(" ")
+		}
+		if same == 1 {
+			b.WriteString("1 was there already.")
+		} else {
+			b.WriteString(itoa(same) + " were there already.")
+		}
+	}
+	// Name each clash: the received recipe kept beside the user's under a marked name.
+	names := map[string]bool{}
+	for _, r := range rs {
+		names[r.Name] = true
+	}
+	for _, k := range kept {
+		if !names[k.Name] {
+			b.WriteString(" A recipe of the same name was kept as “" + k.Name + "”.")
+		}
+	}
+	return b.String()
+}
+
+// InList reports whether the list holds r as it is (same name, same recipe).
+func InList(list []recipe.Recipe, r recipe.Recipe) bool {
+	enc := r.Encode()
+	for _, x := range list {
+		if x.Name == r.Name && bytes.Equal(x.Encode(), enc) {
+			return true
+		}
+	}
+	return false
+}
+
+// UTCStamp turns Date.toISOString's "2026-12-01T09:30:00.123Z" into the carried format's
+// "2026-12-01T09:30:00Z"; anything else gives "" (no time recorded).
+func UTCStamp(iso string) string {
+	if len(iso) == 24 && iso[19] == '.' && iso[23] == 'Z' {
+		return iso[:19] + "Z"
+	}
+	return ""
+}
+
+// CopyFileName names a saved copy after the local date.
+func CopyFileName(date string) string {
+	return "saltcast-with-recipes-" + date + ".html"
+}
+
+// YMD writes a date as 2026-12-01.
+func YMD(y, m, d int) string {
+	two := func(n int) string {
+		if n < 10 {
+			return "0" + itoa(n)
+		}
+		return itoa(n)
+	}
+	return itoa(y) + "-" + two(m) + "-" + two(d)
+}
+
+// carryMessage turns an error of ExtractCarried or WithCarried into a sentence.
+func carryMessage(err error) string {
+	s := err.Error()
+	if s == "" {
+		return "unknown error."
+	}
+	s = strings.ToUpper(s[:1]) + s[1:]
+	if !strings.HasSuffix(s, ".") {
+		s += "."
+	}
+	return s
+}
+
+func plural(n int, word string) string {
+	if n == 1 {
+		return "1 " + word
+	}
+	return itoa(n) + " " + word + "s"
+}
+
+// atoi reads a small non-negative number from an attribute the program wrote; -1 if it is
+// not one.
+func atoi(s string) int {
+	if s == "" || len(s) > 6 {
+		return -1
+	}
+	n := 0
+	for _, c := range s {
+		if c < '0' || c > '9' {
+			return -1
+		}
+		n = n*10 + int(c-'0')
+	}
+	return n
+}
