@@ -1,7 +1,6 @@
 package recipe
 
 import (
-	"bytes"
 	"errors"
 	"strconv"
 	"strings"
@@ -166,15 +165,24 @@ func (c Carried) check() error {
 	return nil
 }
 
-// encodable reports what would make Encode panic or Decode refuse the text of r: texts
-// longer than Decode reads. Numbers are the caller's: a Recipe from Decode is always fine.
+// encodable reports what would make Encode panic, Decode refuse the text of r, or the
+// checksum differ once read back: texts longer than Decode reads, and text that is not
+// UTF-8 (the encoder writes U+FFFD for it, which reads back as other bytes). A Recipe from
+// Decode is always fine.
 func (r Recipe) encodable() error {
-	for _, t := range []struct {
+	texts := []struct {
 		s   string
 		max int
-	}{{r.Name, maxTextName}, {r.Notes, maxTextNote}, {r.Solute, maxTextName}, {r.ChargedForm, maxTextName}} {
-		if len(t.s) > t.max {
-			return errors.New("texts of at most " + strconv.Itoa(t.max) + " bytes")
+	}{{r.Name, maxTextName}, {r.Notes, maxTextNote}, {r.Solute, maxTextName}, {r.ChargedForm, maxTextName}}
+	if c := r.Custom; c != nil {
+		texts = append(texts, struct {
+			s   string
+			max int
+		}{c.Name + c.Source + c.Model, 3 * maxTextName})
+	}
+	for _, t := range texts {
+		if len(t.s) > t.max || !utf8.ValidString(t.s) {
+			return errors.New("UTF-8 texts of at most " + strconv.Itoa(t.max) + " bytes")
 		}
 	}
 	var e wire.Encoder
@@ -191,12 +199,11 @@ func CarriedBlock(c Carried) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	var b bytes.Buffer
-	b.Grow(len(js) + 96)
-	b.WriteString(`<script type="` + CarriedType + `" id="` + CarriedID + `">`)
-	b.Write(js)
-	b.WriteString("</script>")
-	return b.Bytes(), nil
+	const open, end = `<script type="` + CarriedType + `" id="` + CarriedID + `">`, "</script>"
+	b := make([]byte, 0, len(open)+len(js)+len(end))
+	b = append(b, open...)
+	b = append(b, js...)
+	return append(b, end...), nil
 }
 
 // WithCarried returns a copy of page, the app's own HTML, carrying c: the page's carried
@@ -208,7 +215,7 @@ func WithCarried(page []byte, c Carried) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	found, bodyEnd, err := scanBlocks(page)
+	found, bodyEnd, err := scanBlocks(string(page))
 	if err != nil {
 		return nil, err
 	}
@@ -246,14 +253,15 @@ func ExtractCarried(data []byte) (Carried, error) {
 		return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: "file",
 			Value: strconv.Itoa(len(data)) + " bytes", Allowed: "a file of at most " + strconv.Itoa(MaxCarrierBytes>>20) + " MB"})
 	}
-	text := bytes.TrimLeft(bytes.TrimPrefix(data, []byte("\xEF\xBB\xBF")), " \t\r\n")
+	page := string(data)
+	text := strings.TrimLeft(strings.TrimPrefix(page, "\xEF\xBB\xBF"), " \t\r\n")
 	if len(text) == 0 {
 		return Carried{}, carryErr(ErrNoRecipes, nil)
 	}
 	if text[0] == '{' || text[0] == '[' {
-		return readCarriedJSON(text, false)
+		return readCarriedJSON([]byte(text), false)
 	}
-	found, _, err := scanBlocks(data)
+	found, _, err := scanBlocks(page)
 	if err != nil {
 		return Carried{}, err
 	}
@@ -264,11 +272,11 @@ func ExtractCarried(data []byte) (Carried, error) {
 	default:
 		return Carried{}, carryErr(ErrMalformed, errors.New("the file holds "+strconv.Itoa(len(found))+" recipes blocks; a Saltcast page has one"))
 	}
-	inner := bytes.TrimSpace(data[found[0].textStart:found[0].textEnd])
+	inner := strings.TrimSpace(page[found[0].textStart:found[0].textEnd])
 	if len(inner) == 0 {
 		return Carried{}, carryErr(ErrNoRecipes, nil)
 	}
-	return readCarriedJSON(inner, true)
+	return readCarriedJSON([]byte(inner), true)
 }
 
 // readCarriedJSON reads a carried block, a collection or a single recipe. inBlock says the
@@ -422,16 +430,16 @@ type block struct{ start, textStart, textEnd, end int }
 // text), and reads the attributes of every <script> start tag. A carried block that never
 // ends is malformed (the file was cut short). bodyEnd is where the last </body> tag
 // outside such text starts, or -1.
-func scanBlocks(page []byte) (found []block, bodyEnd int, err error) {
+func scanBlocks(page string) (found []block, bodyEnd int, err error) {
 	bodyEnd = -1
 	for i := 0; i < len(page); {
-		lt := bytes.IndexByte(page[i:], '<')
+		lt := strings.IndexByte(page[i:], '<')
 		if lt < 0 {
 			break
 		}
 		i += lt
-		if bytes.HasPrefix(page[i:], []byte("<!--")) {
-			end := bytes.Index(page[i+4:], []byte("-->"))
+		if strings.HasPrefix(page[i:], "<!--") {
+			end := strings.Index(page[i+4:], "-->")
 			if end < 0 {
 				break
 			}
@@ -450,7 +458,7 @@ func scanBlocks(page []byte) (found []block, bodyEnd int, err error) {
 			i++
 			continue
 		}
-		attrs, tagEnd := readAttrs(page, nameEnd)
+		typ, tagEnd := typeAttr(page, nameEnd)
 		if tagEnd < 0 {
 			break // a start tag cut short: nothing after it is markup
 		}
@@ -461,14 +469,14 @@ func scanBlocks(page []byte) (found []block, bodyEnd int, err error) {
 			continue
 		}
 		closing := indexFold(page, tagEnd, "</"+name)
-		carried := name == "script" && strings.EqualFold(strings.TrimSpace(attrs["type"]), CarriedType)
+		carried := name == "script" && equalFold(strings.TrimSpace(typ), CarriedType)
 		if closing < 0 {
 			if carried {
 				return nil, bodyEnd, carryErr(ErrMalformed, errors.New("the recipes block has no end: the file was cut short"))
 			}
 			break
 		}
-		end := bytes.IndexByte(page[closing:], '>')
+		end := strings.IndexByte(page[closing:], '>')
 		if end < 0 {
 			end = len(page)
 		} else {
@@ -484,7 +492,7 @@ func scanBlocks(page []byte) (found []block, bodyEnd int, err error) {
 
 // tagName reads a start tag's name at p (just after '<'), lower-cased; "" if p does not
 // start one.
-func tagName(page []byte, p int) (string, int) {
+func tagName(page string, p int) (string, int) {
 	start := p
 	for p < len(page) && (isASCIILetter(page[p]) || (p > start && page[p] >= '0' && page[p] <= '9')) {
 		p++
@@ -492,19 +500,19 @@ func tagName(page []byte, p int) (string, int) {
 	if p == start {
 		return "", p
 	}
-	return strings.ToLower(string(page[start:p])), p
+	return strings.ToLower(page[start:p]), p
 }
 
-// readAttrs reads attributes from p up to and including the '>' that ends the tag, and
-// returns them (names lower-cased, first occurrence wins as in HTML) with the index after
-// the '>'; -1 if the tag never ends.
-func readAttrs(page []byte, p int) (map[string]string, int) {
-	attrs := map[string]string{}
+// typeAttr reads the attributes of a start tag from p up to and including the '>' that
+// ends it, and returns the value of its type attribute (the first one, as in HTML) and the
+// index after the '>'; -1 if the tag never ends.
+func typeAttr(page string, p int) (typ string, end int) {
+	seen := false
 	for p < len(page) {
 		c := page[p]
 		switch {
 		case c == '>':
-			return attrs, p + 1
+			return typ, p + 1
 		case isHTMLSpace(c) || c == '/':
 			p++
 			continue
@@ -514,7 +522,7 @@ func readAttrs(page []byte, p int) (map[string]string, int) {
 		for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' && page[p] != '/' && page[p] != '=' {
 			p++
 		}
-		name := strings.ToLower(string(page[start:p]))
+		name := page[start:p]
 		for p < len(page) && isHTMLSpace(page[p]) {
 			p++
 		}
@@ -526,37 +534,58 @@ func readAttrs(page []byte, p int) (map[string]string, int) {
 			}
 			if p < len(page) && (page[p] == '"' || page[p] == '\'') {
 				q := page[p]
-				end := bytes.IndexByte(page[p+1:], q)
+				end := strings.IndexByte(page[p+1:], q)
 				if end < 0 {
-					return attrs, -1
+					return "", -1
 				}
-				val = string(page[p+1 : p+1+end])
+				val = page[p+1 : p+1+end]
 				p += end + 2
 			} else {
 				vs := p
 				for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' {
 					p++
 				}
-				val = string(page[vs:p])
+				val = page[vs:p]
 			}
 		}
-		if _, dup := attrs[name]; !dup {
-			attrs[name] = val
+		if !seen && equalFold(name, "type") {
+			typ, seen = val, true
 		}
 	}
-	return attrs, -1
+	return "", -1
+}
+
+// equalFold compares ASCII case-insensitively (the HTML names and types read here are
+// ASCII; strings.EqualFold would bring Unicode case tables into the page).
+func equalFold(a, b string) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := 0; i < len(a); i++ {
+		x, y := a[i], b[i]
+		if 'A' <= x && x <= 'Z' {
+			x += 'a' - 'A'
+		}
+		if 'A' <= y && y <= 'Z' {
+			y += 'a' - 'A'
+		}
+		if x != y {
+			return false
+		}
+	}
+	return true
 }
 
 // indexFold finds sub (ASCII, starting with '<') in page from p on, ignoring ASCII case;
 // -1 if absent.
-func indexFold(page []byte, p int, sub string) int {
+func indexFold(page string, p int, sub string) int {
 	for i := p; i+len(sub) <= len(page); i++ {
-		j := bytes.IndexByte(page[i:len(page)-len(sub)+1], sub[0])
+		j := strings.IndexByte(page[i:len(page)-len(sub)+1], sub[0])
 		if j < 0 {
 			return -1
 		}
 		i += j
-		if bytes.EqualFold(page[i:i+len(sub)], []byte(sub)) {
+		if equalFold(page[i:i+len(sub)], sub) {
 			return i
 		}
 	}

@@ -403,3 +403,17 @@ func BenchmarkWithCarriedPage(b *testing.B) {
 	}
 	_ = sink
 }
+
+// Text that is not UTF-8 would be written as U+FFFD and read back as other bytes, so the
+// checksum could never match: it is refused when the copy is made, not when it is opened.
+func TestEncodeCarriedRefusesInvalidUTF8(t *testing.T) {
+	for _, r := range []Recipe{
+		{Name: "a\xff", Solute: "KNO3"},
+		{Name: "a", Notes: "\xc3", Solute: "KNO3"},
+		{Name: "a", Custom: &Custom{Name: "x", Source: "\xed\xa0\x80", Model: "table"}},
+	} {
+		if _, err := EncodeCarried(Carried{Recipes: []Recipe{r}}); err == nil {
+			t.Errorf("EncodeCarried(%q) gave no error", r.Name+r.Notes)
+		}
+	}
+}

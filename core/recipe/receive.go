@@ -1,7 +1,6 @@
 package recipe
 
 import (
-	"bytes"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -30,7 +29,7 @@ func TakeIn(mine, received []Recipe, day string) (all []Recipe, added, same int)
 			r.Name = "unnamed"
 		}
 		if i, ok := taken[r.Name]; ok {
-			if bytes.Equal(all[i].Encode(), r.Encode()) {
+			if string(all[i].Encode()) == string(r.Encode()) {
 				same++
 				continue
 			}

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"bytes"
 	"strings"
 
 	"saltcast/core/recipe"
@@ -76,7 +75,7 @@ func TakeInMessage(rs, kept []recipe.Recipe, added, same int) string {
 func InList(list []recipe.Recipe, r recipe.Recipe) bool {
 	enc := r.Encode()
 	for _, x := range list {
-		if x.Name == r.Name && bytes.Equal(x.Encode(), enc) {
+		if x.Name == r.Name && string(x.Encode()) == string(enc) {
 			return true
 		}
 	}
@@ -114,7 +113,9 @@ func carryMessage(err error) string {
 	if s == "" {
 		return "unknown error."
 	}
-	s = strings.ToUpper(s[:1]) + s[1:]
+	if c := s[0]; 'a' <= c && c <= 'z' {
+		s = string(c-'a'+'A') + s[1:]
+	}
 	if !strings.HasSuffix(s, ".") {
 		s += "."
 	}
