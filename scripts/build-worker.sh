@@ -3,7 +3,9 @@
 #   app.wasm       the Go program of wasm/worker (GOOS=js GOARCH=wasm, stripped, -trimpath)
 #   wasm_exec.js   Go's JS support, as patched by github.com/syumai/workers' workers-assets-gen
 #   worker.mjs     Saltcast's own entry module (wasm/worker/glue), one Go instance per isolate
-#   saltcast.html  the single-file app served at GET / (dist/saltcast.html, built if missing)
+#   saltcast.html  the single-file app served at GET / (dist/saltcast.html as web/offline serves it:
+#                  with a manifest link and the service worker's install script; built if missing)
+#   sw.txt, manifest.webmanifest, icons/*.png   the installable offline copy (web/offline)
 # Fast when nothing changed (Go's build cache); prints the sizes measured against the plan limits.
 set -euo pipefail
 cd "$(dirname "$0")/.."
@@ -26,9 +28,12 @@ cp wasm/worker/glue/worker.mjs "$out/worker.mjs"
 GOOS=js GOARCH=wasm "$GO" build -trimpath -ldflags="-s -w" -o "$out/app.wasm.tmp" ./wasm/worker
 mv "$out/app.wasm.tmp" "$out/app.wasm"
 
+# The page as served (with the manifest link and the script that installs the service
+# worker), sw.txt, the manifest and the icons: the installable offline copy (web/offline).
 if [ -f dist/saltcast.html ]; then
-	cp dist/saltcast.html "$out/saltcast.html"
+	"$GO" run ./web/offline -page dist/saltcast.html -out "$out"
 else
+	"$GO" run ./web/offline -page "" -out "$out"
 	cat >"$out/saltcast.html" <<'HTML'
 <!doctype html>
 <html lang="en"><head><meta charset="utf-8"><title>Saltcast: app not built</title></head>
@@ -38,7 +43,8 @@ HTML
 fi
 
 gz() { gzip -9c "$1" | wc -c; }
-total=$(cat "$out"/worker.mjs "$out"/wasm_exec.js "$out"/app.wasm "$out"/saltcast.html | gzip -9c | wc -c)
+total=$(cat "$out"/worker.mjs "$out"/wasm_exec.js "$out"/app.wasm "$out"/saltcast.html "$out"/sw.txt \
+	"$out"/manifest.webmanifest "$out"/icons/*.png | gzip -9c | wc -c)
 printf 'build-worker: %s app.wasm %d B (gzip %d), saltcast.html %d B (gzip %d); bundle gzip %d B\n' \
 	"$out" "$(wc -c <"$out/app.wasm")" "$(gz "$out/app.wasm")" \
 	"$(wc -c <"$out/saltcast.html")" "$(gz "$out/saltcast.html")" "$total"

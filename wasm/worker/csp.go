@@ -10,8 +10,9 @@ import (
 // pageCSP returns the Content-Security-Policy for the single-file app: its inline scripts
 // run only if their SHA-256 hashes are listed, so an injected script would not; WebAssembly
 // may be compiled ('wasm-unsafe-eval', which allows nothing else); styles may be inline
-// (the charts carry style attributes); images only from data: and blob: URLs made in the
-// page; the page may call this worker's API ('self'); everything else (fonts, frames,
+// (the charts carry style attributes); images from data: and blob: URLs made in the page
+// and this worker's icons; the page may call this worker's API, register its service worker
+// (/sw.js) and read its web app manifest ('self'); everything else (fonts, frames, other
 // workers, plugins, forms, <base>, other origins) falls back to default-src 'none'.
 func pageCSP(page []byte) string {
 	var b strings.Builder
@@ -24,8 +25,8 @@ func pageCSP(page []byte) string {
 		b.WriteString(base64.StdEncoding.EncodeToString(sum[:]))
 		b.WriteString("'")
 	}
-	b.WriteString(" 'wasm-unsafe-eval'; style-src 'unsafe-inline'; img-src data: blob:;" +
-		" connect-src 'self'; manifest-src 'self'; base-uri 'none'; form-action 'none';" +
+	b.WriteString(" 'wasm-unsafe-eval'; style-src 'unsafe-inline'; img-src 'self' data: blob:;" +
+		" connect-src 'self'; manifest-src 'self'; worker-src 'self'; base-uri 'none'; form-action 'none';" +
 		" frame-ancestors 'none'")
 	return b.String()
 }

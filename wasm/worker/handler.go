@@ -27,11 +27,41 @@ type Options struct {
 	// through Go. Page is still needed: the Content-Security-Policy hashes its scripts.
 	WritePage func(w http.ResponseWriter) bool
 
+	// Files are served as they are, by path ("/sw.js"): the service worker, web app
+	// manifest and icons that let a tablet install the app from this address and run it
+	// offline (written by web/offline). None: those paths are 404.
+	Files map[string]Static
+
 	// AllowOrigin is the one origin ("https://records.example") whose web pages may call the
 	// API from a browser, or "*" for any origin. Empty: CORS is off and browsers block such
 	// calls (other clients are not affected: CORS binds browsers only).
 	AllowOrigin string
 }
+
+// Static is one file the worker serves as it is.
+type Static struct {
+	Body        []byte
+	ContentType string
+}
+
+// StaticType is the Content-Type of a file of the installable copy, by its name; "" for a
+// kind the worker does not serve.
+func StaticType(path string) string {
+	switch {
+	case strings.HasSuffix(path, ".js"):
+		return "text/javascript; charset=utf-8"
+	case strings.HasSuffix(path, ".webmanifest"):
+		return "application/manifest+json"
+	case strings.HasSuffix(path, ".png"):
+		return "image/png"
+	}
+	return ""
+}
+
+// staticCSP fences in the service worker (a script run from its own response headers): it
+// may fetch the app from this origin for its cache and nothing else. The other files are
+// data, for which the policy changes nothing.
+const staticCSP = "default-src 'none'; connect-src 'self'; frame-ancestors 'none'"
 
 // handler routes the HTTP API onto core/service. It holds no state between requests.
 type handler struct {
@@ -90,6 +120,10 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 
 	if r.URL.Path == "/" {
 		h.servePage(w, r)
+		return
+	}
+	if f, ok := h.opt.Files[r.URL.Path]; ok {
+		h.serveFile(w, r, f)
 		return
 	}
 	rt, ok := h.routes[r.URL.Path]
@@ -164,6 +198,27 @@ func (h *handler) servePage(w http.ResponseWriter, r *http.Request) {
 	hdr.Set("Content-Length", strconv.Itoa(len(h.page)))
 	w.WriteHeader(http.StatusOK)
 	w.Write(h.page)
+}
+
+// serveFile answers GET of a file of the installable copy. no-cache: a browser may keep it
+// but asks each time whether it changed, so a new version is seen at once (the service
+// worker keeps the app for offline use, not the HTTP cache).
+func (h *handler) serveFile(w http.ResponseWriter, r *http.Request, f Static) {
+	hdr := w.Header()
+	if r.Method != http.MethodGet && r.Method != http.MethodHead {
+		hdr.Set("Allow", "GET, HEAD")
+		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+			" is not allowed at "+r.URL.Path+"; allowed: GET, HEAD"))
+		return
+	}
+	hdr.Set("Content-Type", f.ContentType)
+	hdr.Set("Content-Length", strconv.Itoa(len(f.Body)))
+	hdr.Set("Cache-Control", "no-cache")
+	hdr.Set("Content-Security-Policy", staticCSP)
+	w.WriteHeader(http.StatusOK)
+	if r.Method != http.MethodHead {
+		w.Write(f.Body)
+	}
 }
 
 // plan answers POST /api/v1/plan: a recipe in, the plan out.

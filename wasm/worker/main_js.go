@@ -13,7 +13,7 @@ import (
 )
 
 func main() {
-	// glue/worker.mjs passes {env, ctx, binding, page}; see the limits noted there.
+	// glue/worker.mjs passes {env, ctx, binding, page, files}; see the limits noted there.
 	runtime := js.Global().Get("context")
 	page := runtime.Get("page") // the text module saltcast.html, a JS string
 	opt := Options{AllowOrigin: stringOf(runtime.Get("env").Get("SALTCAST_ALLOW_ORIGIN"))}
@@ -29,11 +29,40 @@ func main() {
 			return true
 		}
 	}
+	opt.Files = staticFiles(runtime.Get("files"))
 	workers.ServeNonBlock(leakFree{NewHandler(opt)})
 	workers.Ready()
 	// Stay alive for the isolate's later requests instead of returning after the first one
 	// (workers.Serve's behaviour, made for its one-program-per-request glue).
 	select {}
+}
+
+// staticFiles reads the files of the installable copy that glue/worker.mjs passes, by path:
+// text modules arrive as strings, data modules (the icons) as ArrayBuffers.
+func staticFiles(files js.Value) map[string]Static {
+	if files.Type() != js.TypeObject {
+		return nil
+	}
+	out := map[string]Static{}
+	keys := js.Global().Get("Object").Call("keys", files)
+	for i := range keys.Length() {
+		path := keys.Index(i).String()
+		v := files.Get(path)
+		ct := StaticType(path)
+		if ct == "" {
+			continue
+		}
+		var body []byte
+		if v.Type() == js.TypeString {
+			body = []byte(v.String())
+		} else {
+			u8 := js.Global().Get("Uint8Array").New(v)
+			body = make([]byte, u8.Length())
+			js.CopyBytesToGo(body, u8)
+		}
+		out[path] = Static{Body: body, ContentType: ct}
+	}
+	return out
 }
 
 // rawBodyWriter is the response writer of github.com/syumai/workers, which can answer with a

@@ -15,6 +15,12 @@ const saltcast :Workerd.Worker = (
     (name = "wasm_exec.js", esModule = embed "../../build/worker/wasm_exec.js"),
     (name = "app.wasm", wasm = embed "../../build/worker/app.wasm"),
     (name = "saltcast.html", text = embed "../../build/worker/saltcast.html"),
+    (name = "sw.txt", text = embed "../../build/worker/sw.txt"),
+    (name = "manifest.webmanifest", text = embed "../../build/worker/manifest.webmanifest"),
+    (name = "icons/icon-192.png", data = embed "../../build/worker/icons/icon-192.png"),
+    (name = "icons/icon-512.png", data = embed "../../build/worker/icons/icon-512.png"),
+    (name = "icons/icon-maskable-512.png", data = embed "../../build/worker/icons/icon-maskable-512.png"),
+    (name = "icons/apple-touch-icon.png", data = embed "../../build/worker/icons/apple-touch-icon.png"),
   ],
   compatibilityDate = "2026-11-01",
   bindings = [

@@ -29,7 +29,9 @@ import (
 const labOrigin = "https://records.lab.example"
 
 // bundleFiles are the modules of the worker, as workerd.capnp and wrangler.toml load them.
-var bundleFiles = []string{"worker.mjs", "wasm_exec.js", "app.wasm", "saltcast.html"}
+var bundleFiles = []string{"worker.mjs", "wasm_exec.js", "app.wasm", "saltcast.html", "sw.txt",
+	"manifest.webmanifest", "icons/icon-192.png", "icons/icon-512.png", "icons/icon-maskable-512.png",
+	"icons/apple-touch-icon.png"}
 
 func repoPath(parts ...string) string {
 	return filepath.Join(append([]string{"..", ".."}, parts...)...)
@@ -97,6 +99,13 @@ func startWorkerd(t testing.TB, bin, allowOrigin string) *workerdServer {
 // startWorkerdWith is startWorkerd with a last change to the config text (nil: none).
 func startWorkerdWith(t testing.TB, bin, allowOrigin string, edit func(cfg string) string) *workerdServer {
 	t.Helper()
+	return startWorkerdAt(t, bin, "127.0.0.1:0", allowOrigin, edit)
+}
+
+// startWorkerdAt is startWorkerdWith on a given loopback address ("127.0.0.1:0" for any
+// free port), so a test can bring a server back at the same origin.
+func startWorkerdAt(t testing.TB, bin, addr, allowOrigin string, edit func(cfg string) string) *workerdServer {
+	t.Helper()
 	// The committed config, with its paths made relative to build/worker/ (capnp embeds
 	// only relative paths) and the origin binding set.
 	src, err := os.ReadFile("workerd.capnp")
@@ -123,7 +132,7 @@ func startWorkerdWith(t testing.TB, bin, allowOrigin string, edit func(cfg strin
 	}
 	f.Close()
 
-	ln, err := net.Listen("tcp", "127.0.0.1:0")
+	ln, err := net.Listen("tcp", addr)
 	if err != nil {
 		os.Remove(config)
 		t.Fatal(err)

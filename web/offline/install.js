@@ -59,23 +59,34 @@
     hadController = true;
   });
 
+  // A new worker that finishes installing while an older one runs this page is an update
+  // waiting for the user's yes.
+  function watch(reg, next) {
+    if (!next) {
+      return;
+    }
+    next.addEventListener("statechange", function () {
+      if (next.state === "installed") {
+        if (sw.controller) {
+          ask(reg);
+        } else {
+          root.setAttribute("data-offline", "installing");
+        }
+      }
+    });
+  }
+
   sw.register("/sw.js", { scope: "/" }).then(function (reg) {
     ask(reg);
+    watch(reg, reg.installing);
     reg.addEventListener("updatefound", function () {
-      var next = reg.installing;
-      if (!next) {
-        return;
-      }
-      next.addEventListener("statechange", function () {
-        if (next.state === "installed") {
-          if (sw.controller) {
-            ask(reg);
-          } else {
-            root.setAttribute("data-offline", "installing");
-          }
-        }
-      });
+      watch(reg, reg.installing);
     });
+    // Look for a new version now (the browser also does on its own); offline this fails
+    // quietly and the kept version runs.
+    if (sw.controller) {
+      reg.update().catch(function () {});
+    }
     return sw.ready;
   }).then(function () {
     if (root.getAttribute("data-offline") !== "update-ready") {

@@ -11,9 +11,14 @@
 //	                       its Content-Security-Policy allows the service worker, the manifest
 //	                       and requests to the same origin (connect-src, worker-src,
 //	                       manifest-src 'self'), and nothing else more than the file's
-//	sw.js                  the service worker, named for this page's version and checksum
+//	sw.txt                 the service worker (served at /sw.js; .txt so that the worker's
+//	                       bundlers import it as text), named for this page's version and
+//	                       checksum
 //	manifest.webmanifest   the web app manifest
 //	icons/*.png            the icons drawn by saltcast/web/icons
+//
+// With -page "" (the app was not built) it writes everything but saltcast.html, and the
+// service worker is named "unbuilt".
 //
 // The file that people e-mail (dist/saltcast.html) is not changed: it registers no service
 // worker, names no manifest and keeps connect-src 'none'.
@@ -130,18 +135,20 @@ func main() {
 	pagePath := flag.String("page", "dist/saltcast.html", "the single-file app built by web/bundle")
 	out := flag.String("out", "build/worker", "directory to write the served files into")
 	flag.Parse()
-	page, err := os.ReadFile(*pagePath)
-	if err != nil {
-		fail(err)
-	}
-	served, err := Served(page)
-	if err != nil {
-		fail(errors.New(*pagePath + ": " + err.Error()))
-	}
-	files := map[string][]byte{
-		"saltcast.html":        served,
-		"sw.js":                ServiceWorker(served),
-		"manifest.webmanifest": manifest,
+	files := map[string][]byte{"manifest.webmanifest": manifest}
+	if *pagePath == "" {
+		files["sw.txt"] = []byte(strings.Replace(serviceWorker, "{{SW_VERSION}}", "unbuilt", 1))
+	} else {
+		page, err := os.ReadFile(*pagePath)
+		if err != nil {
+			fail(err)
+		}
+		served, err := Served(page)
+		if err != nil {
+			fail(errors.New(*pagePath + ": " + err.Error()))
+		}
+		files["saltcast.html"] = served
+		files["sw.txt"] = ServiceWorker(served)
 	}
 	for _, ic := range icons.Icons {
 		b, err := ic.PNG()
@@ -158,8 +165,8 @@ func main() {
 			fail(err)
 		}
 	}
-	os.Stderr.WriteString("offline: " + *out + ": saltcast.html " + strconv.Itoa(len(served)) + " B, sw.js, manifest, " +
-		strconv.Itoa(len(icons.Icons)) + " icons\n")
+	os.Stderr.WriteString("offline: " + *out + ": saltcast.html " + strconv.Itoa(len(files["saltcast.html"])) +
+		" B, sw.txt, manifest, " + strconv.Itoa(len(icons.Icons)) + " icons\n")
 }
 
 func fail(err error) {

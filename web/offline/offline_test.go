@@ -114,7 +114,7 @@ func TestMainWritesFiles(t *testing.T) {
 	if msg, err := cmd.CombinedOutput(); err != nil {
 		t.Fatalf("go run ./web/offline: %v\n%s", err, msg)
 	}
-	for _, f := range []string{"saltcast.html", "sw.js", "manifest.webmanifest", "icons/icon-192.png",
+	for _, f := range []string{"saltcast.html", "sw.txt", "manifest.webmanifest", "icons/icon-192.png",
 		"icons/icon-512.png", "icons/icon-maskable-512.png", "icons/apple-touch-icon.png"} {
 		if fi, err := os.Stat(filepath.Join(out, f)); err != nil || fi.Size() == 0 {
 			t.Errorf("%s not written: %v", f, err)

@@ -13,6 +13,22 @@
 import "./wasm_exec.js";
 import app from "./app.wasm";
 import page from "./saltcast.html";
+// The installable copy (web/offline): service worker, web app manifest and icons.
+import sw from "./sw.txt";
+import manifest from "./manifest.webmanifest";
+import icon192 from "./icons/icon-192.png";
+import icon512 from "./icons/icon-512.png";
+import iconMaskable from "./icons/icon-maskable-512.png";
+import iconApple from "./icons/apple-touch-icon.png";
+
+const files = {
+  "/sw.js": sw,
+  "/manifest.webmanifest": manifest,
+  "/icons/icon-192.png": icon192,
+  "/icons/icon-512.png": icon512,
+  "/icons/icon-maskable-512.png": iconMaskable,
+  "/icons/apple-touch-icon.png": iconApple,
+};
 
 // tryCatch is called by github.com/syumai/workers to catch JS exceptions from Go.
 globalThis.tryCatch = (fn) => {
@@ -92,7 +108,7 @@ function start(env, ctx) {
       forget(new Error("stopped by a test"));
     },
   };
-  go.run(instance, { env, ctx, binding, page }).then(
+  go.run(instance, { env, ctx, binding, page, files }).then(
     () => forget(new Error("the Go program exited")),
     (err) => forget(err),
   );
