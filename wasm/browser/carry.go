@@ -56,7 +56,10 @@ func (a *app) bindCarry() {
 			a.readFile(files.Index(0))
 		}
 	})
-	on(byID("carry-note-go"), "click", func(js.Value, dom.Event) { a.showScreen("box") })
+	on(byID("carry-note-go"), "click", func(js.Value, dom.Event) {
+		a.showScreen("box")
+		byID("received-panel").Call("scrollIntoView", map[string]any{"block": "start"})
+	})
 
 	// The recipes this copy of the page carries.
 	if block := byID(recipe.CarriedID); exists(block) {
@@ -247,22 +250,29 @@ func (a *app) renderReceived() {
 		return
 	}
 	setText(byID("received-from"), FromLine(a.got.from, a.got.source))
+	left := 0 // received recipes not yet in the user's list
 	for i, r := range a.got.from.Recipes {
 		li := add(list, "li", "", "")
 		add(li, "span", "nm", r.Name) // the sender's text, as text
-		if InList(a.shelf.Recipes, r) {
-			add(li, "span", "tag", "in your list")
-		}
 		look := add(li, "button", "act", "Open")
 		setAttr(look, "type", "button")
 		setAttr(look, "data-look", "")
 		setAttr(look, "data-i", itoa(i))
 		setAttr(look, "aria-label", "Open "+r.Name)
+		if InList(a.shelf.Recipes, r) {
+			add(li, "span", "tag", "in your list")
+			continue
+		}
+		left++
 		take := add(li, "button", "act primary", "Take into my list")
 		setAttr(take, "type", "button")
 		setAttr(take, "data-take", "")
 		setAttr(take, "data-i", itoa(i))
 		setAttr(take, "aria-label", "Take "+r.Name+" into my list")
+	}
+	setHidden(byID("take-all"), left == 0)
+	if left == 0 {
+		setHidden(byID("carry-note"), true)
 	}
 }
 
