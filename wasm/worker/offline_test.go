@@ -13,8 +13,11 @@ import (
 	"testing"
 	"time"
 
+	cdpbrowser "github.com/chromedp/cdproto/browser"
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/chromedp"
+
+	"saltcast/core/recipe"
 )
 
 // The installable copy (issue 7): the worker serves a service worker, a manifest and icons;
@@ -232,6 +235,28 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 		t.Fatalf("the recipe was not saved: %q", saved)
 	}
 
+	// A copy saved from the served app is the file people e-mail, not the served page: no
+	// service worker, no manifest, the file's strict policy.
+	jsEval[bool](t, ctx, `document.getElementById("tab-box").click(), document.getElementById("carry-all").click(), true`)
+	copyPage := download(t, ctx, `document.getElementById("carry-save").click()`)
+	file, err := os.ReadFile(repoPath("dist", "saltcast.html"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	c, err := recipe.ExtractCarried(copyPage)
+	if err != nil {
+		t.Fatalf("the copy saved from the served app: %v", err)
+	}
+	if want, _ := recipe.WithCarried(file, c); string(copyPage) != string(want) || len(c.Recipes) != 1 {
+		t.Errorf("the copy saved from the served app (%d B, %d recipes) is not dist/saltcast.html with its recipe", len(copyPage), len(c.Recipes))
+	}
+	for _, never := range []string{"serviceWorker", "manifest.webmanifest"} {
+		if strings.Contains(string(copyPage), never) {
+			t.Errorf("the copy saved from the served app mentions %s", never)
+		}
+	}
+	jsEval[bool](t, ctx, `document.getElementById("tab-batch").click(), true`)
+
 	// 2. Offline: the network is off and the server is gone.
 	a.stop()
 	setNetwork(t, ctx, true)
@@ -299,6 +324,41 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 	if n := jsEval[int](t, ctx, `caches.keys().then(k => k.filter(n => n.startsWith("saltcast-app-")).length)`); n != 1 {
 		t.Errorf("%d app caches after the update; the old one should be gone", n)
 	}
+}
+
+// download runs expr (which starts a download) and returns the downloaded bytes.
+func download(t *testing.T, ctx context.Context, expr string) []byte {
+	t.Helper()
+	dir := t.TempDir()
+	done := make(chan string, 1)
+	lctx, stop := context.WithCancel(ctx)
+	defer stop()
+	chromedp.ListenBrowser(lctx, func(ev any) {
+		if e, ok := ev.(*cdpbrowser.EventDownloadProgress); ok && e.State == cdpbrowser.DownloadProgressStateCompleted {
+			select {
+			case done <- e.GUID:
+			default:
+			}
+		}
+	})
+	events := true
+	if _, err := chromedp.CallBrowser(ctx, cdpbrowser.SetDownloadBehavior, cdpbrowser.SetDownloadBehaviorParams{
+		Behavior: cdpbrowser.SetDownloadBehaviorBehaviorAllowAndName, DownloadPath: dir, EventsEnabled: &events,
+	}); err != nil {
+		t.Fatal(err)
+	}
+	jsEval[bool](t, ctx, "("+expr+", true)")
+	select {
+	case guid := <-done:
+		b, err := os.ReadFile(filepath.Join(dir, guid))
+		if err != nil {
+			t.Fatal(err)
+		}
+		return b
+	case <-time.After(30 * time.Second):
+		t.Fatal("no download within 30 s")
+	}
+	return nil
 }
 
 // shots writes screenshots at the two tablet sizes when SALTCAST_SHOTS names a directory.
