@@ -48,7 +48,7 @@ func runGas(args []string, stdout, stderr io.Writer) int {
 	default:
 		return gasFail(stderr, &unit.FieldError{Field: "command", Value: sub, Allowed: "gas, gas outgas or gas table (see saltcast gas --help)"})
 	}
-	p, help, err := gasFlags(args)
+	p, help, err := flags(args, "see saltcast gas --help")
 	if help {
 		io.WriteString(stdout, gasUsage)
 		return 0
@@ -89,35 +89,6 @@ func gasFail(stderr io.Writer, err error) int {
 		return 2
 	}
 	return 1
-}
-
-// gasFlags turns "--temp-C 20" and "--temp-C=20" into Params{"temp_C": "20"}. A flag given
-// twice, a flag without a value and a word that is not a flag are usage errors.
-func gasFlags(args []string) (p service.Params, help bool, err error) {
-	p = service.Params{}
-	for i := 0; i < len(args); i++ {
-		a := args[i]
-		if a == "-h" || a == "--help" || a == "help" {
-			return nil, true, nil
-		}
-		if !strings.HasPrefix(a, "--") || len(a) == 2 {
-			return nil, false, &unit.FieldError{Field: "arguments", Value: a, Allowed: "flags written --name value (see saltcast gas --help)"}
-		}
-		name, value, hasValue := strings.Cut(a[2:], "=")
-		if !hasValue {
-			if i+1 >= len(args) {
-				return nil, false, &unit.FieldError{Field: name, Value: "", Allowed: "a value after --" + name}
-			}
-			i++
-			value = args[i]
-		}
-		key := strings.ReplaceAll(name, "-", "_")
-		if _, dup := p[key]; dup {
-			return nil, false, &unit.FieldError{Field: key, Value: value, Allowed: "each flag once"}
-		}
-		p[key] = value
-	}
-	return p, false, nil
 }
 
 // gasTableText renders GasTable's JSON as an aligned text table for printing.

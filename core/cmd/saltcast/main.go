@@ -67,7 +67,7 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		io.WriteString(stdout, usage)
 		return 0
 	case "solubility":
-		p, help, ferr := flags(rest)
+		p, help, ferr := flags(rest, "e.g. --temp-C 20")
 		if help {
 			io.WriteString(stdout, usage)
 			return 0
@@ -137,16 +137,18 @@ func errText(err error) string {
 	return err.Error()
 }
 
-// flags turns "--temp-C 20" and "--temp-C=20" into Params{"temp_C": "20"}.
-func flags(args []string) (p service.Params, help bool, err error) {
+// flags turns "--temp-C 20" and "--temp-C=20" into Params{"temp_C": "20"}. A flag given
+// twice, a flag without a value and a word that is not a flag are usage errors; example is
+// shown in the message for the last.
+func flags(args []string, example string) (p service.Params, help bool, err error) {
 	p = service.Params{}
 	for i := 0; i < len(args); i++ {
 		a := args[i]
-		if a == "-h" || a == "--help" {
+		if a == "-h" || a == "--help" || a == "help" {
 			return nil, true, nil
 		}
 		if !strings.HasPrefix(a, "--") || len(a) == 2 {
-			return nil, false, &unit.FieldError{Field: "arguments", Value: a, Allowed: "flags written --name value, e.g. --temp-C 20"}
+			return nil, false, &unit.FieldError{Field: "arguments", Value: a, Allowed: "flags written --name value, " + example}
 		}
 		name, value, hasValue := strings.Cut(a[2:], "=")
 		if !hasValue {
