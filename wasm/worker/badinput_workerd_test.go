@@ -1,0 +1,237 @@
+package main
+
+import (
+	"bytes"
+	"io"
+	"net/http"
+	"os"
+	"slices"
+	"strconv"
+	"strings"
+	"sync"
+	"testing"
+	"time"
+
+	"saltcast/core/service"
+	"saltcast/internal/badinput"
+)
+
+// catalogueCases turns the shared bad-input catalogue (testdata/bad-inputs.txt) into API
+// cases: a refusal is a 4xx answer whose body is core/service's error JSON naming the field
+// (413 for a body over the limit, which the glue answers itself); a warning or an accepted
+// input is a 200 with core/service's answer. Rows for typed text (parse) have no route.
+func catalogueCases(t testing.TB) []apiCase {
+	t.Helper()
+	rows, err := badinput.Load()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []apiCase
+	for _, r := range rows {
+		if r.Route == badinput.RouteParse {
+			continue
+		}
+		c := apiCase{name: r.ID, method: "GET", path: r.Path(), status: http.StatusOK}
+		switch r.Route {
+		case badinput.RoutePlan:
+			c.method, c.contentType, c.body = "POST", "application/json", []byte(r.Input)
+			c.want = plan(c.body)
+		default:
+			p, err := r.Params()
+			if err != nil {
+				t.Fatalf("line %d: %v", r.Line, err)
+			}
+			c.path += "?" + r.Input
+			call := map[string]func(service.Params) ([]byte, error){
+				badinput.RouteSolubility: service.Solubility,
+				badinput.RouteGas:        service.Gas,
+				badinput.RouteOutgas:     service.Outgas,
+			}[r.Route]
+			c.want = params(call, p)
+		}
+		if r.Kind == badinput.Refuse {
+			c.status = http.StatusBadRequest
+			if r.Field != badinput.JSONField {
+				c.field = r.Field
+			}
+			if len(c.body) > MaxBodyBytes {
+				c.status, c.want, c.field = http.StatusRequestEntityTooLarge, nil, ""
+			}
+		}
+		out = append(out, c)
+	}
+	return out
+}
+
+// TestBadInputsInProcess sends the catalogue to the handler in-process.
+func TestBadInputsInProcess(t *testing.T) {
+	do := inProcess(NewHandler(Options{Page: []byte("<!doctype html><title>t</title>")}))
+	cases := catalogueCases(t)
+	if len(cases) < 40 {
+		t.Fatalf("only %d catalogue cases reach the API", len(cases))
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) { c.check(t, "http://saltcast.test", do) })
+	}
+}
+
+// TestBadInputsWorkerd sends the catalogue to the built worker under workerd: the same
+// statuses and byte-identical bodies as in-process, and never a 5xx.
+func TestBadInputsWorkerd(t *testing.T) {
+	s := sharedWorkerd(t)
+	for _, c := range catalogueCases(t) {
+		t.Run(c.name, func(t *testing.T) { c.check(t, s.base, s.do) })
+	}
+}
+
+// Load test bounds. The request count is what the issue asks for. Memory is judged as
+// leak_test.go judges it, by the Go program's own memory and its live JS references (read
+// through the probe module), with the same bounds per request; workerd's resident memory is
+// sampled from /proc and reported, and only a gross rise fails, because workerd's RSS grows by
+// hundreds of MiB under any load, even for a plain JS worker, before it settles (a plain
+// worker answering a constant: 51 → 299 MiB over 120 000 requests, flat after about 55 000;
+// this worker under this mix: 144 → 345 MiB over 100 000, flat after about 40 000; both
+// measured 2026-12-01 on the 2-core build machine).
+const (
+	loadRequests = 10000
+	loadWarmup   = 1000
+	loadWorkers  = 8
+	loadMaxRSS   = 768 << 20 // bytes: twice where workerd settles under this load
+)
+
+// TestWorkerdLoad sends a bounded mixed load (the catalogue and the demo recipes, good and
+// bad) to a fresh workerd on loopback from a few goroutines: no transport errors, no 5xx,
+// every status as expected, the Go program's memory and live JS references do not grow, and
+// workerd's resident memory is sampled across the run. The figures are logged for the README.
+func TestWorkerdLoad(t *testing.T) {
+	s := startProbed(t)
+	cases := catalogueCases(t)
+	for _, name := range []string{"demo-kno3-stock.json", "demo-cuso4-crystals.json"} {
+		body := testdataFile(t, name)
+		cases = append(cases, apiCase{name: name, method: "POST", path: "/api/v1/plan",
+			contentType: "application/json", body: body, status: http.StatusOK})
+	}
+	send := func(n int) (failures []string, fiveXX int) {
+		var mu sync.Mutex
+		var wg sync.WaitGroup
+		next := make(chan int)
+		for range loadWorkers {
+			wg.Go(func() {
+				for i := range next {
+					c := cases[i%len(cases)]
+					var body io.Reader
+					if c.body != nil {
+						body = bytes.NewReader(c.body)
+					}
+					req, _ := http.NewRequest(c.method, s.base+c.path, body)
+					if c.contentType != "" {
+						req.Header.Set("Content-Type", c.contentType)
+					}
+					res, err := s.do(req)
+					status := 0
+					if err == nil {
+						_, err = io.Copy(io.Discard, res.Body)
+						res.Body.Close()
+						status = res.StatusCode
+					}
+					if err != nil || status != c.status {
+						mu.Lock()
+						if status >= 500 {
+							fiveXX++
+						}
+						failures = append(failures, c.name+": status "+strconv.Itoa(status)+", want "+
+							strconv.Itoa(c.status)+errText(err))
+						mu.Unlock()
+					}
+				}
+			})
+		}
+		for i := range n {
+			next <- i
+		}
+		close(next)
+		wg.Wait()
+		return failures, fiveXX
+	}
+
+	if f, _ := send(loadWarmup); len(f) > 0 {
+		t.Fatalf("warm-up: %d of %d requests failed, first: %s", len(f), loadWarmup, f[0])
+	}
+	pid := s.cmd.Process.Pid
+	total := loadRequests
+	if n, err := strconv.Atoi(os.Getenv("SALTCAST_LOAD_REQUESTS")); err == nil && n > 0 {
+		total = n // a longer run, by hand, to see where memory settles
+	}
+	samples := max(5, total/5000)
+	before := getStats(t, s)
+	rss := []int64{rssBytes(t, pid)}
+	var failures []string
+	fiveXX := 0
+	start := time.Now()
+	for k := range samples {
+		n := total / samples
+		if k == samples-1 {
+			n += total % samples
+		}
+		f, f5 := send(n)
+		failures, fiveXX = append(failures, f...), fiveXX+f5
+		rss = append(rss, rssBytes(t, pid))
+	}
+	elapsed := time.Since(start)
+	after := getStats(t, s)
+	mib := make([]string, len(rss))
+	for i, v := range rss {
+		mib[i] = strconv.FormatFloat(float64(v)/(1<<20), 'f', 1, 64)
+	}
+	t.Logf("%d requests (%d kinds, %d at a time) in %v (%.0f per second); 5xx %d; failures %d; "+
+		"Go memory %d → %d bytes; live JS references %d → %d; workerd RSS every %d requests: %s MiB",
+		total, len(cases), loadWorkers, elapsed.Round(time.Millisecond), float64(total)/elapsed.Seconds(),
+		fiveXX, len(failures), before.MemoryBytes, after.MemoryBytes, before.JSValues, after.JSValues,
+		total/samples, strings.Join(mib, " → "))
+	for i, f := range failures {
+		if i == 5 {
+			break
+		}
+		t.Error(f)
+	}
+	if len(failures) > 0 || fiveXX > 0 {
+		t.Errorf("%d of %d requests failed (%d with 5xx)", len(failures), total, fiveXX)
+	}
+	// leak_test.go's bounds: half a live reference per request; a few MiB of Go heap.
+	if d := after.JSValues - before.JSValues; d > total/2 {
+		t.Errorf("live JS references grew by %d over %d requests (allowed %d)", d, total, total/2)
+	}
+	if d := after.MemoryBytes - before.MemoryBytes; d > leakMaxMemory {
+		t.Errorf("Go memory grew by %d bytes over %d requests (allowed %d)", d, total, leakMaxMemory)
+	}
+	if top := slices.Max(rss); top > loadMaxRSS {
+		t.Errorf("workerd's resident memory reached %.0f MiB (limit %.0f MiB)", float64(top)/(1<<20), float64(loadMaxRSS)/(1<<20))
+	}
+}
+
+func errText(err error) string {
+	if err == nil {
+		return ""
+	}
+	return " (" + err.Error() + ")"
+}
+
+// rssBytes reads the resident set size of process pid from /proc (Linux).
+func rssBytes(t *testing.T, pid int) int64 {
+	t.Helper()
+	b, err := os.ReadFile("/proc/" + strconv.Itoa(pid) + "/status")
+	if err != nil {
+		t.Skip("no /proc to read workerd's memory from: " + err.Error())
+	}
+	for line := range strings.SplitSeq(string(b), "\n") {
+		if rest, ok := strings.CutPrefix(line, "VmRSS:"); ok {
+			kb, err := strconv.ParseInt(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(rest), "kB")), 10, 64)
+			if err != nil {
+				t.Fatalf("VmRSS line %q: %v", line, err)
+			}
+			return kb << 10
+		}
+	}
+	t.Fatalf("no VmRSS in /proc/%d/status", pid)
+	return 0
+}
