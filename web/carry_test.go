@@ -310,6 +310,21 @@ func TestCarryOpenFile(t *testing.T) {
 		t.Errorf("the page does not say the clash was kept under a marked name: %q", msg)
 	}
 
+	// Dropped on the drop zone, a file is read the same way; dropped anywhere else it is
+	// held back, so the browser does not open it in place of the app.
+	drop := `(where) => { const dt = new DataTransfer();
+		dt.items.add(new File([` + strconv.Quote(string(good)) + `], "dropped.html", {type: "text/html"}));
+		const ev = new DragEvent("drop", {dataTransfer: dt, bubbles: true, cancelable: true});
+		document.querySelector(where).dispatchEvent(ev); return ev.defaultPrevented }`
+	if !mustEval[bool](t, ctx, `(`+drop+`)("#tab-batch")`) {
+		t.Error("a file dropped outside the drop zone is not held back")
+	}
+	mustEval[bool](t, ctx, `(`+drop+`)("#carry-drop")`)
+	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](`document.getElementById("m-received").textContent.includes("dropped.html")`,
+		chromedp.WithPollingInterval(10*time.Millisecond))); err != nil {
+		t.Errorf("a file dropped on the drop zone was not read: %v", err)
+	}
+
 	// A JSON export is read the same way, with no seal.
 	pick(write("export.json", recipe.EncodeCollection(mine)))
 	if from := mustEval[string](t, ctx, `document.getElementById("received-from").textContent`); !strings.Contains(from, "recipe export") {

@@ -56,6 +56,17 @@ func (a *app) bindCarry() {
 			a.readFile(files.Index(0))
 		}
 	})
+	// A file dropped beside the drop zone would make the browser open it in place of the
+	// app (and lose what is typed): only the drop zone takes files.
+	stray := js.FuncOf(func(_ js.Value, args []js.Value) any {
+		ev := args[0]
+		if !exists(closest(ev.Get("target"), "#carry-drop")) {
+			ev.Call("preventDefault")
+		}
+		return nil
+	})
+	doc.Call("addEventListener", "dragover", stray)
+	doc.Call("addEventListener", "drop", stray)
 	on(byID("carry-note-go"), "click", func(js.Value, dom.Event) {
 		a.showScreen("box")
 		byID("received-panel").Call("scrollIntoView", map[string]any{"block": "start"})
