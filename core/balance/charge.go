@@ -61,7 +61,7 @@ func Onset(c *compound.Compound, g100, fromC, toC float64) (tempC float64, ok bo
 		v, _ := solAt(c, t)
 		return v - g100
 	}
-	tol := 1e-12 * g100
+	tol := 1e-10 * g100 // relative; far below any difference a balance can weigh
 	dir := 1.0
 	if toC < fromC {
 		dir = -1
@@ -82,6 +82,13 @@ func Onset(c *compound.Compound, g100, fromC, toC float64) (tempC float64, ok bo
 		gt := g(t)
 		if gt < 0 {
 			root, found = refine(g, t, gt, prevT, prevG), true
+			return false
+		}
+		if t == toC && gt <= tol {
+			// Saturated to the last bits at the end of the scan. ln and exp differ in the
+			// last bit between amd64 (assembly) and wasm (pure Go), so an exact comparison
+			// here would let the CLI and the browser or worker disagree.
+			root, found = t, true
 			return false
 		}
 		prevT, prevG = t, gt
