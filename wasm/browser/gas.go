@@ -56,8 +56,7 @@ func (a *app) startGas() {
 		{"total_released_mL_per_L", "Gas driven out on heating", "mL per L of water"},
 		{"bubble_temp_C", "Bubbles can form from", "temp"},
 	} {
-		box := add(figs, "div", "fig", "")
-		add(box, "span", "lbl", t.label)
+		box := addFigure(figs, t.label)
 		val := add(box, "span", "val", "")
 		out := add(val, "output", "", "—")
 		setAttr(out, "data-key", t.key)

@@ -86,6 +86,16 @@ func classSet(el js.Value, class string, on bool) {
 func clear(el js.Value) { el.Call("replaceChildren") }
 
 // add appends a new element with the given tag, class and text (set as text, never markup).
+// addFigure adds a result tile labelled for screen readers: the tile is a group named by its
+// label, so the number inside is read with what it means.
+func addFigure(parent js.Value, label string) js.Value {
+	box := add(parent, "div", "fig", "")
+	setAttr(box, "role", "group")
+	setAttr(box, "aria-label", label)
+	setAttr(add(box, "span", "lbl", label), "aria-hidden", "true")
+	return box
+}
+
 func add(parent js.Value, tag, class, text string) js.Value {
 	el := doc.Call("createElement", tag)
 	if class != "" {

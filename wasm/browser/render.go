@@ -30,8 +30,7 @@ func (a *app) bindTiles() {
 		} else if f.Kind == kText {
 			continue // words such as the form weighed already show beside their numbers
 		} else {
-			t.box = add(extra, "div", "fig", "")
-			add(t.box, "span", "lbl", f.Label)
+			t.box = addFigure(extra, f.Label)
 			val := add(t.box, "span", "val", "")
 			t.out = add(val, "output", "", "—")
 			setAttr(t.out, "data-key", f.Key)
