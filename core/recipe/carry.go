@@ -6,6 +6,7 @@ import (
 	"strings"
 	"unicode/utf8"
 
+	"saltcast/core/htmlscan"
 	"saltcast/core/unit"
 	"saltcast/core/wire"
 )
@@ -447,18 +448,18 @@ func scanBlocks(page string) (found []block, bodyEnd int, err error) {
 			continue
 		}
 		if i+1 < len(page) && page[i+1] == '/' {
-			if name, _ := tagName(page, i+2); name == "body" {
+			if name, _ := htmlscan.TagName(page, i+2); name == "body" {
 				bodyEnd = i
 			}
 			i += 2
 			continue
 		}
-		name, nameEnd := tagName(page, i+1)
+		name, nameEnd := htmlscan.TagName(page, i+1)
 		if name == "" {
 			i++
 			continue
 		}
-		typ, tagEnd := typeAttr(page, nameEnd)
+		typ, tagEnd := htmlscan.Attr(page, nameEnd, "type")
 		if tagEnd < 0 {
 			break // a start tag cut short: nothing after it is markup
 		}
@@ -468,8 +469,8 @@ func scanBlocks(page string) (found []block, bodyEnd int, err error) {
 			i = tagEnd
 			continue
 		}
-		closing := indexFold(page, tagEnd, "</"+name)
-		carried := name == "script" && equalFold(strings.TrimSpace(typ), CarriedType)
+		closing := htmlscan.IndexFold(page, tagEnd, "</"+name)
+		carried := name == "script" && htmlscan.EqualFold(strings.TrimSpace(typ), CarriedType)
 		if closing < 0 {
 			if carried {
 				return nil, bodyEnd, carryErr(ErrMalformed, errors.New("the recipes block has no end: the file was cut short"))
@@ -489,111 +490,6 @@ func scanBlocks(page string) (found []block, bodyEnd int, err error) {
 	}
 	return found, bodyEnd, nil
 }
-
-// tagName reads a start tag's name at p (just after '<'), lower-cased; "" if p does not
-// start one.
-func tagName(page string, p int) (string, int) {
-	start := p
-	for p < len(page) && (isASCIILetter(page[p]) || (p > start && page[p] >= '0' && page[p] <= '9')) {
-		p++
-	}
-	if p == start {
-		return "", p
-	}
-	return strings.ToLower(page[start:p]), p
-}
-
-// typeAttr reads the attributes of a start tag from p up to and including the '>' that
-// ends it, and returns the value of its type attribute (the first one, as in HTML) and the
-// index after the '>'; -1 if the tag never ends.
-func typeAttr(page string, p int) (typ string, end int) {
-	seen := false
-	for p < len(page) {
-		c := page[p]
-		switch {
-		case c == '>':
-			return typ, p + 1
-		case isHTMLSpace(c) || c == '/':
-			p++
-			continue
-		}
-		start := p
-		p++ // the first character belongs to the name, even an '='
-		for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' && page[p] != '/' && page[p] != '=' {
-			p++
-		}
-		name := page[start:p]
-		for p < len(page) && isHTMLSpace(page[p]) {
-			p++
-		}
-		val := ""
-		if p < len(page) && page[p] == '=' {
-			p++
-			for p < len(page) && isHTMLSpace(page[p]) {
-				p++
-			}
-			if p < len(page) && (page[p] == '"' || page[p] == '\'') {
-				q := page[p]
-				end := strings.IndexByte(page[p+1:], q)
-				if end < 0 {
-					return "", -1
-				}
-				val = page[p+1 : p+1+end]
-				p += end + 2
-			} else {
-				vs := p
-				for p < len(page) && !isHTMLSpace(page[p]) && page[p] != '>' {
-					p++
-				}
-				val = page[vs:p]
-			}
-		}
-		if !seen && equalFold(name, "type") {
-			typ, seen = val, true
-		}
-	}
-	return "", -1
-}
-
-// equalFold compares ASCII case-insensitively (the HTML names and types read here are
-// ASCII; strings.EqualFold would bring Unicode case tables into the page).
-func equalFold(a, b string) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for i := 0; i < len(a); i++ {
-		x, y := a[i], b[i]
-		if 'A' <= x && x <= 'Z' {
-			x += 'a' - 'A'
-		}
-		if 'A' <= y && y <= 'Z' {
-			y += 'a' - 'A'
-		}
-		if x != y {
-			return false
-		}
-	}
-	return true
-}
-
-// indexFold finds sub (ASCII, starting with '<') in page from p on, ignoring ASCII case;
-// -1 if absent.
-func indexFold(page string, p int, sub string) int {
-	for i := p; i+len(sub) <= len(page); i++ {
-		j := strings.IndexByte(page[i:len(page)-len(sub)+1], sub[0])
-		if j < 0 {
-			return -1
-		}
-		i += j
-		if equalFold(page[i:i+len(sub)], sub) {
-			return i
-		}
-	}
-	return -1
-}
-
-func isHTMLSpace(c byte) bool   { return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' }
-func isASCIILetter(c byte) bool { return c|0x20 >= 'a' && c|0x20 <= 'z' }
 
 // isStamp reports whether s reads 2026-12-01T09:30:00Z: digits where the digits go.
 func isStamp(s string) bool {

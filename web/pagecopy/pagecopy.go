@@ -18,6 +18,8 @@ import (
 	"bytes"
 	"errors"
 	"strings"
+
+	"saltcast/core/htmlscan"
 )
 
 // Template is a page with the text of some elements replaced by place holders.
@@ -41,7 +43,7 @@ func Cut(page []byte, ids ...string) (Template, error) {
 	}
 	var b strings.Builder
 	b.Grow(len(page) / 8)
-	rest := page
+	rest := string(page)
 	found := map[string]bool{}
 	for {
 		el, ok := nextRawText(rest)
@@ -55,15 +57,15 @@ func Cut(page []byte, ids ...string) (Template, error) {
 		}
 		if keep {
 			found[id] = true
-			b.Write(rest[:el.textStart])
+			b.WriteString(rest[:el.textStart])
 			b.WriteString(holdOpen + id + holdClose)
 			rest = rest[el.textEnd:]
 			continue
 		}
-		b.Write(rest[:el.textEnd])
+		b.WriteString(rest[:el.textEnd])
 		rest = rest[el.textEnd:]
 	}
-	b.Write(rest)
+	b.WriteString(rest)
 	for _, id := range ids {
 		if !found[id] {
 			return "", errors.New("pagecopy: no <script> or <style> element with id " + id)
@@ -168,27 +170,27 @@ type element struct {
 
 // nextRawText finds the next <script> or <style> element in page, stepping over comments
 // and over the text of <textarea> and <title> elements, as the HTML tokenizer does.
-func nextRawText(page []byte) (element, bool) {
+func nextRawText(page string) (element, bool) {
 	for i := 0; i < len(page); {
-		lt := bytes.IndexByte(page[i:], '<')
+		lt := strings.IndexByte(page[i:], '<')
 		if lt < 0 {
 			return element{}, false
 		}
 		i += lt
-		if bytes.HasPrefix(page[i:], []byte("<!--")) {
-			end := bytes.Index(page[i+4:], []byte("-->"))
+		if strings.HasPrefix(page[i:], "<!--") {
+			end := strings.Index(page[i+4:], "-->")
 			if end < 0 {
 				return element{}, false
 			}
 			i += 4 + end + 3
 			continue
 		}
-		name, p := tagName(page, i+1)
+		name, p := htmlscan.TagName(page, i+1)
 		if name == "" {
 			i++
 			continue
 		}
-		id, tagEnd := idAttr(page, p)
+		id, tagEnd := htmlscan.Attr(page, p, "id")
 		if tagEnd < 0 {
 			return element{}, false
 		}
@@ -198,7 +200,7 @@ func nextRawText(page []byte) (element, bool) {
 			i = tagEnd
 			continue
 		}
-		closing := indexFold(page, tagEnd, "</"+name)
+		closing := htmlscan.IndexFold(page, tagEnd, "</"+name)
 		if closing < 0 {
 			return element{}, false
 		}
@@ -209,81 +211,6 @@ func nextRawText(page []byte) (element, bool) {
 	}
 	return element{}, false
 }
-
-func tagName(page []byte, p int) (string, int) {
-	start := p
-	for p < len(page) && (page[p]|0x20 >= 'a' && page[p]|0x20 <= 'z' || p > start && page[p] >= '0' && page[p] <= '9') {
-		p++
-	}
-	return strings.ToLower(string(page[start:p])), p
-}
-
-// idAttr reads the attributes of a start tag from p and returns the id (if any) and the
-// index after the closing '>', or -1 if the tag never ends.
-func idAttr(page []byte, p int) (string, int) {
-	id, haveID := "", false
-	for p < len(page) {
-		c := page[p]
-		if c == '>' {
-			return id, p + 1
-		}
-		if isSpace(c) || c == '/' {
-			p++
-			continue
-		}
-		start := p
-		p++
-		for p < len(page) && !isSpace(page[p]) && page[p] != '>' && page[p] != '/' && page[p] != '=' {
-			p++
-		}
-		name := strings.ToLower(string(page[start:p]))
-		for p < len(page) && isSpace(page[p]) {
-			p++
-		}
-		val := ""
-		if p < len(page) && page[p] == '=' {
-			p++
-			for p < len(page) && isSpace(page[p]) {
-				p++
-			}
-			if p < len(page) && (page[p] == '"' || page[p] == '\'') {
-				q := page[p]
-				end := bytes.IndexByte(page[p+1:], q)
-				if end < 0 {
-					return "", -1
-				}
-				val = string(page[p+1 : p+1+end])
-				p += end + 2
-			} else {
-				vs := p
-				for p < len(page) && !isSpace(page[p]) && page[p] != '>' {
-					p++
-				}
-				val = string(page[vs:p])
-			}
-		}
-		if name == "id" && !haveID {
-			id, haveID = val, true
-		}
-	}
-	return "", -1
-}
-
-func indexFold(page []byte, p int, sub string) int {
-	for i := p; i+len(sub) <= len(page); i++ {
-		j := bytes.IndexByte(page[i:len(page)-len(sub)+1], '<')
-		if j < 0 {
-			return -1
-		}
-		i += j
-		if bytes.EqualFold(page[i:i+len(sub)], []byte(sub)) {
-			return i
-		}
-	}
-	return -1
-}
-
-func isSpace(c byte) bool { return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' }
 
 func contains(list []string, s string) bool {
 	for _, x := range list {
