@@ -14,6 +14,7 @@ import (
 	"testing"
 	"time"
 
+	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/chromedp"
 
 	"saltcast/core/recipe"
@@ -425,4 +426,123 @@ func containsText(list []string, s string) bool {
 		}
 	}
 	return false
+}
+
+// A whole working session makes no network request: the only documents loaded are the page
+// itself and the copy it saved, both from disk. (Downloads are blob: URLs made in the page;
+// chromium reports no request for them, and any it did report would fail this test.)
+func TestSessionSendsNothing(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	next := downloads(t, ctx)
+	rc := countRequests(t, ctx)
+	open(t, ctx, u)
+	resetStorage(t, ctx, u)
+
+	// Both demos, edits, every unit.
+	click(t, ctx, `[data-demo="kno3"]`)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	setField(t, ctx, "recipe", "water_g", "1200")
+	setField(t, ctx, "recipe", "dissolve_temp_C", "65")
+	setField(t, ctx, "recipe", "cool_to_C", "15")
+	setField(t, ctx, "recipe", "seed_at_C", "40")
+	setField(t, ctx, "recipe", "name", "session (invented)")
+	setField(t, ctx, "recipe", "notes", "a note (invented)")
+	for _, sel := range [][2]string{{"unit_temp", "F"}, {"unit_mass", "kg"}, {"unit_volume", "gal"}, {"unit_temp", "K"},
+		{"unit_mass", "lb"}, {"unit_volume", "L"}, {"unit_temp", "C"}, {"unit_mass", "g"}, {"unit_volume", "mL"}} {
+		mustEval[bool](t, ctx, `(function(){const s=document.querySelector('#units [name="`+sel[0]+`"]'); s.value="`+sel[1]+`"; s.dispatchEvent(new Event("change",{bubbles:true})); return true})()`)
+	}
+
+	// The gas screen, hot water included.
+	click(t, ctx, "#tab-gas")
+	setField(t, ctx, "gas", "temp_C", "25")
+	setField(t, ctx, "gas", "measured_mg_per_L", "7")
+	setField(t, ctx, "gas", "from_C", "20")
+	setField(t, ctx, "gas", "to_C", "90")
+
+	// Save, export, download, import (text and file), CSV.
+	click(t, ctx, "#tab-box")
+	click(t, ctx, "#save-btn")
+	click(t, ctx, "#export-one")
+	click(t, ctx, "#export-all")
+	exported := mustEval[string](t, ctx, `document.getElementById("transfer").value`)
+	click(t, ctx, "#download-json")
+	if got := string(next()); got != exported {
+		t.Errorf("the downloaded export differs from the box: %q", clipText(got))
+	}
+	click(t, ctx, "#import-btn")
+	path := filepath.Join(t.TempDir(), "export.json")
+	if err := os.WriteFile(path, []byte(exported), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	mustEval[bool](t, ctx, `document.getElementById("m-import").textContent="", true`)
+	if err := chromedp.Do(ctx, chromedp.SetUploadFiles(chromedp.CSS("#import-file"), []string{path})); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](`document.getElementById("m-import").textContent.startsWith("Imported")`,
+		chromedp.WithPollingInterval(10*time.Millisecond))); err != nil {
+		t.Errorf("the import file was not read: %v", err)
+	}
+	click(t, ctx, "#csv-btn")
+	next()
+
+	// Print.
+	click(t, ctx, "#tab-sheet")
+	if err := emulatePrint(ctx); err != nil {
+		t.Fatal(err)
+	}
+	mustEval[string](t, ctx, `document.getElementById("screen-sheet").innerText`)
+	if err := chromedp.Do(ctx, chromedp.Func(func(ctx context.Context, _ *chromedp.Target) error {
+		_, err := chromedp.Call(ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: ""})
+		return err
+	})); err != nil {
+		t.Fatal(err)
+	}
+
+	// Save a copy, read it back as a received file, open it as a page, take its recipes in.
+	click(t, ctx, "#tab-box")
+	click(t, ctx, "#carry-all")
+	mustEval[bool](t, ctx, `document.getElementById("carry-by").value="bench 2 (invented)", true`)
+	click(t, ctx, "#carry-save")
+	copyPath := filepath.Join(t.TempDir(), "copy.html")
+	if err := os.WriteFile(copyPath, next(), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	mustEval[bool](t, ctx, `document.getElementById("m-received").textContent="", true`)
+	if err := chromedp.Do(ctx, chromedp.SetUploadFiles(chromedp.CSS("#carry-file"), []string{copyPath})); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](`document.getElementById("m-received").textContent !== ""`,
+		chromedp.WithPollingInterval(10*time.Millisecond))); err != nil {
+		t.Fatal(err)
+	}
+	copyURL := fileURL(t, copyPath)
+	open(t, ctx, copyURL)
+	click(t, ctx, "#carry-note-go")
+	click(t, ctx, "#take-all")
+
+	// The share link, opened as a fresh load.
+	open(t, ctx, u)
+	click(t, ctx, "#tab-box")
+	click(t, ctx, "#share-btn")
+	link := mustEval[string](t, ctx, `document.getElementById("share-link").value`)
+	openLink(t, ctx, link)
+
+	var sent []string
+	pages := 0
+	for _, r := range rc.list() {
+		switch {
+		case r == u || r == copyURL:
+			pages++
+		default:
+			sent = append(sent, r)
+		}
+	}
+	if pages < 3 {
+		t.Fatalf("the request counter saw the page loaded %d times, so it cannot be trusted to see others", pages)
+	}
+	if len(sent) > 0 {
+		t.Errorf("the session made %d network requests: %s", len(sent), strings.Join(sent, ", "))
+	}
+	t.Logf("%d requests seen, all of them the page or its copy loading from disk", len(rc.list()))
 }
