@@ -546,3 +546,93 @@ func TestSessionSendsNothing(t *testing.T) {
 	}
 	t.Logf("%d requests seen, all of them the page or its copy loading from disk", len(rc.list()))
 }
+
+// cautionLists returns, for every caution list on the page that holds a caution, its id and
+// its text.
+func cautionLists(t *testing.T, ctx context.Context) [][]string {
+	t.Helper()
+	raw := mustEval[[]any](t, ctx, `[...document.querySelectorAll("ul.cautions")].filter(u => u.querySelector("li")).map(u => [u.id, u.textContent])`)
+	out := make([][]string, 0, len(raw))
+	for _, r := range raw {
+		pair := r.([]any)
+		out = append(out, []string{pair[0].(string), pair[1].(string)})
+	}
+	return out
+}
+
+// wantSDS fails unless each of the named caution lists holds a caution and points to the
+// SDS, and unless every other caution list that holds one does too.
+func wantSDS(t *testing.T, ctx context.Context, what string, ids ...string) {
+	t.Helper()
+	seen := map[string]bool{}
+	for _, l := range cautionLists(t, ctx) {
+		seen[l[0]] = true
+		if !strings.Contains(l[1], "SDS") {
+			t.Errorf("%s: #%s shows cautions without pointing to the SDS: %q", what, l[0], clipText(l[1]))
+		}
+		if !strings.Contains(l[1], "local rules") {
+			t.Errorf("%s: #%s shows cautions without pointing to local rules: %q", what, l[0], clipText(l[1]))
+		}
+	}
+	for _, id := range ids {
+		if !seen[id] {
+			t.Errorf("%s: #%s shows no caution", what, id)
+		}
+	}
+}
+
+// Wherever a hazard or a strong heat effect is shown — the batch screen, the batch sheet on
+// screen and in print, the gas screen for hot water — the SDS and local rules are named,
+// for the copper sulfate demo, the potassium nitrate (oxidizer) demo, and a hot, saturated
+// potassium nitrate batch.
+func TestCautionsPointToSDS(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	open(t, ctx, u)
+	for _, c := range []struct {
+		what, demo string
+		edit       [][2]string
+		hazard     string // a word of the compound's hazard note that must be among the cautions
+	}{
+		{"copper sulfate demo", "cuso4", nil, "SDS"},
+		{"potassium nitrate demo", "kno3", nil, "Oxidizer"},
+		{"hot saturated potassium nitrate", "kno3", [][2]string{{"dissolve_temp_C", "90"}, {"cool_to_C", "10"}}, "Oxidizer"},
+	} {
+		click(t, ctx, "#tab-batch")
+		click(t, ctx, `[data-demo="`+c.demo+`"]`)
+		for _, e := range c.edit {
+			setField(t, ctx, "recipe", e[0], e[1])
+		}
+		if stale := mustEval[bool](t, ctx, `!document.getElementById("stale").hidden`); stale {
+			t.Fatalf("%s: not planned: %s", c.what, mustEval[string](t, ctx, `document.getElementById("stale").textContent`))
+		}
+		shows(t, ctx, c.what, "#cautions", c.hazard)
+		wantSDS(t, ctx, c.what+", batch screen", "cautions")
+		click(t, ctx, "#tab-sheet")
+		wantSDS(t, ctx, c.what+", sheet", "s-cautions")
+		if err := emulatePrint(ctx); err != nil {
+			t.Fatal(err)
+		}
+		printed := mustEval[string](t, ctx, `document.getElementById("s-cautions").innerText`)
+		if !strings.Contains(printed, "SDS") || !strings.Contains(printed, c.hazard) {
+			t.Errorf("%s: the printed cautions lack the SDS or the hazard: %q", c.what, clipText(printed))
+		}
+		if err := chromedp.Do(ctx, chromedp.Func(func(ctx context.Context, _ *chromedp.Target) error {
+			_, err := chromedp.Call(ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: ""})
+			return err
+		})); err != nil {
+			t.Fatal(err)
+		}
+	}
+
+	// The gas screen: the day's water, and water heated to near boiling.
+	click(t, ctx, "#tab-gas")
+	for _, e := range [][2]string{{"temp_C", "38"}, {"from_C", "20"}, {"to_C", "95"}} {
+		setField(t, ctx, "gas", e[0], e[1])
+	}
+	if stale := mustEval[bool](t, ctx, `!document.getElementById("gas-stale").hidden`); stale {
+		t.Fatalf("gas screen not computed: %s", mustEval[string](t, ctx, `document.getElementById("gas-stale").textContent`))
+	}
+	shows(t, ctx, "gas screen, hot water", "#gas-cautions", "scalds")
+	wantSDS(t, ctx, "gas screen, hot water", "gas-cautions")
+}
