@@ -133,10 +133,21 @@ func open(t testing.TB, ctx context.Context, u string) {
 	waitReady(t, ctx)
 }
 
+// waitReady waits for the page's data-ready mark. A poll that starts while a navigation is
+// still replacing the document can lose its execution context ("Cannot find context with
+// specified id"); that is retried a few times rather than failed.
 func waitReady(t testing.TB, ctx context.Context) {
 	t.Helper()
-	state, err := chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
-		chromedp.WithPollingInterval(5*time.Millisecond)))
+	var state string
+	var err error
+	for try := 0; try < 4; try++ {
+		state, err = chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
+			chromedp.WithPollingInterval(5*time.Millisecond)))
+		if err == nil || ctx.Err() != nil {
+			break
+		}
+		time.Sleep(200 * time.Millisecond)
+	}
 	if err != nil {
 		t.Fatal("waiting for the first result: " + err.Error())
 	}

@@ -396,24 +396,14 @@ func TestUserTextNeverMarkup(t *testing.T) {
 }
 
 // openLink opens link as a fresh load (not a fragment change of the page open now) and
-// waits for the first result. A new document may not have its script context yet when
-// the navigation returns, so the wait is retried once after a short pause.
+// waits for the first result (waitReady retries while the new document's script context
+// is not there yet).
 func openLink(t *testing.T, ctx context.Context, link string) {
 	t.Helper()
 	if err := chromedp.Do(ctx, chromedp.Navigate("about:blank"), chromedp.Navigate(link)); err != nil {
 		t.Fatalf("open %s: %v", link, err)
 	}
-	for try := 0; ; try++ {
-		state, err := chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
-			chromedp.WithPollingInterval(5*time.Millisecond)))
-		if err == nil && state == "1" {
-			return
-		}
-		if try == 3 {
-			t.Fatalf("open %s: the page did not start: %q, %v", link, state, err)
-		}
-		time.Sleep(200 * time.Millisecond)
-	}
+	waitReady(t, ctx)
 }
 
 // url64 is text in base64url, as a hand-made link would carry something that is not JSON.
