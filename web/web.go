@@ -4,13 +4,14 @@
 //
 // The page needs no network: the module is unpacked in the browser with DecompressionStream
 // and compiled from memory, and a Content-Security-Policy in the page forbids every request
-// (connect-src 'none' and the rest) while allowing the inline script and the WebAssembly
-// compile ('wasm-unsafe-eval', which is needed and enough).
+// (connect-src 'none' and the rest) while allowing its own two inline scripts, by their
+// SHA-256 hashes, and the WebAssembly compile ('wasm-unsafe-eval', which is needed and enough).
 package web
 
 import (
 	"bytes"
 	"compress/gzip"
+	"crypto/sha256"
 	_ "embed"
 	"encoding/base64"
 	"errors"
@@ -32,13 +33,54 @@ var appCSS string
 //go:embed loader.js
 var loaderJS string
 
-// CSP is the Content-Security-Policy of the page. Everything is inline; nothing may be
-// fetched, framed, submitted or connected to. 'wasm-unsafe-eval' lets the page compile the
-// inlined module; no other script evaluation is allowed.
-const CSP = "default-src 'none'; script-src 'unsafe-inline' 'wasm-unsafe-eval'; " +
+// CSP returns the Content-Security-Policy of a page whose inline scripts are scripts (their
+// texts, byte for byte). Everything is inline; nothing may be fetched, framed, submitted or
+// connected to. Scripts run only if their SHA-256 hash is listed (W3C CSP Level 3,
+// hash-source), so a script or event handler that got into the page some other way would
+// not run; 'wasm-unsafe-eval' lets the page compile the inlined module and allows no other
+// evaluation. Data blocks (the packed module, carried recipes) are not scripts to the
+// browser and need no hash.
+func CSP(scripts ...string) string {
+	var b strings.Builder
+	b.WriteString("default-src 'none'; script-src")
+	for _, sc := range scripts {
+		b.WriteString(" ")
+		b.WriteString(ScriptHash(sc))
+	}
+	b.WriteString(cspAfterScripts)
+	return b.String()
+}
+
+const cspAfterScripts = " 'wasm-unsafe-eval'; " +
 	"style-src 'unsafe-inline'; img-src data:; font-src 'none'; connect-src 'none'; " +
 	"media-src 'none'; object-src 'none'; frame-src 'none'; worker-src 'none'; " +
 	"manifest-src 'none'; form-action 'none'; base-uri 'none'"
+
+// ScriptHash is the CSP hash-source of an inline script's text: 'sha256-…'. The HTML parser
+// turns CR LF and lone CR into LF before the browser hashes, so the text is hashed that way.
+func ScriptHash(text string) string {
+	text = strings.ReplaceAll(strings.ReplaceAll(text, "\r\n", "\n"), "\r", "\n")
+	sum := sha256.Sum256([]byte(text))
+	return "'sha256-" + base64.StdEncoding.EncodeToString(sum[:]) + "'"
+}
+
+// cspMetaOpen starts the page's policy element; PageCSP finds the policy by it.
+const cspMetaOpen = `<meta http-equiv="Content-Security-Policy" content="`
+
+// PageCSP returns the Content-Security-Policy a built page carries in its meta element.
+func PageCSP(page []byte) (string, error) {
+	s := string(page)
+	i := strings.Index(s, cspMetaOpen)
+	if i < 0 || strings.Count(s, cspMetaOpen) != 1 {
+		return "", errors.New("the page has no single Content-Security-Policy meta element")
+	}
+	rest := s[i+len(cspMetaOpen):]
+	end := strings.IndexByte(rest, '"')
+	if end < 0 {
+		return "", errors.New("the page's Content-Security-Policy meta element never ends")
+	}
+	return rest[:end], nil
+}
 
 // DefaultWasmOpt is the optimisation level web/bundle uses with -wasm-opt auto.
 const DefaultWasmOpt = "-Oz"
@@ -280,7 +322,7 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 		return nil, errors.New("app.css contains </style and cannot be inlined")
 	}
 	r := strings.NewReplacer(
-		"{{CSP}}", CSP,
+		"{{CSP}}", CSP(wasmExec, loaderJS),
 		"{{VERSION}}", htmlEscape(version),
 		"{{CSS}}", appCSS,
 		"{{WASM_EXEC}}", wasmExec,

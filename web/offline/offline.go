@@ -63,18 +63,19 @@ const headExtra = `<link rel="manifest" href="/manifest.webmanifest">
 `
 
 // ServedCSP is the page's Content-Security-Policy when the worker serves it: the file's
-// (web.CSP) with the service worker, the manifest, same-origin requests and same-origin
-// images allowed.
-func ServedCSP() (string, error) {
-	csp := web.CSP
+// policy fileCSP with the install script's hash added, and the service worker, the
+// manifest, same-origin requests and same-origin images allowed.
+func ServedCSP(fileCSP string) (string, error) {
+	csp := fileCSP
 	for _, r := range [][2]string{
+		{"script-src ", "script-src " + web.ScriptHash(installJS) + " "},
 		{"connect-src 'none'", "connect-src 'self'"},
 		{"worker-src 'none'", "worker-src 'self'"},
 		{"manifest-src 'none'", "manifest-src 'self'"},
 		{"img-src data:", "img-src 'self' data:"},
 	} {
 		if strings.Count(csp, r[0]) != 1 {
-			return "", errors.New("web.CSP has no " + r[0] + "; update web/offline to the new policy")
+			return "", errors.New("the file's policy has no " + r[0] + "; update web/offline to the new policy")
 		}
 		csp = strings.Replace(csp, r[0], r[1], 1)
 	}
@@ -82,16 +83,21 @@ func ServedCSP() (string, error) {
 }
 
 // Served returns the page as the worker serves it (see the package comment). page must be
-// a page web.Page built: one CSP meta element with web.CSP, one </head> and one </body>.
+// a page web.Page built: one CSP meta element with the file's policy, one </head> and one
+// </body>.
 func Served(page []byte) ([]byte, error) {
-	served, err := ServedCSP()
+	fileCSP, err := web.PageCSP(page)
 	if err != nil {
 		return nil, err
 	}
-	meta := `<meta http-equiv="Content-Security-Policy" content="` + web.CSP + `">`
-	if n := bytes.Count(page, []byte(meta)); n != 1 {
-		return nil, errors.New("the page has " + strconv.Itoa(n) + " Content-Security-Policy meta elements with the file's policy; want 1")
+	if strings.Contains(fileCSP, "worker-src 'self'") {
+		return nil, errors.New("the page is already the served page")
 	}
+	served, err := ServedCSP(fileCSP)
+	if err != nil {
+		return nil, err
+	}
+	meta := `<meta http-equiv="Content-Security-Policy" content="` + fileCSP + `">`
 	if strings.Contains(strings.ToLower(installJS), "</script") {
 		return nil, errors.New("install.js contains </script and cannot be inlined")
 	}

@@ -37,7 +37,17 @@ func TestServed(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	csp, _ := ServedCSP()
+	fileCSP, err := web.PageCSP(page)
+	if err != nil {
+		t.Fatal(err)
+	}
+	csp, err := ServedCSP(fileCSP)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(csp, web.ScriptHash(installJS)) {
+		t.Error("served CSP lacks the install script's hash")
+	}
 	s := string(served)
 	for _, want := range []string{
 		`<link rel="manifest" href="/manifest.webmanifest">`,
@@ -56,11 +66,11 @@ func TestServed(t *testing.T) {
 			t.Errorf("served CSP lacks %q: %s", want, csp)
 		}
 	}
-	if strings.Contains(s, web.CSP) {
+	if strings.Contains(s, fileCSP) {
 		t.Error("served page still holds the file's CSP")
 	}
 	// Nothing else changed: undo the three edits and the file's page is back.
-	back := strings.Replace(s, csp, web.CSP, 1)
+	back := strings.Replace(s, csp, fileCSP, 1)
 	back = strings.Replace(back, headExtra, "", 1)
 	back = strings.Replace(back, `<script id="saltcast-install">`+installJS+"</script>\n", "", 1)
 	if back != string(page) {
