@@ -19,7 +19,24 @@ while IFS= read -r file; do
 	for target in $(grep -oE '^func (Fuzz[A-Za-z0-9_]*)\(' "$file" | sed -E 's/^func (Fuzz[A-Za-z0-9_]*)\(/\1/'); do
 		count=$((count + 1))
 		echo "fuzz $dir $target ($fuzztime)"
-		if ! go test -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" "$dir" >"$log" 2>&1; then
+		before=$( (ls "$dir/testdata/fuzz/$target" 2>/dev/null || true) | wc -l)
+		ok=0
+		for try in 1 2; do
+			if go test -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" "$dir" >"$log" 2>&1; then
+				ok=1
+				break
+			fi
+			# Go's fuzzing engine can end with "context deadline exceeded" when a worker is
+			# still busy as the time runs out on a loaded machine; it saves no input then.
+			# That is tried once more; a real failure saves its input and is not retried.
+			after=$( (ls "$dir/testdata/fuzz/$target" 2>/dev/null || true) | wc -l)
+			if [ "$try" = 1 ] && [ "$after" = "$before" ] && grep -q 'context deadline exceeded' "$log"; then
+				echo "fuzz $dir $target: the engine timed out at its deadline with no failing input; once more"
+				continue
+			fi
+			break
+		done
+		if [ "$ok" = 0 ]; then
 			cat "$log"
 			echo "FAIL: $dir $target (a failing input is saved under $dir/testdata/fuzz/$target)"
 			failed=1
