@@ -22,14 +22,15 @@ while IFS= read -r file; do
 		before=$( (ls "$dir/testdata/fuzz/$target" 2>/dev/null || true) | wc -l)
 		ok=0
 		for try in 1 2; do
-			if go test -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" -fuzzminimizetime 2s "$dir" >"$log" 2>&1; then
+			if go test -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" -fuzzminimizetime 0 "$dir" >"$log" 2>&1; then
 				ok=1
 				break
 			fi
 			# Go's fuzzing engine can end with "context deadline exceeded" when a worker is
-			# still minimizing a new interesting input (not a failure) as the time runs out;
-			# it saves no input then. -fuzzminimizetime keeps that short, and such a run is
-			# tried once more; a real failure saves its input and is not retried.
+			# still busy (e.g. minimizing a new, passing input) as the time runs out; it saves
+			# no input then. -fuzzminimizetime 0 turns minimizing off for these short runs (a
+			# failing input is still saved, just not shrunk), and such a run is tried once
+			# more; a real failure saves its input and is not retried.
 			after=$( (ls "$dir/testdata/fuzz/$target" 2>/dev/null || true) | wc -l)
 			if [ "$try" = 1 ] && [ "$after" = "$before" ] && grep -q 'context deadline exceeded' "$log"; then
 				echo "fuzz $dir $target: the engine timed out at its deadline with no failing input; once more"
