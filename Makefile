@@ -16,8 +16,9 @@ cli:
 demo: cli
 	@./bin/saltcast demo testdata/demo-kno3-stock.json testdata/demo-cuso4-crystals.json
 
-## build: dist/saltcast.html, the single offline file
+## build: dist/saltcast.html, the single offline file (installs zopfli first when root)
 build:
+	@bash scripts/deps-build.sh
 	$(GO) run ./web/bundle -out dist/saltcast.html
 	@echo "built $(CURDIR)/dist/saltcast.html"
 
