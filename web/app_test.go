@@ -187,14 +187,7 @@ func TestSaveReloadExportImport(t *testing.T) {
 func TestCorruptImportLeavesSaved(t *testing.T) {
 	u := appURL(t)
 	ctx := tab(t)
-	open(t, ctx, u)
-	resetStorage(t, ctx, u)
-	click(t, ctx, `[data-demo="cuso4"]`)
-	click(t, ctx, "#save-btn")
-	before := mustEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`)
-	if before == "" {
-		t.Fatal("nothing saved")
-	}
+	before := withOneSaved(t, ctx, u)
 	for _, bad := range []string{
 		`{"format":1,"kind":"saltcast-recipes","recipes":[{"name":"ok","solute":"KNO3","water_g":100,"dissolve_temp_C":30},{"name":"bad","solute":"KNO3","water_g":-1,"dissolve_temp_C":30}]}`,
 		`{"format":1,"kind":"saltcast-recipes","recipes":[{"name":"cut`,

@@ -55,6 +55,21 @@ func storedRecipes(t *testing.T, ctx context.Context) string {
 	return mustEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`)
 }
 
+// withOneSaved opens the page with empty storage, saves the copper sulfate demo and returns
+// what localStorage then holds.
+func withOneSaved(t *testing.T, ctx context.Context, u string) string {
+	t.Helper()
+	open(t, ctx, u)
+	resetStorage(t, ctx, u)
+	click(t, ctx, `[data-demo="cuso4"]`)
+	click(t, ctx, "#save-btn")
+	stored := storedRecipes(t, ctx)
+	if stored == "" {
+		t.Fatal("nothing saved")
+	}
+	return stored
+}
+
 func setTransfer(t *testing.T, ctx context.Context, text string) {
 	t.Helper()
 	mustEval[bool](t, ctx, `document.getElementById("transfer").value=`+strconv.Quote(text)+`, true`)
@@ -153,14 +168,7 @@ func TestFullStorageLosesNothing(t *testing.T) {
 func TestNewerFormatRefused(t *testing.T) {
 	u := appURL(t)
 	ctx := tab(t)
-	open(t, ctx, u)
-	resetStorage(t, ctx, u)
-	click(t, ctx, `[data-demo="cuso4"]`)
-	click(t, ctx, "#save-btn")
-	before := storedRecipes(t, ctx)
-	if before == "" {
-		t.Fatal("nothing saved")
-	}
+	before := withOneSaved(t, ctx, u)
 	click(t, ctx, "#tab-box")
 	newer := map[string]string{
 		"collection.json":           `{"format":2,"kind":"saltcast-recipes","recipes":[{"format":1,"name":"from the future (invented)","solute":"KNO3","water_g":100,"dissolve_temp_C":30}]}`,
