@@ -95,8 +95,8 @@ func TestCompoundForm(t *testing.T) {
 
 func TestLibraryShape(t *testing.T) {
 	all := All()
-	if len(all) != 16 {
-		t.Errorf("library has %d compounds, want 16", len(all))
+	if len(all) < 16 {
+		t.Errorf("library has %d compounds, want at least the first 16", len(all))
 	}
 	for _, c := range all {
 		if c.Forms[0].Formula != c.ID || c.Forms[0].AnhydrousFraction != 1 {
