@@ -53,22 +53,23 @@ func TestFigures(t *testing.T) {
 		name string
 		cfg  web.Config
 	}{
-		{"plain go build, compress/gzip", web.Config{Package: pkg, KeepSymbols: true, KeepInlining: true, Gzip: "go"}},
-		{"-s -w", web.Config{Package: pkg, KeepInlining: true, Gzip: "go"}},
-		{"-s -w, no inlining", web.Config{Package: pkg, Gzip: "go"}},
-		{"-s -w, no inlining, zopfli", web.Config{Package: pkg, Gzip: "zopfli"}},
-		{"-s -w, no inlining, wasm-opt " + web.DefaultWasmOpt + ", zopfli", web.Config{Package: pkg, WasmOpt: web.DefaultWasmOpt, Gzip: "zopfli"}},
+		{"plain go build, compress/gzip", web.Config{Package: pkg, KeepSymbols: true, KeepInlining: true, KeepSegments: true, Gzip: "go"}},
+		{"-s -w", web.Config{Package: pkg, KeepInlining: true, KeepSegments: true, Gzip: "go"}},
+		{"-s -w, no inlining", web.Config{Package: pkg, KeepSegments: true, Gzip: "go"}},
+		{"-s -w, no inlining, zopfli", web.Config{Package: pkg, KeepSegments: true, Gzip: "zopfli"}},
+		{"-s -w, no inlining, segments merged, zopfli", web.Config{Package: pkg, Gzip: "zopfli"}},
+		{"-s -w, no inlining, wasm-opt " + web.DefaultWasmOpt + ", merged, zopfli", web.Config{Package: pkg, WasmOpt: web.DefaultWasmOpt, Gzip: "zopfli"}},
 	} {
 		v.cfg.Dir = ".."
 		if (v.cfg.WasmOpt != "" && !have("wasm-opt")) || (v.cfg.Gzip == "zopfli" && !have("zopfli")) {
-			t.Logf("size %-44s tool not installed", v.name)
+			t.Logf("size %-52s tool not installed", v.name)
 			continue
 		}
 		_, rep, err := web.Build(v.cfg)
 		if err != nil {
 			t.Fatal(err)
 		}
-		t.Logf("size %-44s wasm %8d B  after opt %8d B  gzip %8d B  page %8d B", v.name, rep.WasmBytes, rep.OptBytes, rep.GzipBytes, rep.PageBytes)
+		t.Logf("size %-52s wasm %8d B  after opt %8d B  merged %8d B  gzip %8d B  page %8d B", v.name, rep.WasmBytes, rep.OptBytes, rep.PackBytes, rep.GzipBytes, rep.PageBytes)
 	}
 
 	// The floor: the smallest Go program, inlined the same way.

@@ -22,6 +22,7 @@ import (
 	"strings"
 
 	"saltcast/web/pagecopy"
+	"saltcast/web/wasmpack"
 )
 
 //go:embed shell.html
@@ -103,6 +104,9 @@ type Config struct {
 	KeepSymbols bool
 	// KeepInlining leaves out -gcflags=all=-l (only to measure what it buys).
 	KeepInlining bool
+	// KeepSegments leaves the linker's data segments as they are instead of merging them
+	// (saltcast/web/wasmpack; only to measure what merging buys).
+	KeepSegments bool
 	// Gzip is the compressor: "zopfli" (the zopfli program, 1 iteration), "go" (compress/gzip
 	// at best compression) or "" for zopfli when it is installed, else go.
 	Gzip string
@@ -111,8 +115,10 @@ type Config struct {
 // Report gives the sizes of each stage, in bytes.
 type Report struct {
 	Version   string
-	WasmBytes int // after go build -ldflags "-s -w"
-	OptBytes  int // after wasm-opt (equal to WasmBytes when skipped)
+	WasmBytes int    // after go build -ldflags "-s -w"
+	OptBytes  int    // after wasm-opt (equal to WasmBytes when skipped)
+	PackBytes int    // after merging data segments (equal to OptBytes when skipped)
+	Segments  [2]int // data segments before and after merging
 	GzipBytes int
 	PageBytes int
 	WasmOpt   string // the flag used, or "" when skipped
@@ -200,6 +206,18 @@ func Build(cfg Config) ([]byte, Report, error) {
 		}
 		rep.OptBytes = len(wasm)
 		rep.WasmOpt = cfg.WasmOpt
+	}
+
+	rep.PackBytes = len(wasm)
+	if !cfg.KeepSegments {
+		// After wasm-opt, whose memory packing would split the segments again.
+		packed, st, err := wasmpack.Pack(wasm, wasmpack.DefaultGap)
+		if err != nil {
+			return nil, rep, err
+		}
+		wasm = packed
+		rep.PackBytes = len(wasm)
+		rep.Segments = [2]int{st.SegmentsBefore, st.SegmentsAfter}
 	}
 
 	gz, how, err := compress(wasm, cfg.Gzip, tmp)
@@ -368,6 +386,10 @@ func (r Report) String() string {
 	if r.WasmOpt != "" {
 		opt = "wasm-opt " + r.WasmOpt + " " + strconv.Itoa(r.OptBytes) + " B"
 	}
-	return "version " + r.Version + ": wasm " + strconv.Itoa(r.WasmBytes) + " B, " + opt +
+	pack := "segments kept"
+	if r.Segments[0] > 0 {
+		pack = "segments " + strconv.Itoa(r.Segments[0]) + " → " + strconv.Itoa(r.Segments[1]) + " " + strconv.Itoa(r.PackBytes) + " B"
+	}
+	return "version " + r.Version + ": wasm " + strconv.Itoa(r.WasmBytes) + " B, " + opt + ", " + pack +
 		", gzip (" + r.Gzip + ") " + strconv.Itoa(r.GzipBytes) + " B, page " + strconv.Itoa(r.PageBytes) + " B"
 }
