@@ -7,8 +7,6 @@ import (
 	"strings"
 	"syscall/js"
 
-	"honnef.co/go/js/dom/v2"
-
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
 	"saltcast/core/unit"
@@ -106,15 +104,15 @@ func (a *app) start() {
 	}
 
 	on(a.recipeForm, "input", a.onRecipeInput)
-	on(a.recipeForm, "submit", func(_ js.Value, ev dom.Event) { ev.PreventDefault() })
+	on(a.recipeForm, "submit", func(_ js.Value, ev event) { ev.PreventDefault() })
 	on(byID("units"), "change", a.onUnits)
 	for _, b := range qa(doc, ".screens [data-screen]") {
 		b := b
-		on(b, "click", func(js.Value, dom.Event) { a.showScreen(attr(b, "data-screen")) })
+		on(b, "click", func(js.Value, event) { a.showScreen(attr(b, "data-screen")) })
 	}
 	for _, b := range qa(doc, "[data-demo]") {
 		b := b
-		on(b, "click", func(js.Value, dom.Event) {
+		on(b, "click", func(js.Value, event) {
 			if r, err := recipe.Decode([]byte(demos[attr(b, "data-demo")])); err == nil {
 				a.load(r)
 			}
@@ -122,13 +120,13 @@ func (a *app) start() {
 	}
 	on(byID("solute-matches"), "click", a.onPickMatch)
 	for _, el := range qa(doc, `[name="programme_kind"]`) {
-		on(el, "change", func(js.Value, dom.Event) { a.renderProgramme() })
+		on(el, "change", func(js.Value, event) { a.renderProgramme() })
 	}
 	for _, b := range qa(doc, "[data-print]") {
 		b := b
-		on(b, "click", func(js.Value, dom.Event) { a.print(attr(b, "data-print")) })
+		on(b, "click", func(js.Value, event) { a.print(attr(b, "data-print")) })
 	}
-	win.AddEventListener("beforeprint", false, func(dom.Event) {
+	on(js.Global(), "beforeprint", func(js.Value, event) {
 		a.sheetIfDirty()
 		setText(byID("s-date"), today())
 	})
@@ -147,7 +145,7 @@ func (a *app) start() {
 		}
 		return nil
 	})
-	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
+	on(js.Global(), "afterprint", func(js.Value, event) { classSet(doc.Get("body"), "print-gas", false) })
 	a.bindBox()
 	a.bindCarry()
 	a.load(start)
@@ -210,7 +208,7 @@ func (a *app) showBases() {
 	}
 }
 
-func (a *app) onRecipeInput(el js.Value, _ dom.Event) {
+func (a *app) onRecipeInput(el js.Value, _ event) {
 	name := attr(el, "name")
 	switch name {
 	case "water_basis":
@@ -451,7 +449,7 @@ func (a *app) listMatches(box js.Value, text string) {
 	}
 }
 
-func (a *app) onPickMatch(t js.Value, _ dom.Event) {
+func (a *app) onPickMatch(t js.Value, _ event) {
 	b := closest(t, "[data-id]")
 	if !exists(b) {
 		return
@@ -492,7 +490,7 @@ func (a *app) loadUnitsInto(uf js.Value) {
 	setValue(q(uf, `[name="unit_volume"]`), a.u.Volume)
 }
 
-func (a *app) onUnits(js.Value, dom.Event) {
+func (a *app) onUnits(js.Value, event) {
 	uf := byID("units")
 	a.u = Units{
 		Temp:   value(q(uf, `[name="unit_temp"]`)),

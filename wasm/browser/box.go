@@ -6,8 +6,6 @@ import (
 	"strings"
 	"syscall/js"
 
-	"honnef.co/go/js/dom/v2"
-
 	"saltcast/core/recipe"
 )
 
@@ -15,9 +13,9 @@ import (
 // collection files, CSV of the results, and the share link.
 
 func (a *app) bindBox() {
-	on(byID("save-btn"), "click", func(js.Value, dom.Event) { a.save() })
+	on(byID("save-btn"), "click", func(js.Value, event) { a.save() })
 	on(byID("saved"), "click", a.onSavedClick)
-	on(byID("export-one"), "click", func(js.Value, dom.Event) {
+	on(byID("export-one"), "click", func(js.Value, event) {
 		if r, err := a.d.Recipe(); err == nil {
 			setValue(byID("transfer"), string(recipe.EncodeCollection([]recipe.Recipe{r})))
 			a.boxMessage("m-import", "This recipe is in the box above: copy it, or download it as a file.")
@@ -25,19 +23,19 @@ func (a *app) bindBox() {
 			a.boxMessage("m-import", "The recipe on the Batch screen has an error to correct first: "+fieldMessage(err, ""))
 		}
 	})
-	on(byID("export-all"), "click", func(js.Value, dom.Event) {
+	on(byID("export-all"), "click", func(js.Value, event) {
 		setValue(byID("transfer"), string(a.shelf.Encode()))
 		a.boxMessage("m-import", itoa(len(a.shelf.Recipes))+" saved recipes are in the box above.")
 	})
-	on(byID("download-json"), "click", func(js.Value, dom.Event) {
+	on(byID("download-json"), "click", func(js.Value, event) {
 		text := value(byID("transfer"))
 		if strings.TrimSpace(text) == "" {
 			text = string(a.shelf.Encode())
 		}
 		download("saltcast-recipes.json", "application/json", text)
 	})
-	on(byID("import-btn"), "click", func(js.Value, dom.Event) { a.importText(value(byID("transfer"))) })
-	on(byID("import-file"), "change", func(t js.Value, _ dom.Event) {
+	on(byID("import-btn"), "click", func(js.Value, event) { a.importText(value(byID("transfer"))) })
+	on(byID("import-file"), "change", func(t js.Value, _ event) {
 		files := t.Get("files")
 		if files.Length() == 0 {
 			return
@@ -52,7 +50,7 @@ func (a *app) bindBox() {
 		files.Index(0).Call("text").Call("then", done)
 		setValue(t, "")
 	})
-	on(byID("csv-btn"), "click", func(js.Value, dom.Event) {
+	on(byID("csv-btn"), "click", func(js.Value, event) {
 		if a.last == nil {
 			return
 		}
@@ -62,8 +60,8 @@ func (a *app) bindBox() {
 		}
 		download(fileName(name)+".csv", "text/csv", CSV(a.last, a.u))
 	})
-	on(byID("share-btn"), "click", func(js.Value, dom.Event) { a.share() })
-	on(byID("copy-link"), "click", func(js.Value, dom.Event) {
+	on(byID("share-btn"), "click", func(js.Value, event) { a.share() })
+	on(byID("copy-link"), "click", func(js.Value, event) {
 		link := byID("share-link")
 		if value(link) == "" {
 			a.share()
@@ -151,7 +149,7 @@ func (a *app) renderShelf() {
 	a.renderReceived()
 }
 
-func (a *app) onSavedClick(t js.Value, _ dom.Event) {
+func (a *app) onSavedClick(t js.Value, _ event) {
 	b := closest(t, "button")
 	if !exists(b) {
 		return

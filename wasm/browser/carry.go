@@ -8,8 +8,6 @@ import (
 	"strings"
 	"syscall/js"
 
-	"honnef.co/go/js/dom/v2"
-
 	"saltcast/core/recipe"
 	"saltcast/web/pagecopy"
 )
@@ -27,16 +25,16 @@ type received struct {
 }
 
 func (a *app) bindCarry() {
-	on(byID("carry-save"), "click", func(js.Value, dom.Event) { a.saveCopy() })
-	on(byID("carry-all"), "change", func(t js.Value, _ dom.Event) {
+	on(byID("carry-save"), "click", func(js.Value, event) { a.saveCopy() })
+	on(byID("carry-all"), "change", func(t js.Value, _ event) {
 		for _, el := range qa(byID("carry-pick"), "input[type=checkbox]") {
 			setChecked(el, checked(t))
 		}
 	})
-	on(byID("carry-pick"), "change", func(js.Value, dom.Event) { a.syncCarryAll() })
+	on(byID("carry-pick"), "change", func(js.Value, event) { a.syncCarryAll() })
 	on(byID("received"), "click", a.onReceivedClick)
-	on(byID("take-all"), "click", func(js.Value, dom.Event) { a.takeIn(a.got.from.Recipes) })
-	on(byID("carry-file"), "change", func(t js.Value, _ dom.Event) {
+	on(byID("take-all"), "click", func(js.Value, event) { a.takeIn(a.got.from.Recipes) })
+	on(byID("carry-file"), "change", func(t js.Value, _ event) {
 		files := t.Get("files")
 		if files.Length() > 0 {
 			a.readFile(files.Index(0))
@@ -44,12 +42,12 @@ func (a *app) bindCarry() {
 		setValue(t, "")
 	})
 	drop := byID("carry-drop")
-	on(drop, "dragover", func(_ js.Value, ev dom.Event) {
+	on(drop, "dragover", func(_ js.Value, ev event) {
 		ev.PreventDefault()
 		classSet(drop, "over", true)
 	})
-	on(drop, "dragleave", func(js.Value, dom.Event) { classSet(drop, "over", false) })
-	on(drop, "drop", func(_ js.Value, ev dom.Event) {
+	on(drop, "dragleave", func(js.Value, event) { classSet(drop, "over", false) })
+	on(drop, "drop", func(_ js.Value, ev event) {
 		ev.PreventDefault()
 		classSet(drop, "over", false)
 		files := ev.Underlying().Get("dataTransfer").Get("files")
@@ -68,7 +66,7 @@ func (a *app) bindCarry() {
 	})
 	doc.Call("addEventListener", "dragover", stray)
 	doc.Call("addEventListener", "drop", stray)
-	on(byID("carry-note-go"), "click", func(js.Value, dom.Event) {
+	on(byID("carry-note-go"), "click", func(js.Value, event) {
 		a.showScreen("box")
 		byID("received-panel").Call("scrollIntoView", map[string]any{"block": "start"})
 	})
@@ -194,7 +192,7 @@ func (a *app) takeIn(rs []recipe.Recipe) {
 	a.boxMessage("m-received", TakeInMessage(rs, renamed, added, same))
 }
 
-func (a *app) onReceivedClick(t js.Value, _ dom.Event) {
+func (a *app) onReceivedClick(t js.Value, _ event) {
 	b := closest(t, "button")
 	if !exists(b) || a.got == nil {
 		return

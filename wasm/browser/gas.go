@@ -7,8 +7,6 @@ import (
 	"strings"
 	"syscall/js"
 
-	"honnef.co/go/js/dom/v2"
-
 	"saltcast/core/gas"
 	"saltcast/core/unit"
 	"saltcast/web/chart"
@@ -68,7 +66,7 @@ func (a *app) startGas() {
 		}
 		gasTiles = append(gasTiles, gasTile{key: t.key, label: t.label, unit: t.unit, out: out, box: box})
 	}
-	on(form, "input", func(el js.Value, _ dom.Event) {
+	on(form, "input", func(el js.Value, _ event) {
 		name := attr(el, "name")
 		if _, ok := gasFields[name]; !ok {
 			return
@@ -86,7 +84,7 @@ func (a *app) startGas() {
 		}
 		a.recomputeGas()
 	})
-	on(form, "submit", func(_ js.Value, ev dom.Event) { ev.PreventDefault() })
+	on(form, "submit", func(_ js.Value, ev event) { ev.PreventDefault() })
 	a.recomputeGas()
 }
 

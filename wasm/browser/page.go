@@ -116,15 +116,28 @@ func fillList(list js.Value, items []string) {
 	}
 }
 
-// on listens for an event on el; f gets the element the event happened on.
-func on(el js.Value, typ string, f func(target js.Value, ev dom.Event)) {
+// on listens for an event on el (an element, the document or the window); f gets the
+// element the event happened on. The listener is a plain js.Func: dom/v2's AddEventListener
+// wraps every event in one of its forty event types, and that switch alone kept all of them,
+// and package time, in the page (measured: see DEVELOPERS.md).
+func on(el js.Value, typ string, f func(target js.Value, ev event)) {
 	if !exists(el) {
 		return
 	}
-	dom.WrapElement(el).AddEventListener(typ, false, func(ev dom.Event) {
-		f(ev.Underlying().Get("target"), ev)
-	})
+	el.Call("addEventListener", typ, js.FuncOf(func(_ js.Value, args []js.Value) any {
+		ev := event{args[0]}
+		f(ev.Get("target"), ev)
+		return nil
+	}))
 }
+
+// event is a DOM event as a listener sees it.
+type event struct{ js.Value }
+
+func (ev event) PreventDefault() { ev.Call("preventDefault") }
+
+// Underlying is the event's js.Value (as dom/v2's events have it).
+func (ev event) Underlying() js.Value { return ev.Value }
 
 // storage wraps localStorage; a browser that refuses it (private mode, file:// rules) makes
 // every call a no-op that reports failure rather than a panic.
