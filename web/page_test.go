@@ -3,7 +3,6 @@ package web_test
 import (
 	"bytes"
 	"compress/gzip"
-	"encoding/base64"
 	"io"
 	"os"
 	"os/exec"
@@ -13,6 +12,7 @@ import (
 	"testing"
 
 	"saltcast/web"
+	"saltcast/web/text91"
 )
 
 // The page is one self-contained file: the policy forbids every request, nothing refers to
@@ -77,12 +77,12 @@ func TestPageIsSelfContained(t *testing.T) {
 		t.Error("the version text became markup")
 	}
 
-	// The module comes back byte for byte from the base64 block.
-	m := regexp.MustCompile(`<script id="saltcast-wasm" type="application/octet-stream">([A-Za-z0-9+/=]+)</script>`).FindStringSubmatch(html)
+	// The module comes back byte for byte from the text block.
+	m := regexp.MustCompile(`<script id="saltcast-wasm" type="application/octet-stream">([!-~]+)</script>`).FindStringSubmatch(html)
 	if m == nil {
 		t.Fatal("no inlined module")
 	}
-	raw, err := base64.StdEncoding.DecodeString(m[1])
+	raw, err := text91.Decode(m[1])
 	if err != nil {
 		t.Fatal(err)
 	}

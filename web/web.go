@@ -1,5 +1,5 @@
 // Package web writes the bench app as one offline HTML file: the Go program compiled to
-// WebAssembly, gzip-compressed and base64-inlined, the Go toolchain's wasm_exec.js, and the
+// WebAssembly, gzip-compressed and inlined as ASCII text (saltcast/web/text91), the Go toolchain's wasm_exec.js, and the
 // HTML/CSS shell kept beside this file.
 //
 // The page needs no network: the module is unpacked in the browser with DecompressionStream
@@ -22,6 +22,7 @@ import (
 	"strings"
 
 	"saltcast/web/pagecopy"
+	"saltcast/web/text91"
 	"saltcast/web/wasmpack"
 )
 
@@ -345,7 +346,7 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 		"{{CSS}}", appCSS,
 		"{{WASM_EXEC}}", wasmExec,
 		"{{LOADER}}", loaderJS,
-		"{{WASM}}", base64.StdEncoding.EncodeToString(gz),
+		"{{WASM}}", text91.Encode(gz),
 	)
 	return []byte(r.Replace(shellHTML)), nil
 }
