@@ -108,7 +108,7 @@ type Config struct {
 	// KeepSegments leaves the linker's data segments as they are instead of merging them
 	// (saltcast/web/wasmpack; only to measure what merging buys).
 	KeepSegments bool
-	// Gzip is the compressor: "zopfli" (the zopfli program, 1 iteration), "go" (compress/gzip
+	// Gzip is the compressor: "zopfli" (the zopfli program, zopfliIterations), "go" (compress/gzip
 	// at best compression) or "" for zopfli when it is installed, else go.
 	Gzip string
 }
@@ -292,6 +292,10 @@ func jsonString(s string) string {
 	return b.String()
 }
 
+// zopfliIterations: 15 iterations made the packed module 3.8 KB smaller than 1 (880 001 against
+// 883 786 B; 5 gave 880 710) for 9 s more build time (measured 2 Dec 2026 on the build machine).
+const zopfliIterations = 15
+
 // compress gzips the module with zopfli when asked or installed (about 5 % smaller than
 // compress/gzip, measured), else with compress/gzip at its best level.
 func compress(wasm []byte, how, tmp string) ([]byte, string, error) {
@@ -307,7 +311,7 @@ func compress(wasm []byte, how, tmp string) ([]byte, string, error) {
 		if err := os.WriteFile(in, wasm, 0o644); err != nil {
 			return nil, how, err
 		}
-		out, err := exec.Command("zopfli", "--i1", "--gzip", "-c", in).Output()
+		out, err := exec.Command("zopfli", "--i"+strconv.Itoa(zopfliIterations), "--gzip", "-c", in).Output()
 		if err != nil {
 			return nil, how, errors.New("zopfli: " + err.Error())
 		}
