@@ -1,8 +1,8 @@
 package web_test
 
 // Performance figures of the bench app, printed by `make bench` (SALTCAST_BENCH=1). They are
-// measurements, not timed pass/fail tests; the only limits checked are the issue's hard
-// ones: the page is at most 1.5 MB.
+// measurements, not timed pass/fail tests, printed beside their aims; the only limit checked
+// is the page's size.
 
 import (
 	"context"
@@ -13,11 +13,20 @@ import (
 	"strconv"
 	"testing"
 
+	"github.com/chromedp/chromedp"
+
 	"saltcast/web"
 )
 
-// maxPageBytes is the hard limit on dist/saltcast.html (issue 4: "≤ 1.5 MB now").
-const maxPageBytes = 1_500_000
+// maxPageBytes is the limit on dist/saltcast.html: 1.15 MB, read as 1 150 000 bytes (decimal
+// megabytes), so the page still opens quickly on a tablet and leaves room to grow.
+const maxPageBytes = 1_150_000
+
+// Aims printed beside the figures (not checked: timings depend on the machine).
+const (
+	aimLoadRatio  = 1.5 // open → first result, app against the yardstick
+	aimRecomputeP = 8.0 // recompute p95, ms (half a 60 Hz frame)
+)
 
 func TestPageSize(t *testing.T) {
 	appURL(t)
@@ -26,7 +35,7 @@ func TestPageSize(t *testing.T) {
 		t.Fatal(err)
 	}
 	if fi.Size() > maxPageBytes {
-		t.Errorf("dist/saltcast.html is %d bytes, more than the %d allowed", fi.Size(), maxPageBytes)
+		t.Errorf("dist/saltcast.html is %d bytes, more than the %d allowed (see DEVELOPERS.md, \"Decisions measured\", for what the bytes buy)", fi.Size(), maxPageBytes)
 	}
 }
 
@@ -45,7 +54,7 @@ func TestFigures(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	t.Logf("page dist/saltcast.html: %d bytes (%.2f MB)", fi.Size(), float64(fi.Size())/1e6)
+	t.Logf("page dist/saltcast.html: %d bytes (%.3f MB; limit %d)", fi.Size(), float64(fi.Size())/1e6, maxPageBytes)
 
 	// What each build step buys, on the same source.
 	const pkg = "./wasm/browser"
@@ -83,15 +92,45 @@ func TestFigures(t *testing.T) {
 	}
 	t.Logf("floor page: %s", rep.String())
 
-	ctx := tab(t)
-	appMs := loadTimes(t, ctx, app)
-	floorMs := loadTimes(t, ctx, "file://"+floorPath)
+	// Loads alternate between the app and the yardstick, each in a new tab, so both see the
+	// same machine load.
+	var appMs, floorMs []float64
+	for range loads {
+		appMs = append(appMs, loadTime(t, app))
+		floorMs = append(floorMs, loadTime(t, "file://"+floorPath))
+	}
 	am, fm := median(appMs), median(floorMs)
-	t.Logf("open → first result, median of %d: app %.1f ms, floor %.1f ms, ratio %.2f× (aim ≤ 1.3×)", loads, am, fm, am/fm)
+	t.Logf("open → first result, median of %d (each in a new tab): app %.1f ms, floor %.1f ms, ratio %.2f× (aim ≤ %.1f×)", loads, am, fm, am/fm, aimLoadRatio)
 	t.Logf("  app loads ms: %v", fmtMs(appMs))
 	t.Logf("  floor loads ms: %v", fmtMs(floorMs))
 
+	ctx := tab(t)
 	open(t, ctx, app)
+
+	// Gunzip of the packed module in the page, fed two ways (web/loader.js uses the first).
+	gunzip := mustEval[[]float64](t, ctx, `(async function(){
+		const text = document.getElementById("saltcast-wasm").textContent.trim();
+		const val = new Int16Array(128).fill(-1); let k = 0;
+		for (let c = 33; c < 127; c++) if (c !== 60 && c !== 62 && c !== 38) val[c] = k++;
+		const t0 = performance.now();
+		const n = text.length, out = new Uint8Array(Math.floor(((n >> 1) * 13 + (n & 1) * 6) / 8));
+		let acc = 0, bits = 0, o = 0, i = 0;
+		for (; i + 1 < n; i += 2) {
+			acc |= (val[text.charCodeAt(i)] + 91 * val[text.charCodeAt(i + 1)]) << bits; bits += 13;
+			while (bits >= 8) { out[o++] = acc & 255; acc >>>= 8; bits -= 8; }
+		}
+		if (i < n) { acc |= val[text.charCodeAt(i)] << bits; if (bits + 6 >= 8) out[o++] = acc & 255; }
+		const decode = performance.now() - t0;
+		const chunk = () => new ReadableStream({start(c) { c.enqueue(out); c.close(); }});
+		const blob = () => new Blob([out]).stream();
+		const time = async (src) => { const t = performance.now(); await new Response(src().pipeThrough(new DecompressionStream("gzip"))).arrayBuffer(); return performance.now() - t; };
+		const a = [], b = [];
+		for (let r = 0; r < 5; r++) { a.push(await time(chunk)); b.push(await time(blob)); }
+		a.sort((x, y) => x - y); b.sort((x, y) => x - y);
+		return [decode, a[2], b[2]];
+	})()`)
+	t.Logf("in the page: text91 decode %.1f ms; gunzip median of 5: one-chunk stream %.1f ms, Blob stream %.1f ms", gunzip[0], gunzip[1], gunzip[2])
+
 	click(t, ctx, `[data-demo="cuso4"]`)
 	// Each run changes one input, as a technician does: the water (results change, the
 	// chart does not, since it is drawn per 100 g water) or the target temperature (results
@@ -112,17 +151,19 @@ func TestFigures(t *testing.T) {
 	})()`)
 	slices.Sort(times)
 	p95 := times[len(times)*95/100]
-	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ 8 ms)", len(times), warmup, median(times), p95, times[len(times)-1])
+	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ %.0f ms)", len(times), warmup, median(times), p95, times[len(times)-1], aimRecomputeP)
 }
 
-func loadTimes(t *testing.T, ctx context.Context, u string) []float64 {
+// loadTime opens u in a new tab and returns the time from navigation start to the first
+// result (performance.now() at the page's ready mark).
+func loadTime(t *testing.T, u string) float64 {
 	t.Helper()
-	var ms []float64
-	for range loads {
-		open(t, ctx, u)
-		ms = append(ms, mustEval[float64](t, ctx, `window.saltcastMarks.ready`))
-	}
-	return ms
+	ctx, cancel := chromedp.NewContext(browser(t))
+	defer cancel()
+	tctx, tcancel := context.WithTimeout(ctx, pageTimeout)
+	defer tcancel()
+	open(t, tctx, u)
+	return mustEval[float64](t, tctx, `window.saltcastMarks.ready`)
 }
 
 func have(tool string) bool {

@@ -22,6 +22,7 @@ const (
 
 	aimColdStart = 400 * time.Millisecond
 	aimP50       = 3 * time.Millisecond
+	aimBundle    = 2_300_000 // bytes of gzip, room under the free plan's 3 MB to grow
 
 	// paidPlanLimit is the compressed size limit of a Worker on Cloudflare's paid plan,
 	// 10 MB (Workers "Limits" page; from memory). freePlanLimit is in workerd_test.go.
@@ -56,8 +57,8 @@ func TestFigures(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	t.Logf("bundle gzip %d bytes (%.2f MiB): %.0f %% of the free plan's 3 MB, %.0f %% of the paid plan's 10 MB (limits from memory)",
-		size, float64(size)/(1<<20), 100*float64(size)/freePlanLimit, 100*float64(size)/paidPlanLimit)
+	t.Logf("bundle gzip %d bytes (%.2f MiB; aim ≤ %d): %.0f %% of the free plan's 3 MB, %.0f %% of the paid plan's 10 MB (limits from memory)",
+		size, float64(size)/(1<<20), aimBundle, 100*float64(size)/freePlanLimit, 100*float64(size)/paidPlanLimit)
 	if size > paidPlanLimit {
 		t.Errorf("bundle gzip %d bytes is over the paid plan's limit %d", size, paidPlanLimit)
 	}
