@@ -45,8 +45,8 @@ type prepField struct {
 	key     string
 	text    int // maximum bytes of a text field; 0 for a number
 	lo, hi  float64
-	loOpen  bool   // lo excluded
-	allowed string // what is allowed, in words
+	loOpen  bool                 // lo excluded
+	allowed string               // what is allowed, in words
 	str     func(*Prep) *string  // a text field
 	num     func(*Prep) *Opt     // an optional number
 	req     func(*Prep) *float64 // a required number
