@@ -44,6 +44,7 @@ type Compound struct {
 	Hazard           string    // general note, ends by pointing to the SDS
 	Oxidizer         bool      // strong oxidizer: keep from organics and fuels
 	Organic          bool      // the solute itself is organic (combustible)
+	Toxic            bool      // acutely toxic, carcinogenic, mutagenic or toxic to reproduction: Hazard carries the strong wording
 	Sources          []string  // every source cited by the compound's data
 	Notes            []string  // remarks on the data a technician should see
 	Cautions         []Caution // range-bound warnings added to Solubility

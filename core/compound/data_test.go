@@ -95,8 +95,9 @@ func TestCompoundForm(t *testing.T) {
 
 func TestLibraryShape(t *testing.T) {
 	all := All()
-	if len(all) != 16 {
-		t.Errorf("library has %d compounds, want 16", len(all))
+	// The widened library: the 16 first compounds plus the sections added after them.
+	if len(all) < 45 {
+		t.Errorf("library has %d compounds, want at least 45", len(all))
 	}
 	for _, c := range all {
 		if c.Forms[0].Formula != c.ID || c.Forms[0].AnhydrousFraction != 1 {

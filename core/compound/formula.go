@@ -8,13 +8,15 @@ import (
 // atomicWeights are IUPAC standard atomic weights in g/mol (abridged values, CIAAW/IUPAC
 // "Standard atomic weights of the elements 2021", Pure Appl. Chem. 2022; the conventional
 // values for elements given as intervals: H 1.008, C 12.011, N 14.007, O 15.999, Mg 24.305,
-// S 32.06, Cl 35.45, Li 6.94). Only the elements of the library and common custom solutes.
+// S 32.06, Cl 35.45, Li 6.94, Br 79.904; and for lead, whose standard atomic weight is the
+// interval [206.14, 207.94] since 2020, the conventional value 207.2). Only the elements of the
+// library and common custom solutes.
 var atomicWeights = map[string]float64{
 	"H": 1.008, "Li": 6.94, "B": 10.81, "C": 12.011, "N": 14.007, "O": 15.999, "F": 18.998403,
 	"Na": 22.98977, "Mg": 24.305, "Al": 26.98154, "Si": 28.085, "P": 30.97376, "S": 32.06,
-	"Cl": 35.45, "K": 39.0983, "Ca": 40.078, "Mn": 54.938043, "Fe": 55.845, "Co": 58.933194,
+	"Cl": 35.45, "K": 39.0983, "Ca": 40.078, "Cr": 51.9961, "Mn": 54.938043, "Fe": 55.845, "Co": 58.933194,
 	"Ni": 58.6934, "Cu": 63.546, "Zn": 65.38, "Br": 79.904, "Sr": 87.62, "Ag": 107.8682,
-	"I": 126.90447, "Ba": 137.327,
+	"I": 126.90447, "Ba": 137.327, "Pb": 207.2,
 }
 
 // MolarMass returns the molar mass in g/mol of a formula such as "KAl(SO4)2·12H2O" (the

@@ -112,8 +112,10 @@ func (p *parser) statement() error {
 				p.c.Oxidizer = true
 			case "organic":
 				p.c.Organic = true
+			case "toxic":
+				p.c.Toxic = true
 			default:
-				return p.fail("unknown flag " + strconv.Quote(f) + " (known: oxidizer, organic)")
+				return p.fail("unknown flag " + strconv.Quote(f) + " (known: oxidizer, organic, toxic)")
 			}
 		}
 	case "hazard":
@@ -421,6 +423,8 @@ func (p *parser) end() error {
 		return p.fail("compound " + c.ID + " has no hazard note")
 	case !strings.Contains(c.Hazard, "SDS"):
 		return p.fail("the hazard note of " + c.ID + " must point to the SDS")
+	case c.Toxic && !strings.HasPrefix(c.Hazard, "DANGER") && !strings.HasPrefix(c.Hazard, "Toxic"):
+		return p.fail("the hazard note of toxic " + c.ID + " must open with \"DANGER\" or \"Toxic\"")
 	case len(c.Forms) == 0:
 		return p.fail("compound " + c.ID + " has no forms")
 	case len(p.phases) == 0:
