@@ -399,3 +399,110 @@ func (res PrepResult) encode(e *wire.Encoder) {
 	list("sources", r.Sources)
 	e.EndObject()
 }
+
+// PrepCollectionKind is the "kind" of a file holding many preparations.
+const PrepCollectionKind = "saltcast-preparations"
+
+// DecodePrepCollection reads {"format":1,"kind":"saltcast-preparations","recipes":[...]}
+// all or nothing, as DecodeCollection reads batches; fields are named like
+// "recipes[3].concentration".
+func DecodePrepCollection(data []byte) ([]Prep, error) {
+	v, err := wire.DecodeLimits(data, wire.Limits{MaxBytes: MaxCollectionBytes, MaxDepth: 32})
+	if err != nil {
+		return nil, err
+	}
+	if v.Kind != wire.Object {
+		return nil, &unit.FieldError{Field: "collection", Value: v.Kind.String(),
+			Allowed: `an object {"format":1,"kind":"` + PrepCollectionKind + `","recipes":[...]}`}
+	}
+	d := reader{}
+	var items []wire.Value
+	kind := false
+	for _, m := range v.Members {
+		switch m.Key {
+		case "format":
+			d.format(m.Value)
+		case "kind":
+			if k := d.text("kind", m.Value, 100); d.err == nil && k != PrepCollectionKind {
+				d.fail("kind", k, `"`+PrepCollectionKind+`"`)
+			}
+			kind = true
+		case "recipes":
+			if m.Value.Kind != wire.Array {
+				d.fail("recipes", literal(m.Value), "a list of preparations")
+			}
+			items = m.Value.Items
+		default:
+			d.fail(m.Key, m.Key, "one of the collection keys: format, kind, recipes")
+		}
+		if d.err != nil {
+			return nil, d.err
+		}
+	}
+	if !kind {
+		return nil, &unit.FieldError{Field: "kind", Value: "", Allowed: `"` + PrepCollectionKind + `" (the key is required)`}
+	}
+	if len(items) > MaxCollectionRecipes {
+		return nil, &unit.FieldError{Field: "recipes", Value: fmtNum(float64(len(items))) + " preparations",
+			Allowed: "at most " + fmtNum(MaxCollectionRecipes) + " in one file"}
+	}
+	out := make([]Prep, 0, len(items))
+	for i, it := range items {
+		p, err := prepFromValue(it, "recipes["+fmtNum(float64(i))+"].")
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, p)
+	}
+	return out, nil
+}
+
+// EncodePrepCollection writes preparations as one collection file.
+func EncodePrepCollection(preps []Prep) []byte {
+	var e wire.Encoder
+	e.BeginObject()
+	e.Key("format").Int(CurrentFormat)
+	e.Key("kind").String(PrepCollectionKind)
+	e.Key("recipes").BeginArray()
+	for _, p := range preps {
+		p.encode(&e)
+	}
+	e.EndArray()
+	e.EndObject()
+	b, err := e.Bytes()
+	if err != nil {
+		panic("recipe: EncodePrepCollection of a non-finite number: " + err.Error())
+	}
+	return b
+}
+
+// BatchFrom turns a worked preparation into a batch recipe holding the same solution, for
+// planning a crystallization from it: the form weighed and the water added (or, from a
+// stock, the anhydrous solute and all the water), dissolved at the make-up temperature and,
+// when a storage temperature was given, cooled to it.
+func BatchFrom(res PrepResult) Recipe {
+	r := res.Result
+	b := Recipe{Format: CurrentFormat, Solute: r.SoluteID, DissolveTempC: r.TempC}
+	b.Name = res.Recipe.Name
+	if b.Name == "" {
+		b.Name = r.SoluteID + " " + unit.FormatCompact(r.Concentration, 4) + " " + string(r.Unit)
+	}
+	b.Notes = "From the preparation: " + unit.FormatCompact(r.Concentration, 6) + " " + string(r.Unit) + " " + r.SoluteID + "."
+	if r.HasForm {
+		if r.Form != r.Compound.Anhydrous().Formula {
+			b.ChargedForm = r.Form
+		}
+		if r.PurityPct != 100 {
+			b.PurityPct = Some(r.PurityPct)
+		}
+		b.ChargeG = Some(r.FormG)
+		b.WaterG = Some(r.WaterG)
+	} else {
+		b.ChargeG = Some(r.SoluteG)
+		b.WaterG = Some(r.TotalWaterG)
+	}
+	if r.HasStoreAt {
+		b.CoolToC = Some(r.StoreAtC)
+	}
+	return b
+}

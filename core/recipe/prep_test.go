@@ -5,6 +5,7 @@ import (
 	"errors"
 	"math"
 	"math/rand/v2"
+	"strings"
 	"testing"
 
 	"saltcast/core/prep"
@@ -257,5 +258,48 @@ func BenchmarkPlanPrepVolume(b *testing.B) {
 	for b.Loop() {
 		res, _ := PlanPrep(p)
 		benchSink += len(res.Encode())
+	}
+}
+
+// A collection of preparations reads back exactly; one bad entry refuses the file.
+func TestPrepCollection(t *testing.T) {
+	rng := rand.New(rand.NewPCG(9, 9))
+	var ps []Prep
+	for range 20 {
+		ps = append(ps, randomPrep(rng))
+	}
+	got, err := DecodePrepCollection(EncodePrepCollection(ps))
+	if err != nil || len(got) != len(ps) {
+		t.Fatalf("DecodePrepCollection: %d, %v", len(got), err)
+	}
+	for i := range ps {
+		if got[i] != ps[i] {
+			t.Fatalf("entry %d changed: %+v → %+v", i, ps[i], got[i])
+		}
+	}
+	bad := `{"format":1,"kind":"saltcast-preparations","recipes":[` + prepExamples[0] + `,{"solute":"KCl"}]}`
+	var fe *unit.FieldError
+	if _, err := DecodePrepCollection([]byte(bad)); !errors.As(err, &fe) || !strings.HasPrefix(fe.Field, "recipes[1].") {
+		t.Errorf("bad entry: %v", err)
+	}
+}
+
+// The batch handed over holds the same solution: same solute and water, so the same
+// concentration in g per 100 g water.
+func TestBatchFrom(t *testing.T) {
+	for _, s := range prepExamples[:4] {
+		p, _ := DecodePrep([]byte(s))
+		res, err := PlanPrep(p)
+		if err != nil {
+			t.Fatal(err)
+		}
+		b := BatchFrom(res)
+		plan, err := Plan(b)
+		if err != nil {
+			t.Fatalf("%s: batch plan: %v", s, err)
+		}
+		if math.Abs(plan.ConcentrationG100-res.GPer100gWater) > 1e-9*res.GPer100gWater {
+			t.Errorf("%s: batch holds %.9g g/100 g water, the preparation %.9g", s, plan.ConcentrationG100, res.GPer100gWater)
+		}
 	}
 }
