@@ -147,10 +147,21 @@ func (a *app) start() {
 		}
 		return nil
 	})
-	win.AddEventListener("afterprint", false, func(dom.Event) { classSet(doc.Get("body"), "print-gas", false) })
+	win.AddEventListener("afterprint", false, func(dom.Event) {
+		classSet(doc.Get("body"), "print-gas", false)
+		classSet(doc.Get("body"), "print-labels", false)
+	})
 	a.bindBox()
 	a.bindCarry()
 	a.load(start)
+	if p, ok, err := PrepFromFragment(win.Location().Hash()); ok {
+		a.showScreen("prep")
+		if err == nil {
+			a.loadPrep(p)
+		} else {
+			setText(byID("m-prep-import"), "The link's preparation could not be read: "+err.Error())
+		}
+	}
 }
 
 // keepCurrent stores the recipe on screen so a reload (or a closed tab) finds it.
@@ -493,6 +504,8 @@ func (a *app) loadUnitsInto(uf js.Value) {
 }
 
 func (a *app) onUnits(js.Value, dom.Event) {
+	old := a.u
+	defer a.prepUnits(old)
 	uf := byID("units")
 	a.u = Units{
 		Temp:   value(q(uf, `[name="unit_temp"]`)),
@@ -543,6 +556,10 @@ func (a *app) showScreen(name string) {
 	case "sheet":
 		a.sheetIfDirty()
 		setText(byID("s-date"), today())
+	case "prep":
+		if !ps.started {
+			a.startPrep()
+		}
 	case "gas":
 		if !a.gasShown {
 			a.gasShown = true
@@ -553,6 +570,7 @@ func (a *app) showScreen(name string) {
 
 func (a *app) print(what string) {
 	classSet(doc.Get("body"), "print-gas", what == "gas")
+	classSet(doc.Get("body"), "print-labels", false)
 	a.sheetIfDirty()
 	setText(byID("s-date"), today())
 	js.Global().Call("print")
