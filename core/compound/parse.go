@@ -65,8 +65,8 @@ type parser struct {
 	out     []*Compound
 	seen    map[string]bool
 
-	c       *Compound
-	phases  []*phaseDef
+	c        *Compound
+	phases   []*phaseDef
 	rows     *rowSet // rows being filled: a phase's, the density's or the freezing curve's
 	density  *rowSet
 	freezing *rowSet
