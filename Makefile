@@ -10,7 +10,7 @@ all: build demo
 
 ## cli: the command-line tool in bin/saltcast
 cli:
-	$(GO) build -o bin/saltcast ./core/cmd/saltcast
+	$(GO) build -o bin/saltcast ./web/cmd/saltcast
 
 ## demo: plan the invented demo recipes in testdata/ and print them readably
 demo: cli
@@ -18,13 +18,13 @@ demo: cli
 
 ## build: dist/saltcast.html, the single offline file (installs zopfli first when root)
 build:
-	@bash scripts/deps-build.sh
+	@bash web/scripts/deps-build.sh
 	$(GO) run ./web/bundle -out dist/saltcast.html
 	@echo "built $(CURDIR)/dist/saltcast.html"
 
 ## test-deps: what the browser and worker tests need (chromium via apt-get, workerd via npm ci)
 test-deps:
-	bash scripts/test-deps.sh
+	bash web/scripts/test-deps.sh
 
 ## test-core: host tests only (no browser, no worker)
 test-core:
@@ -35,21 +35,21 @@ test-core:
 test: test-deps build worker
 	$(GO) vet ./...
 	SALTCAST_REQUIRE_BROWSER=1 SALTCAST_REQUIRE_WORKERD=1 $(GO) test ./...
-	bash scripts/fuzz-short.sh
+	bash web/scripts/fuzz-short.sh
 
 ## bench: performance figures (core benchmarks, bundle size, load times, worker latency)
 bench: build worker
 	$(GO) test -run '^$$' -bench . -benchmem ./core/...
 	SALTCAST_BENCH=1 $(GO) test -run 'TestFigures' -v ./web/... ./wasm/...
 
-## worker: the Cloudflare Workers build in build/worker (scripts/build-worker.sh; sizes printed)
+## worker: the Cloudflare Workers build in build/worker (wasm/worker/build.sh; sizes printed)
 worker:
-	bash scripts/build-worker.sh
+	bash wasm/worker/build.sh
 
 ## worker-run: serve the worker locally on http://127.0.0.1:8787 with workerd (Ctrl-C stops it)
 worker-run: worker
-	bash scripts/deps-workerd.sh
-	./node_modules/.bin/workerd serve wasm/worker/workerd.capnp --verbose
+	bash wasm/worker/deps-workerd.sh
+	./wasm/worker/node_modules/.bin/workerd serve wasm/worker/workerd.capnp --verbose
 
 clean:
 	rm -rf bin dist build

@@ -4,7 +4,7 @@ import (
 	"strconv"
 	"testing"
 
-	"saltcast/internal/badinput"
+	"saltcast/web/badinput"
 )
 
 // uiBadInputs are a dozen cases of the shared catalogue (testdata/bad-inputs.txt) as a user

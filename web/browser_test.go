@@ -46,7 +46,7 @@ func TestMain(m *testing.M) {
 func need(t testing.TB, why string) {
 	t.Helper()
 	if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-		t.Fatal(why + " (SALTCAST_REQUIRE_BROWSER=1: run `make build` and `bash scripts/deps-chromium.sh`)")
+		t.Fatal(why + " (SALTCAST_REQUIRE_BROWSER=1: run `make build` and `bash web/scripts/deps-chromium.sh`)")
 	}
 	t.Skip(why + "; run `make test` to build and test for real")
 }

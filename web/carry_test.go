@@ -6,6 +6,7 @@ import (
 	"net/url"
 	"os"
 	"path/filepath"
+	"saltcast/web/carry"
 	"strconv"
 	"strings"
 	"testing"
@@ -166,7 +167,7 @@ func TestCarrySaveCopyRoundTrip(t *testing.T) {
 	}
 
 	// The copy: the recipes sealed in the block, and otherwise the page byte for byte.
-	c, err := recipe.ExtractCarried(saved)
+	c, err := carry.ExtractCarried(saved)
 	if err != nil {
 		t.Fatalf("the saved copy: %v", err)
 	}
@@ -174,7 +175,7 @@ func TestCarrySaveCopyRoundTrip(t *testing.T) {
 	if c.SentBy != "Ana (bench 3)" || !c.Sealed || c.SavedAt == "" || !strings.Contains(string(page), `content="`+c.AppVersion+`"`) {
 		t.Errorf("the copy's sender, time, seal and version: %+v", c)
 	}
-	if want, _ := recipe.WithCarried(page, c); !bytes.Equal(saved, want) {
+	if want, _ := carry.WithCarried(page, c); !bytes.Equal(saved, want) {
 		t.Errorf("the saved copy (%d B) is not the page (%d B) with the recipes block; the page did not copy its own bytes",
 			len(saved), len(page))
 	}
@@ -241,7 +242,7 @@ func TestCarryOpenFile(t *testing.T) {
 	// A colleague's batch of the same name as one of mine, but different.
 	theirs := mine[0]
 	theirs.WaterML = recipe.Some(15000)
-	good, err := recipe.WithCarried(page, recipe.Carried{AppVersion: "v-test", SavedAt: "2026-12-01T09:30:00Z",
+	good, err := carry.WithCarried(page, carry.Carried{AppVersion: "v-test", SavedAt: "2026-12-01T09:30:00Z",
 		SentBy: "Bo", Recipes: []recipe.Recipe{theirs}})
 	if err != nil {
 		t.Fatal(err)
@@ -364,7 +365,7 @@ func TestCarryScreenshots(t *testing.T) {
 	open(t, ctx, appURL(t))
 	resetStorage(t, ctx, appURL(t))
 	rs := saveRecipes(t, ctx)
-	copyPage, err := recipe.WithCarried(page, recipe.Carried{AppVersion: "v-shot", SavedAt: "2026-12-01T09:30:00Z",
+	copyPage, err := carry.WithCarried(page, carry.Carried{AppVersion: "v-shot", SavedAt: "2026-12-01T09:30:00Z",
 		SentBy: "Ana (bench 3)", Recipes: rs})
 	if err != nil {
 		t.Fatal(err)

@@ -1,9 +1,11 @@
 package recipe
 
 import (
+	"errors"
 	"math"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"saltcast/core/unit"
 	"saltcast/core/wire"
@@ -84,6 +86,9 @@ type Point struct {
 // Custom-model names accepted in "model".
 var customModels = []string{"table", "vant-hoff", "apelblat", "polynomial"}
 
+// MaxNameBytes is the longest recipe name Decode reads, in bytes of UTF-8.
+const MaxNameBytes = maxTextName
+
 // Plausibility bounds checked while decoding; the compound's own range is checked by Plan.
 const (
 	minTempC    = -40.0
@@ -114,6 +119,9 @@ func Decode(data []byte) (Recipe, error) {
 	}
 	return fromValue(v, "")
 }
+
+// DecodeValue checks one recipe object already read as JSON, as Decode does.
+func DecodeValue(v wire.Value) (Recipe, error) { return fromValue(v, "") }
 
 // fromValue checks one recipe object; prefix goes in front of field names ("recipes[2].").
 func fromValue(v wire.Value, prefix string) (Recipe, error) {
@@ -246,20 +254,7 @@ func atLeast(lo float64) bound { return func(v float64) bool { return v >= lo } 
 func atMost(hi float64) bound  { return func(v float64) bool { return v <= hi } }
 
 // literal gives a short form of a JSON value for an error message.
-func literal(v wire.Value) string {
-	switch v.Kind {
-	case wire.Number:
-		return v.Text
-	case wire.String:
-		if len(v.Text) > 40 {
-			return v.Text[:40] + "…"
-		}
-		return v.Text
-	case wire.Bool:
-		return strconv.FormatBool(v.Bool)
-	}
-	return v.Kind.String()
-}
+func literal(v wire.Value) string { return wire.Literal(v) }
 
 func (d *reader) num(field string, v wire.Value, lo, hi bound, allowed string) Opt {
 	if v.Kind != wire.Number {
@@ -450,4 +445,32 @@ func (r Recipe) encode(e *wire.Encoder) {
 	opt("liquor_heat_capacity_kJ_per_kgK", r.LiquorHeatCapacityKJPerKgK)
 	opt("vessel_heat_capacity_J_per_K", r.VesselHeatCapacityJPerK)
 	e.EndObject()
+}
+
+// Encodable reports what would make Encode panic, Decode refuse the text of r, or the
+// checksum differ once read back: texts longer than Decode reads, and text that is not
+// UTF-8 (the encoder writes U+FFFD for it, which reads back as other bytes). A Recipe from
+// Decode is always fine.
+func (r Recipe) Encodable() error {
+	texts := []struct {
+		s   string
+		max int
+	}{{r.Name, maxTextName}, {r.Notes, maxTextNote}, {r.Solute, maxTextName}, {r.ChargedForm, maxTextName}}
+	if c := r.Custom; c != nil {
+		texts = append(texts, struct {
+			s   string
+			max int
+		}{c.Name + c.Source + c.Model, 3 * maxTextName})
+	}
+	for _, t := range texts {
+		if len(t.s) > t.max || !utf8.ValidString(t.s) {
+			return errors.New("UTF-8 texts of at most " + strconv.Itoa(t.max) + " bytes")
+		}
+	}
+	var e wire.Encoder
+	r.encode(&e)
+	if _, err := e.Bytes(); err != nil {
+		return errors.New("finite numbers only")
+	}
+	return nil
 }

@@ -479,3 +479,23 @@ func (d *decoder) str() (string, error) {
 		}
 	}
 }
+
+// Literal gives a short form of a JSON value for an error message: a number as written,
+// a string cut to 40 bytes, true or false, or the kind of anything else.
+func Literal(v Value) string {
+	switch v.Kind {
+	case Number:
+		return v.Text
+	case String:
+		if len(v.Text) > 40 {
+			return v.Text[:40] + "…"
+		}
+		return v.Text
+	case Bool:
+		if v.Bool {
+			return "true"
+		}
+		return "false"
+	}
+	return v.Kind.String()
+}

@@ -4,6 +4,7 @@ package main
 
 import (
 	"errors"
+	"saltcast/web/carry"
 	"strings"
 	"syscall/js"
 
@@ -15,13 +16,13 @@ import (
 
 // Recipes that travel with the app: "save a copy with recipes" writes this page's own bytes
 // (rebuilt from pageTemplate, see saltcast/web/pagecopy) with the chosen recipes in an inert
-// block (core/recipe.WithCarried); a page that carries recipes, or a file the user drops or
+// block (core/carry.WithCarried); a page that carries recipes, or a file the user drops or
 // picks, shows them as received, apart from the user's own list, until the user takes them in
-// (core/recipe.TakeIn: nothing of theirs is overwritten).
+// (core/carry.TakeIn: nothing of theirs is overwritten).
 
 // received is what the user has been sent and not yet dismissed.
 type received struct {
-	from   recipe.Carried
+	from   carry.Carried
 	source string // "this copy" or the file's name
 }
 
@@ -73,9 +74,9 @@ func (a *app) bindCarry() {
 	})
 
 	// The recipes this copy of the page carries.
-	if block := byID(recipe.CarriedID); exists(block) {
+	if block := byID(carry.CarriedID); exists(block) {
 		if text := strings.TrimSpace(block.Get("textContent").String()); text != "" {
-			c, err := recipe.ExtractCarried([]byte(text))
+			c, err := carry.ExtractCarried([]byte(text))
 			if err != nil {
 				a.boxMessage("m-received", "The recipes this copy carries could not be read, so none are shown: "+carryMessage(err))
 			} else {
@@ -92,7 +93,7 @@ func (a *app) bindCarry() {
 // readFile takes the recipes out of a file the user dropped or picked; nothing in it runs.
 func (a *app) readFile(file js.Value) {
 	name := file.Get("name").String()
-	if size := file.Get("size").Int(); size > recipe.MaxCarrierBytes {
+	if size := file.Get("size").Int(); size > carry.MaxCarrierBytes {
 		a.boxMessage("m-received", "“"+name+"” is too large ("+itoa(size>>20)+" MB) to be a Saltcast file; nothing was read.")
 		return
 	}
@@ -100,7 +101,7 @@ func (a *app) readFile(file js.Value) {
 	release := func() { done.Release(); failed.Release() }
 	done = js.FuncOf(func(_ js.Value, args []js.Value) any {
 		release()
-		c, err := recipe.ExtractCarried([]byte(args[0].String()))
+		c, err := carry.ExtractCarried([]byte(args[0].String()))
 		if err != nil {
 			a.boxMessage("m-received", "Nothing was taken from “"+name+"”: "+carryMessage(err))
 			return nil
@@ -139,13 +140,13 @@ func (a *app) saveCopy() {
 		return
 	}
 	now := js.Global().Get("Date").New()
-	c := recipe.Carried{
+	c := carry.Carried{
 		AppVersion: strings.TrimSpace(byID("app-version").Get("textContent").String()),
 		SavedAt:    UTCStamp(now.Call("toISOString").String()),
 		SentBy:     strings.TrimSpace(value(byID("carry-by"))),
 		Recipes:    pick,
 	}
-	out, err := recipe.WithCarried(page, c)
+	out, err := carry.WithCarried(page, c)
 	if err != nil {
 		a.boxMessage("m-carry", "No copy was saved: "+carryMessage(err))
 		return
@@ -176,12 +177,12 @@ func ownPage() ([]byte, error) {
 	return page, nil
 }
 
-// takeIn adds received recipes to the user's own list (core/recipe.TakeIn).
+// takeIn adds received recipes to the user's own list (core/carry.TakeIn).
 func (a *app) takeIn(rs []recipe.Recipe) {
 	if len(rs) == 0 {
 		return
 	}
-	all, added, same := recipe.TakeIn(a.shelf.Recipes, rs, localDate(js.Global().Get("Date").New()))
+	all, added, same := carry.TakeIn(a.shelf.Recipes, rs, localDate(js.Global().Get("Date").New()))
 	next := Shelf{Recipes: all}
 	if !a.store.set(keyShelf, string(next.Encode())) {
 		a.boxMessage("m-received", "Nothing was taken: this browser does not let the page keep data (private window or storage full).")

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"saltcast/web/carry"
 	"strings"
 
 	"saltcast/core/recipe"
@@ -9,7 +10,7 @@ import (
 // The words of the carried-recipes screens, kept apart from the DOM so host tests read them.
 
 // CarriedNote is the line shown on opening a copy that carries recipes.
-func CarriedNote(c recipe.Carried) string {
+func CarriedNote(c carry.Carried) string {
 	s := "This copy of Saltcast carries " + plural(len(c.Recipes), "recipe")
 	if c.SentBy != "" {
 		s += " from " + c.SentBy
@@ -18,7 +19,7 @@ func CarriedNote(c recipe.Carried) string {
 }
 
 // FromLine says where received recipes come from.
-func FromLine(c recipe.Carried, source string) string {
+func FromLine(c carry.Carried, source string) string {
 	var b strings.Builder
 	b.WriteString(plural(len(c.Recipes), "recipe"))
 	if source == "" || source == "this copy" {

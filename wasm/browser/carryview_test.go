@@ -1,6 +1,7 @@
 package main
 
 import (
+	"saltcast/web/carry"
 	"strings"
 	"testing"
 
@@ -9,12 +10,12 @@ import (
 
 func TestCarryWords(t *testing.T) {
 	rs := []recipe.Recipe{{Name: "a"}, {Name: "b"}}
-	sealed := recipe.Carried{SentBy: "Ana", SavedAt: "2026-12-01T09:30:00Z", AppVersion: "v1.2", Recipes: rs, Sealed: true}
+	sealed := carry.Carried{SentBy: "Ana", SavedAt: "2026-12-01T09:30:00Z", AppVersion: "v1.2", Recipes: rs, Sealed: true}
 	for _, tc := range []struct{ got, want string }{
 		{CarriedNote(sealed), "This copy of Saltcast carries 2 recipes from Ana. They are kept apart from your own until you take them in."},
-		{CarriedNote(recipe.Carried{Recipes: rs[:1]}), "This copy of Saltcast carries 1 recipe. They are kept apart from your own until you take them in."},
+		{CarriedNote(carry.Carried{Recipes: rs[:1]}), "This copy of Saltcast carries 1 recipe. They are kept apart from your own until you take them in."},
 		{FromLine(sealed, "this copy"), "2 recipes carried by this copy, sent by Ana, saved 2026-12-01 09:30 UTC with Saltcast v1.2."},
-		{FromLine(recipe.Carried{Recipes: rs}, "x.json"), "2 recipes from the file “x.json” (a recipe export: no sender or checksum recorded)."},
+		{FromLine(carry.Carried{Recipes: rs}, "x.json"), "2 recipes from the file “x.json” (a recipe export: no sender or checksum recorded)."},
 		{UTCStamp("2026-12-01T09:30:00.123Z"), "2026-12-01T09:30:00Z"},
 		{UTCStamp("+012026-12-01T09:30:00.123Z"), ""},
 		{YMD(2026, 3, 7), "2026-03-07"},
@@ -29,7 +30,7 @@ func TestCarryWords(t *testing.T) {
 		}
 	}
 	if stamp := UTCStamp("2026-12-01T09:30:00.123Z"); stamp != "" {
-		if _, err := recipe.EncodeCarried(recipe.Carried{SavedAt: stamp}); err != nil {
+		if _, err := carry.EncodeCarried(carry.Carried{SavedAt: stamp}); err != nil {
 			t.Errorf("UTCStamp gives %q, which the carried format refuses: %v", stamp, err)
 		}
 	}
@@ -38,7 +39,7 @@ func TestCarryWords(t *testing.T) {
 			t.Errorf("atoi(%q) = %d, want %d", s, got, want)
 		}
 	}
-	_, err := recipe.ExtractCarried([]byte("<p>x</p>"))
+	_, err := carry.ExtractCarried([]byte("<p>x</p>"))
 	if m := carryMessage(err); !strings.HasPrefix(m, "This file carries no") || !strings.HasSuffix(m, ".") {
 		t.Errorf("carryMessage = %q", m)
 	}

@@ -9,9 +9,9 @@ import (
 
 	"honnef.co/go/js/dom/v2"
 
-	"saltcast/core/chart"
 	"saltcast/core/gas"
 	"saltcast/core/unit"
+	"saltcast/web/chart"
 )
 
 // The dissolved-gas screen: O2 saturation for the day's water, % saturation of a reading,
@@ -236,7 +236,7 @@ func (a *app) gasCompute() error {
 			svg = s
 		}
 	}
-	setHTML(byID("gas-chart"), svg) // SVG from core/chart, text escaped there
+	setHTML(byID("gas-chart"), svg) // SVG from web/chart, text escaped there
 	a.gasTable(tbl)
 	if !mentionsSDS(cautions) {
 		cautions = append(cautions, gasCaution)

@@ -2,10 +2,10 @@
 
 // Command browser is the bench app's program in the page (GOOS=js GOARCH=wasm). It is glue
 // only: it reads the inputs, asks the core (core/recipe, core/compound, core/gas) and shows
-// the answers, the chart (core/chart) and the batch sheet. No physics lives here.
+// the answers, the chart (web/chart) and the batch sheet. No physics lives here.
 //
 // User text never becomes markup: names, notes and compound names are set with
-// textContent; the only markup inserted is the SVG that core/chart renders, which escapes
+// textContent; the only markup inserted is the SVG that web/chart renders, which escapes
 // every piece of text it holds.
 package main
 

@@ -56,7 +56,7 @@ func closest(el js.Value, sel string) js.Value {
 
 func setText(el js.Value, s string) { el.Set("textContent", s) }
 
-// setHTML inserts markup the program made itself (SVG from core/chart); never user text.
+// setHTML inserts markup the program made itself (SVG from web/chart); never user text.
 func setHTML(el js.Value, s string) { el.Set("innerHTML", s) }
 
 // value is the current value of an input, select or textarea.

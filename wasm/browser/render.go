@@ -6,12 +6,12 @@ import (
 	"strings"
 	"syscall/js"
 
-	"saltcast/core/chart"
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
 	"saltcast/core/solubility"
 	"saltcast/core/unit"
 	"saltcast/core/wire"
+	"saltcast/web/chart"
 )
 
 // bindTiles finds the element of each Figure on the batch screen, making a small tile in
@@ -91,7 +91,7 @@ func (a *app) render() {
 	if a.changed("chart-input", a.chartKey(r)) {
 		a.lastSVG = a.chartSVG(r)
 		if a.changed("chart", a.lastSVG) {
-			setHTML(byID("chart"), a.lastSVG) // SVG from core/chart: every text in it is escaped
+			setHTML(byID("chart"), a.lastSVG) // SVG from web/chart: every text in it is escaped
 		}
 	}
 	a.renderProgramme()

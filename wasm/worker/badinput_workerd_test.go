@@ -12,14 +12,14 @@ import (
 	"testing"
 	"time"
 
-	"saltcast/core/service"
-	"saltcast/internal/badinput"
+	"saltcast/web/api"
+	"saltcast/web/badinput"
 )
 
 // catalogueCases turns the shared bad-input catalogue (testdata/bad-inputs.txt) into API
-// cases: a refusal is a 4xx answer whose body is core/service's error JSON naming the field
+// cases: a refusal is a 4xx answer whose body is web/api's error JSON naming the field
 // (413 for a body over the limit, which the glue answers itself); a warning or an accepted
-// input is a 200 with core/service's answer. Rows for typed text (parse) have no route.
+// input is a 200 with web/api's answer. Rows for typed text (parse) have no route.
 func catalogueCases(t testing.TB) []apiCase {
 	t.Helper()
 	rows, err := badinput.Load()
@@ -42,10 +42,10 @@ func catalogueCases(t testing.TB) []apiCase {
 				t.Fatalf("line %d: %v", r.Line, err)
 			}
 			c.path += "?" + r.Input
-			call := map[string]func(service.Params) ([]byte, error){
-				badinput.RouteSolubility: service.Solubility,
-				badinput.RouteGas:        service.Gas,
-				badinput.RouteOutgas:     service.Outgas,
+			call := map[string]func(api.Params) ([]byte, error){
+				badinput.RouteSolubility: api.Solubility,
+				badinput.RouteGas:        api.Gas,
+				badinput.RouteOutgas:     api.Outgas,
 			}[r.Route]
 			c.want = params(call, p)
 		}

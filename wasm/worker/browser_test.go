@@ -20,7 +20,7 @@ func TestWorkerdPageStartsUnderCSP(t *testing.T) {
 	exe, err := exec.LookPath("chromium")
 	if err != nil {
 		if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-			t.Fatal("chromium is not installed; run bash scripts/deps-chromium.sh")
+			t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh")
 		}
 		t.Skip("chromium is not installed; run `make test`")
 	}

@@ -10,14 +10,14 @@ import (
 	"strings"
 	"testing"
 
-	"saltcast/core/service"
+	"saltcast/web/api"
 )
 
 // apiCase is one request and what the answer must be. The same table runs against the
 // handler in-process (handler_test.go) and against the built worker under workerd
 // (workerd_test.go).
 //
-// The expected bodies are not written here: they are what core/service (the functions the
+// The expected bodies are not written here: they are what web/api (the functions the
 // CLI prints) returns for the same input, so the test checks that the worker adds nothing,
 // drops nothing and maps each error to the right status.
 type apiCase struct {
@@ -27,7 +27,7 @@ type apiCase struct {
 	contentType string // "" sends none
 	body        []byte
 	status      int
-	// want returns what core/service answers for this input; nil for answers the glue
+	// want returns what web/api answers for this input; nil for answers the glue
 	// makes itself (404, 405, 413, 415), whose shape alone is checked.
 	want  func() ([]byte, error)
 	field string // the "field" of an error answer, when want is nil or to double-check
@@ -45,10 +45,10 @@ func testdataFile(t testing.TB, name string) []byte {
 }
 
 func plan(body []byte) func() ([]byte, error) {
-	return func() ([]byte, error) { return service.Plan(body) }
+	return func() ([]byte, error) { return api.Plan(body) }
 }
 
-func params(call func(service.Params) ([]byte, error), p service.Params) func() ([]byte, error) {
+func params(call func(api.Params) ([]byte, error), p api.Params) func() ([]byte, error) {
 	return func() ([]byte, error) { return call(p) }
 }
 
@@ -82,63 +82,63 @@ func apiCases(t testing.TB) []apiCase {
 
 		// solubility
 		{name: "solubility KNO3", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=20", status: 200,
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "20"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "20"})},
 		{name: "solubility by name, decimal comma", method: "GET", path: "/api/v1/solubility?solute=potassium+nitrate&temp_C=20%2C5", status: 200,
-			want: params(service.Solubility, service.Params{"solute": "potassium nitrate", "temp_C": "20,5"})},
+			want: params(api.Solubility, api.Params{"solute": "potassium nitrate", "temp_C": "20,5"})},
 		{name: "solubility hydrate formula", method: "GET", path: "/api/v1/solubility?solute=CuSO4.5H2O&temp_C=40", status: 200,
-			want: params(service.Solubility, service.Params{"solute": "CuSO4.5H2O", "temp_C": "40"})},
+			want: params(api.Solubility, api.Params{"solute": "CuSO4.5H2O", "temp_C": "40"})},
 		{name: "solubility unknown solute", method: "GET", path: "/api/v1/solubility?solute=unobtainium&temp_C=20", status: 400, field: "solute",
-			want: params(service.Solubility, service.Params{"solute": "unobtainium", "temp_C": "20"})},
+			want: params(api.Solubility, api.Params{"solute": "unobtainium", "temp_C": "20"})},
 		{name: "solubility NaN", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=NaN", status: 400, field: "temp_C",
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "NaN"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "NaN"})},
 		{name: "solubility Inf", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=-Inf", status: 400, field: "temp_C",
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "-Inf"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "-Inf"})},
 		{name: "solubility far outside range", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=500", status: 400, field: "temp_C",
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "500"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "500"})},
 		{name: "solubility thousands separator", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=1.234%2C5", status: 400, field: "temp_C",
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "1.234,5"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "1.234,5"})},
 		{name: "solubility missing temp", method: "GET", path: "/api/v1/solubility?solute=KNO3", status: 400, field: "temp_C",
-			want: params(service.Solubility, service.Params{"solute": "KNO3"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3"})},
 		{name: "solubility unknown key", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=20&unit=F", status: 400, field: "unit",
-			want: params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "20", "unit": "F"})},
+			want: params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "20", "unit": "F"})},
 		{name: "solubility key twice", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=20&temp_C=30", status: 400, field: "temp_C"},
 		{name: "solubility bad escape", method: "GET", path: "/api/v1/solubility?solute=KN%zz&temp_C=20", status: 400, field: "solute"},
 		{name: "solubility POST", method: "POST", path: "/api/v1/solubility?solute=KNO3&temp_C=20", contentType: js, body: []byte(`{}`), status: 405, allow: "GET, HEAD, OPTIONS"},
 
 		// gas
 		{name: "gas O2", method: "GET", path: "/api/v1/gas?gas=O2&temp_C=20", status: 200,
-			want: params(service.Gas, service.Params{"gas": "O2", "temp_C": "20"})},
+			want: params(api.Gas, api.Params{"gas": "O2", "temp_C": "20"})},
 		{name: "gas seawater at altitude", method: "GET", path: "/api/v1/gas?temp_C=12%2C5&salinity=35&altitude_m=1500&method=garcia-gordon&measured_mg_per_L=7.1", status: 200,
-			want: params(service.Gas, service.Params{"temp_C": "12,5", "salinity": "35", "altitude_m": "1500", "method": "garcia-gordon", "measured_mg_per_L": "7.1"})},
+			want: params(api.Gas, api.Params{"temp_C": "12,5", "salinity": "35", "altitude_m": "1500", "method": "garcia-gordon", "measured_mg_per_L": "7.1"})},
 		{name: "gas POST", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"gas":"CO2","temp_C":25,"co2_ppm":"420"}`), status: 200,
-			want: params(service.Gas, service.Params{"gas": "CO2", "temp_C": "25", "co2_ppm": "420"})},
+			want: params(api.Gas, api.Params{"gas": "CO2", "temp_C": "25", "co2_ppm": "420"})},
 		{name: "gas POST number as written", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"temp_C":2.50e1}`), status: 200,
-			want: params(service.Gas, service.Params{"temp_C": "2.50e1"})},
+			want: params(api.Gas, api.Params{"temp_C": "2.50e1"})},
 		{name: "gas POST unknown key", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"temp_C":20,"depth_m":3}`), status: 400, field: "depth_m",
-			want: params(service.Gas, service.Params{"temp_C": "20", "depth_m": "3"})},
+			want: params(api.Gas, api.Params{"temp_C": "20", "depth_m": "3"})},
 		{name: "gas POST nested value", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"temp_C":[20]}`), status: 400, field: "temp_C"},
 		{name: "gas POST not an object", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`"O2"`), status: 400, field: "body"},
 		{name: "gas POST malformed", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"temp_C":20`), status: 400},
 		{name: "gas POST duplicate key", method: "POST", path: "/api/v1/gas", contentType: js, body: []byte(`{"temp_C":20,"temp_C":30}`), status: 400},
 		{name: "gas POST oversize", method: "POST", path: "/api/v1/gas", contentType: js, body: oversize, status: 413},
 		{name: "gas unknown gas", method: "GET", path: "/api/v1/gas?gas=Xe&temp_C=20", status: 400, field: "gas",
-			want: params(service.Gas, service.Params{"gas": "Xe", "temp_C": "20"})},
+			want: params(api.Gas, api.Params{"gas": "Xe", "temp_C": "20"})},
 		{name: "gas text temperature", method: "GET", path: "/api/v1/gas?temp_C=warm", status: 400, field: "temp_C",
-			want: params(service.Gas, service.Params{"temp_C": "warm"})},
+			want: params(api.Gas, api.Params{"temp_C": "warm"})},
 		{name: "gas DELETE", method: "DELETE", path: "/api/v1/gas?temp_C=20", status: 405, allow: "GET, HEAD, POST, OPTIONS"},
 
 		// outgassing and the field table
 		{name: "outgas", method: "GET", path: "/api/v1/gas/outgas?from_C=15&to_C=80", status: 200,
-			want: params(service.Outgas, service.Params{"from_C": "15", "to_C": "80"})},
+			want: params(api.Outgas, api.Params{"from_C": "15", "to_C": "80"})},
 		{name: "outgas salinity refused", method: "GET", path: "/api/v1/gas/outgas?from_C=15&to_C=80&salinity=35", status: 400, field: "salinity",
-			want: params(service.Outgas, service.Params{"from_C": "15", "to_C": "80", "salinity": "35"})},
+			want: params(api.Outgas, api.Params{"from_C": "15", "to_C": "80", "salinity": "35"})},
 		{name: "outgas missing to", method: "GET", path: "/api/v1/gas/outgas?from_C=15", status: 400, field: "to_C",
-			want: params(service.Outgas, service.Params{"from_C": "15"})},
+			want: params(api.Outgas, api.Params{"from_C": "15"})},
 		{name: "gas table", method: "GET", path: "/api/v1/gas/table?temp_to_C=10&values=101.325%3B90", status: 200,
-			want: params(service.GasTable, service.Params{"temp_to_C": "10", "values": "101.325;90"})},
+			want: params(api.GasTable, api.Params{"temp_to_C": "10", "values": "101.325;90"})},
 
 		// library, description, page, unknown addresses
-		{name: "compounds", method: "GET", path: "/api/v1/compounds", status: 200, want: func() ([]byte, error) { return service.Compounds(), nil }},
+		{name: "compounds", method: "GET", path: "/api/v1/compounds", status: 200, want: func() ([]byte, error) { return api.Compounds(), nil }},
 		{name: "compounds PUT", method: "PUT", path: "/api/v1/compounds", contentType: js, body: []byte(`{}`), status: 405, allow: "GET, HEAD, OPTIONS"},
 		{name: "openapi", method: "GET", path: "/api/v1/openapi.json", status: 200, want: func() ([]byte, error) { return openAPI, nil }},
 		{name: "unknown address", method: "GET", path: "/api/v1/nothing", status: 404},
@@ -193,13 +193,13 @@ func (c apiCase) check(t *testing.T, base string, do func(*http.Request) (*http.
 	if c.want != nil {
 		want, err := c.want()
 		if err != nil {
-			if !service.IsInputError(err) {
-				t.Fatalf("%s %s: the case expects an input error, but core/service says %v", c.method, c.path, err)
+			if !api.IsInputError(err) {
+				t.Fatalf("%s %s: the case expects an input error, but web/api says %v", c.method, c.path, err)
 			}
-			want = service.ErrorJSON(err)
+			want = api.ErrorJSON(err)
 		}
 		if !bytes.Equal(got, want) {
-			t.Errorf("%s %s: body differs from core/service's\n got %.400s\nwant %.400s", c.method, c.path, got, want)
+			t.Errorf("%s %s: body differs from web/api's\n got %.400s\nwant %.400s", c.method, c.path, got, want)
 		}
 	}
 	if c.status >= 400 {

@@ -1,7 +1,7 @@
 // Command worker is Saltcast's shared lab service on Cloudflare Workers: HTTP glue around
-// core/service, so the worker, the CLI and the browser give byte-identical answers.
+// web/api, so the worker, the CLI and the browser give byte-identical answers.
 //
-// Built with GOOS=js GOARCH=wasm by scripts/build-worker.sh, it is started by glue/worker.mjs,
+// Built with GOOS=js GOARCH=wasm by wasm/worker/build.sh, it is started by glue/worker.mjs,
 // which keeps one Go program per isolate. Built for the host it serves the same handler with
 // net/http for debugging (`go run ./wasm/worker`, 127.0.0.1:8788).
 //

@@ -8,9 +8,9 @@ import (
 	"strings"
 	"unicode/utf8"
 
-	"saltcast/core/service"
 	"saltcast/core/unit"
 	"saltcast/core/wire"
+	"saltcast/web/api"
 )
 
 // MaxBodyBytes is the largest request body the API reads; a larger one is answered 413.
@@ -63,7 +63,7 @@ func StaticType(path string) string {
 // data, for which the policy changes nothing.
 const staticCSP = "default-src 'none'; connect-src 'self'; frame-ancestors 'none'"
 
-// handler routes the HTTP API onto core/service. It holds no state between requests.
+// handler routes the HTTP API onto web/api. It holds no state between requests.
 type handler struct {
 	opt       Options
 	page      []byte
@@ -92,11 +92,11 @@ func NewHandler(opt Options) http.Handler {
 	}
 	h.routes = map[string]route{
 		"/api/v1/plan":         {methods: "POST", serve: h.plan},
-		"/api/v1/solubility":   {methods: "GET, HEAD", serve: h.query(service.Solubility)},
+		"/api/v1/solubility":   {methods: "GET, HEAD", serve: h.query(api.Solubility)},
 		"/api/v1/gas":          {methods: "GET, HEAD, POST", serve: h.gas},
-		"/api/v1/gas/outgas":   {methods: "GET, HEAD", serve: h.query(service.Outgas)},
-		"/api/v1/gas/table":    {methods: "GET, HEAD", serve: h.query(service.GasTable)},
-		"/api/v1/compounds":    {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return service.Compounds(), nil }},
+		"/api/v1/gas/outgas":   {methods: "GET, HEAD", serve: h.query(api.Outgas)},
+		"/api/v1/gas/table":    {methods: "GET, HEAD", serve: h.query(api.GasTable)},
+		"/api/v1/compounds":    {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return api.Compounds(), nil }},
 		"/api/v1/openapi.json": {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return h.openapi, nil }},
 	}
 	return h
@@ -111,7 +111,7 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 			}
 			println("saltcast worker: panic serving", r.Method, r.URL.Path+":", panicText(v))
 			writeJSON(w, http.StatusInternalServerError,
-				service.ErrorJSON(errors.New("internal error in the Saltcast worker; the request was not the cause")))
+				api.ErrorJSON(errors.New("internal error in the Saltcast worker; the request was not the cause")))
 		}
 	}()
 	hdr := w.Header()
@@ -227,11 +227,11 @@ func (h *handler) plan(r *http.Request) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	return service.Plan(body)
+	return api.Plan(body)
 }
 
 // query adapts a service call that takes the query string's parameters.
-func (h *handler) query(call func(service.Params) ([]byte, error)) func(*http.Request) ([]byte, error) {
+func (h *handler) query(call func(api.Params) ([]byte, error)) func(*http.Request) ([]byte, error) {
 	return func(r *http.Request) ([]byte, error) {
 		p, err := parseQuery(r.URL.RawQuery)
 		if err != nil {
@@ -244,7 +244,7 @@ func (h *handler) query(call func(service.Params) ([]byte, error)) func(*http.Re
 // gas answers GET /api/v1/gas?… and POST /api/v1/gas with the same keys in a JSON object.
 func (h *handler) gas(r *http.Request) ([]byte, error) {
 	if r.Method != http.MethodPost {
-		return h.query(service.Gas)(r)
+		return h.query(api.Gas)(r)
 	}
 	body, err := readBody(r)
 	if err != nil {
@@ -254,7 +254,7 @@ func (h *handler) gas(r *http.Request) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	return service.Gas(p)
+	return api.Gas(p)
 }
 
 // maxDrainBytes bounds the bodies that are read before a 413 rather than refused on their
@@ -295,8 +295,8 @@ func readBody(r *http.Request) ([]byte, error) {
 }
 
 // parseQuery decodes a query string strictly: every key once, valid percent-escapes.
-func parseQuery(raw string) (service.Params, error) {
-	p := service.Params{}
+func parseQuery(raw string) (api.Params, error) {
+	p := api.Params{}
 	for raw != "" {
 		var pair string
 		pair, raw, _ = strings.Cut(raw, "&")
@@ -368,7 +368,7 @@ func unhex(c byte) int {
 }
 
 // bodyParams reads a JSON object of the query's keys; values are numbers or strings.
-func bodyParams(body []byte) (service.Params, error) {
+func bodyParams(body []byte) (api.Params, error) {
 	v, err := wire.DecodeLimits(body, wire.Limits{MaxBytes: MaxBodyBytes, MaxDepth: 2})
 	if err != nil {
 		return nil, err
@@ -376,7 +376,7 @@ func bodyParams(body []byte) (service.Params, error) {
 	if v.Kind != wire.Object {
 		return nil, &unit.FieldError{Field: "body", Value: v.Kind.String(), Allowed: "a JSON object of parameters"}
 	}
-	p := make(service.Params, len(v.Members))
+	p := make(api.Params, len(v.Members))
 	for _, m := range v.Members {
 		switch m.Value.Kind {
 		case wire.Number, wire.String:
@@ -388,7 +388,7 @@ func bodyParams(body []byte) (service.Params, error) {
 	return p, nil
 }
 
-// statusOf maps an error from the glue or core/service to an HTTP status. Only an error that
+// statusOf maps an error from the glue or web/api to an HTTP status. Only an error that
 // is neither the user's (IsInputError) nor the glue's own is a 500.
 func statusOf(err error) int {
 	var syn *wire.SyntaxError
@@ -397,7 +397,7 @@ func statusOf(err error) int {
 		return http.StatusRequestEntityTooLarge
 	case errors.Is(err, errMediaType):
 		return http.StatusUnsupportedMediaType
-	case errors.As(err, &syn), service.IsInputError(err):
+	case errors.As(err, &syn), api.IsInputError(err):
 		return http.StatusBadRequest
 	}
 	var fe *unit.FieldError
@@ -409,7 +409,7 @@ func statusOf(err error) int {
 
 func writeError(w http.ResponseWriter, status int, err error) {
 	w.Header().Set("Cache-Control", "no-store")
-	writeJSON(w, status, service.ErrorJSON(err))
+	writeJSON(w, status, api.ErrorJSON(err))
 }
 
 func writeJSON(w http.ResponseWriter, status int, body []byte) {

@@ -10,7 +10,7 @@ import (
 	"sync"
 	"testing"
 
-	"saltcast/core/service"
+	"saltcast/web/api"
 )
 
 // One Go program serves every request of an isolate (glue/worker.mjs), so whatever a request
@@ -85,7 +85,7 @@ func getStats(t *testing.T, s *workerdServer) goStats {
 // When the Go program is gone, the next request starts a new one and is answered in full.
 func TestWorkerdRestartsAGoneProgram(t *testing.T) {
 	s := startProbed(t)
-	want, err := service.Solubility(service.Params{"solute": "KNO3", "temp_C": "20"})
+	want, err := api.Solubility(api.Params{"solute": "KNO3", "temp_C": "20"})
 	if err != nil {
 		t.Fatal(err)
 	}

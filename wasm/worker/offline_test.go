@@ -8,6 +8,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"saltcast/web/carry"
 	"strconv"
 	"strings"
 	"testing"
@@ -16,8 +17,6 @@ import (
 	cdpbrowser "github.com/chromedp/cdproto/browser"
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/chromedp"
-
-	"saltcast/core/recipe"
 )
 
 // The installable copy (issue 7): the worker serves a service worker, a manifest and icons;
@@ -90,7 +89,7 @@ func offlineBrowser(t *testing.T) context.Context {
 	exe, err := exec.LookPath("chromium")
 	if err != nil {
 		if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-			t.Fatal("chromium is not installed; run bash scripts/deps-chromium.sh")
+			t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh")
 		}
 		t.Skip("chromium is not installed; run `make test`")
 	}
@@ -243,11 +242,11 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	c, err := recipe.ExtractCarried(copyPage)
+	c, err := carry.ExtractCarried(copyPage)
 	if err != nil {
 		t.Fatalf("the copy saved from the served app: %v", err)
 	}
-	if want, _ := recipe.WithCarried(file, c); string(copyPage) != string(want) || len(c.Recipes) != 1 {
+	if want, _ := carry.WithCarried(file, c); string(copyPage) != string(want) || len(c.Recipes) != 1 {
 		t.Errorf("the copy saved from the served app (%d B, %d recipes) is not dist/saltcast.html with its recipe", len(copyPage), len(c.Recipes))
 	}
 	for _, never := range []string{"serviceWorker", "manifest.webmanifest"} {

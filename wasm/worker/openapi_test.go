@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"saltcast/core/service"
+	"saltcast/web/api"
 )
 
 // openAPIDoc is the part of openapi.json these tests read.
@@ -82,7 +82,7 @@ func TestOpenAPIDescribesEveryRoute(t *testing.T) {
 	}
 }
 
-// The parameters described are the ones core/service takes: each service names its keys when
+// The parameters described are the ones web/api takes: each service names its keys when
 // given one it does not know, and the description must list exactly those.
 func TestOpenAPIParametersMatchService(t *testing.T) {
 	doc := readOpenAPI(t)
@@ -105,8 +105,8 @@ func TestOpenAPIParametersMatchService(t *testing.T) {
 		slices.Sort(keys)
 		return keys
 	}
-	query := func(call func(service.Params) ([]byte, error)) func() ([]byte, error) {
-		return func() ([]byte, error) { return call(service.Params{bogus: "1"}) }
+	query := func(call func(api.Params) ([]byte, error)) func() ([]byte, error) {
+		return func() ([]byte, error) { return call(api.Params{bogus: "1"}) }
 	}
 	described := func(path, method string) []string {
 		var names []string
@@ -132,17 +132,17 @@ func TestOpenAPIParametersMatchService(t *testing.T) {
 		what      string
 		got, want []string
 	}{
-		{"GET /api/v1/solubility", described("/api/v1/solubility", "get"), known(query(service.Solubility))},
-		{"GET /api/v1/gas", described("/api/v1/gas", "get"), known(query(service.Gas))},
-		{"POST /api/v1/gas", schema("GasRequest"), known(query(service.Gas))},
-		{"GET /api/v1/gas/outgas", described("/api/v1/gas/outgas", "get"), known(query(service.Outgas))},
-		{"GET /api/v1/gas/table", described("/api/v1/gas/table", "get"), known(query(service.GasTable))},
+		{"GET /api/v1/solubility", described("/api/v1/solubility", "get"), known(query(api.Solubility))},
+		{"GET /api/v1/gas", described("/api/v1/gas", "get"), known(query(api.Gas))},
+		{"POST /api/v1/gas", schema("GasRequest"), known(query(api.Gas))},
+		{"GET /api/v1/gas/outgas", described("/api/v1/gas/outgas", "get"), known(query(api.Outgas))},
+		{"GET /api/v1/gas/table", described("/api/v1/gas/table", "get"), known(query(api.GasTable))},
 		{"POST /api/v1/plan", schema("Recipe"), known(func() ([]byte, error) {
-			return service.Plan([]byte(`{"` + bogus + `":1,"dissolve_temp_C":20}`))
+			return api.Plan([]byte(`{"` + bogus + `":1,"dissolve_temp_C":20}`))
 		})},
 	} {
 		if !slices.Equal(tt.got, tt.want) {
-			t.Errorf("%s: openapi.json lists %v, core/service takes %v", tt.what, tt.got, tt.want)
+			t.Errorf("%s: openapi.json lists %v, web/api takes %v", tt.what, tt.got, tt.want)
 		}
 	}
 }

@@ -17,7 +17,7 @@ import (
 	"testing"
 	"time"
 
-	"saltcast/core/service"
+	"saltcast/web/api"
 )
 
 // These tests run the built worker (build/worker, from `make worker`) under workerd (from
@@ -69,14 +69,14 @@ func workerdBinary() (string, error) {
 	}
 	arch := map[string]string{"amd64": "64", "arm64": "arm64"}[runtime.GOARCH]
 	for _, p := range []string{
-		repoPath("node_modules", "@cloudflare", "workerd-"+runtime.GOOS+"-"+arch, "bin", "workerd"),
-		repoPath("node_modules", ".bin", "workerd"),
+		repoPath("wasm", "worker", "node_modules", "@cloudflare", "workerd-"+runtime.GOOS+"-"+arch, "bin", "workerd"),
+		repoPath("wasm", "worker", "node_modules", ".bin", "workerd"),
 	} {
 		if fi, err := os.Stat(p); err == nil && !fi.IsDir() {
 			return filepath.Abs(p)
 		}
 	}
-	return "", errors.New("no workerd in node_modules")
+	return "", errors.New("no workerd in wasm/worker/node_modules")
 }
 
 // workerdServer is one workerd process serving the built worker.
@@ -300,15 +300,15 @@ func TestWorkerdConcurrent(t *testing.T) {
 	calls := []call{
 		{"POST", "/api/v1/plan", kno3, plan(kno3)},
 		{"POST", "/api/v1/plan", cuso4, plan(cuso4)},
-		{"GET", "/api/v1/solubility?solute=KNO3&temp_C=35", nil, params(service.Solubility, service.Params{"solute": "KNO3", "temp_C": "35"})},
-		{"GET", "/api/v1/gas?temp_C=8", nil, params(service.Gas, service.Params{"temp_C": "8"})},
-		{"GET", "/api/v1/solubility?solute=nope&temp_C=35", nil, params(service.Solubility, service.Params{"solute": "nope", "temp_C": "35"})},
+		{"GET", "/api/v1/solubility?solute=KNO3&temp_C=35", nil, params(api.Solubility, api.Params{"solute": "KNO3", "temp_C": "35"})},
+		{"GET", "/api/v1/gas?temp_C=8", nil, params(api.Gas, api.Params{"temp_C": "8"})},
+		{"GET", "/api/v1/solubility?solute=nope&temp_C=35", nil, params(api.Solubility, api.Params{"solute": "nope", "temp_C": "35"})},
 	}
 	wants := make([][]byte, len(calls))
 	for i, c := range calls {
 		b, err := c.want()
 		if err != nil {
-			b = service.ErrorJSON(err)
+			b = api.ErrorJSON(err)
 		}
 		wants[i] = b
 	}
@@ -407,7 +407,7 @@ func TestWorkerdConcurrentFirstRequests(t *testing.T) {
 	bin := needBuild(t)
 	s := startWorkerd(t, bin, "")
 	defer s.stop()
-	want, err := service.Solubility(service.Params{"solute": "KNO3", "temp_C": "20"})
+	want, err := api.Solubility(api.Params{"solute": "KNO3", "temp_C": "20"})
 	if err != nil {
 		t.Fatal(err)
 	}

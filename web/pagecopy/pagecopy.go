@@ -19,7 +19,7 @@ import (
 	"errors"
 	"strings"
 
-	"saltcast/core/htmlscan"
+	"saltcast/web/htmlscan"
 )
 
 // Template is a page with the text of some elements replaced by place holders.

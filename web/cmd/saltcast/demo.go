@@ -1,0 +1,205 @@
+package main
+
+import (
+	"io"
+	"strings"
+	"unicode/utf8"
+
+	"saltcast/core/recipe"
+	"saltcast/core/unit"
+	"saltcast/web/api"
+)
+
+// demo plans each recipe file and prints it as a plain-text batch sheet. It stops at the
+// first file that fails, with the file named.
+func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	for i, name := range files {
+		data, err := readRecipe(name, stdin)
+		if err == nil {
+			var r recipe.Recipe
+			if r, err = recipe.Decode(data); err == nil {
+				var res recipe.Result
+				if res, err = recipe.Plan(r); err == nil {
+					if i > 0 {
+						io.WriteString(stdout, "\n")
+					}
+					io.WriteString(stdout, Sheet(res))
+					continue
+				}
+			}
+		}
+		io.WriteString(stderr, "saltcast demo: "+name+": "+err.Error()+"\n")
+		if api.IsInputError(err) {
+			return 2
+		}
+		return 1
+	}
+	return 0
+}
+
+// sheet builds aligned "label  value" lines.
+type sheet struct{ b strings.Builder }
+
+const labelWidth = 30
+
+func (s *sheet) title(t string) {
+	s.b.WriteString(t + "\n" + strings.Repeat("=", utf8.RuneCountInString(t)) + "\n")
+}
+
+func (s *sheet) section(t string) { s.b.WriteString("\n" + t + "\n") }
+
+func (s *sheet) row(label, value string) {
+	s.b.WriteString("  " + label)
+	if n := utf8.RuneCountInString(label); n < labelWidth {
+		s.b.WriteString(strings.Repeat(" ", labelWidth-n))
+	} else {
+		s.b.WriteString("  ")
+	}
+	s.b.WriteString(value + "\n")
+}
+
+func (s *sheet) bullet(t string) { s.b.WriteString("  - " + t + "\n") }
+
+func n(v float64) string  { return unit.FormatCompact(v, 4) }
+func g(v float64) string  { return unit.FormatCompact(v, 4) + " g" }
+func tc(v float64) string { return unit.FormatCompact(v, 3) + " °C" }
+
+// signed writes v with an explicit + for positive numbers.
+func signed(v float64) string {
+	s := n(v)
+	if v > 0 {
+		s = "+" + s
+	}
+	return s
+}
+
+// Sheet renders a plan as a readable batch sheet (plain text, fixed layout).
+func Sheet(res recipe.Result) string {
+	var s sheet
+	r := res.Result
+	name := res.Recipe.Name
+	if name == "" {
+		name = "Batch of " + r.SoluteID
+	}
+	s.title(name)
+	if res.Recipe.Notes != "" {
+		s.b.WriteString(res.Recipe.Notes + "\n")
+	}
+
+	s.section("Charge")
+	s.row("solute", r.SoluteID+" ("+r.SoluteName+")")
+	form := r.ChargedForm
+	if r.PurityPct < 100 {
+		form += ", " + n(r.PurityPct) + " % pure"
+	}
+	s.row("weigh", g(r.ChargeG)+" of "+form)
+	s.row("into water", g(r.WaterG))
+	if r.HydrateWaterG > 0 {
+		s.row("hydrate water joins it", g(r.HydrateWaterG)+" (total "+g(r.TotalWaterG)+")")
+	}
+	if r.ImpurityG > 0 {
+		s.row("insoluble impurity", g(r.ImpurityG)+" (taken as inert: it is filtered off with any solid)")
+	}
+	s.row("dissolve at", tc(r.DissolveTempC)+", "+n(r.SaturationPct)+" % of saturation")
+	s.row("concentration", n(r.ConcentrationG100)+" g per 100 g water (saturated: "+n(r.SolubilityAtStart)+")")
+	if r.MinWaterG > 0 {
+		s.row("least water for this charge", g(r.MinWaterG))
+	}
+	if r.HasClearDown {
+		s.row("sized to stay clear down to", tc(r.ClearDownToC))
+	}
+	if r.HasOnset {
+		s.row("saturation temperature", tc(r.SaturationTempC)+" (crystals can form beyond it)")
+	} else {
+		s.row("saturation temperature", "none: "+r.OnsetNote)
+	}
+
+	if r.HasTarget {
+		s.section("At " + tc(r.TargetC))
+		if r.EvaporatedWaterG > 0 {
+			s.row("water evaporated", g(r.EvaporatedWaterG))
+		}
+		if r.CrystalsG > 0 {
+			s.row("crystals", g(r.CrystalsG)+" of "+r.CrystalPhase)
+			s.row("yield (anhydrous basis)", n(r.YieldPct)+" %")
+		} else {
+			s.row("crystals", "none: the liquor stays unsaturated ("+n(r.LiquorG100)+" of "+n(r.SolubilityAtTargetG100)+" g per 100 g water)")
+		}
+		s.row("mother liquor", g(r.LiquorG)+", "+n(r.LiquorG100)+" g per 100 g water")
+		for _, p := range r.PhaseChanges {
+			s.row("phase change", p.From+" → "+p.To+" at "+tc(p.TempC))
+		}
+	}
+
+	if len(r.Supersaturation) > 0 {
+		s.section("Unseeded cooling: supersaturation")
+		s.row("temperature", "S = c/c*    excess, g per 100 g water")
+		for _, p := range r.Supersaturation {
+			s.row(tc(p.TempC), pad(unit.FormatNumber(p.Ratio, 4), 12)+n(p.DeltaG))
+		}
+		if r.HasMetastable {
+			s.row("expected nucleation near", tc(r.NucleationC)+" (metastable zone "+n(r.MetastableWidthK)+" K)")
+		}
+	}
+	if r.HasSeedHint {
+		s.section("Seeding")
+		s.row("seed at", tc(r.SeedHintC)+" with "+g(r.SeedLowG)+" to "+g(r.SeedHighG)+" of "+r.SeedPhase)
+		s.row("rule", r.SeedRule)
+	}
+	if len(r.Programme) > 0 {
+		s.section("Cooling programme, " + tc(r.ProgrammeFromC) + " → " + tc(r.ProgrammeToC))
+		s.row("time, min", pad("linear", 12)+"cubic (Mullin & Nývlt)")
+		for _, p := range r.Programme {
+			s.row(n(p.TimeMin), pad(tc(p.LinearC), 12)+tc(p.CubicC))
+		}
+	}
+
+	s.section("Heat")
+	s.row("batch heat capacity", n(r.HeatCapacityKJPerK)+" kJ/K ("+r.HeatCapacityModel+")")
+	if r.HasDissolutionHeat {
+		s.row("dissolving absorbs", n(r.DissolutionHeatKJ)+" kJ (insulated: "+signed(r.DissolutionTempChangeK)+" K)")
+	}
+	if r.HasTarget {
+		s.row("crystallization releases", n(r.CrystallizationHeatKJ)+" kJ")
+		if r.EnthalpyBasis != "" && r.CrystalsG > 0 {
+			s.row("enthalpy used", r.EnthalpyBasis)
+			if r.HasApparent {
+				s.row("apparent (curve slope)", n(r.ApparentEnthalpyKJPerMol)+" kJ/mol")
+			}
+		}
+		s.row("sensible heat to remove", n(r.SensibleHeatKJ)+" kJ")
+		duty := n(r.CoolingDutyKJ) + " kJ"
+		if r.HasCoolingPower {
+			duty += ", " + n(r.CoolingPowerW) + " W mean over " + n(r.CoolingTimeMin) + " min"
+		}
+		s.row("cooling duty", duty)
+	}
+	if r.HasAdiabatic {
+		s.section("Seeded at " + tc(r.SeedAtC) + " in an insulated vessel")
+		s.row("end temperature", tc(r.AdiabaticEndC)+" ("+signed(r.AdiabaticRiseK)+" K)")
+		s.row("crystals at once", g(r.AdiabaticCrystalsG)+" of "+r.AdiabaticPhase)
+	}
+
+	s.section("Cautions")
+	for _, c := range r.Cautions {
+		s.bullet(c)
+	}
+	if len(r.Warnings) > 0 {
+		s.section("Warnings")
+		for _, w := range r.Warnings {
+			s.bullet(w)
+		}
+	}
+	s.section("Sources")
+	for _, src := range r.Sources {
+		s.bullet(src)
+	}
+	return s.b.String()
+}
+
+func pad(s string, w int) string {
+	if k := utf8.RuneCountInString(s); k < w {
+		return s + strings.Repeat(" ", w-k)
+	}
+	return s + " "
+}
