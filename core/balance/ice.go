@@ -36,21 +36,28 @@ const iceFusionKJPerKg = 333.55
 const coldTol = 1e-9
 
 // freezingPoint sets the freezing point of the solution as made and the compound's
-// eutectic, with the warnings they call for.
-func freezingPoint(res *Result, c *compound.Compound, warn, srcs *notes) {
+// eutectic. Its warnings and sources are given only to a batch that goes below 0 °C.
+func freezingPoint(res *Result, b Batch, warn, srcs *notes) {
+	c := res.Compound
 	fz := c.Freezing
 	if fz == nil {
 		return
 	}
-	srcs.add(fz.Source)
 	if fz.HasEutectic {
 		res.HasEutectic, res.EutecticC, res.EutecticPhase = true, fz.EutecticC, fz.EutecticForm.Formula
 		res.EutecticG100 = fz.EutecticG100
+	}
+	t, ok := fz.TempC(res.ConcentrationG100)
+	res.HasFreezing, res.FreezingPointC = ok, t
+	if !(b.DissolveTempC < 0 || b.HasTarget && b.TargetC < 0 || b.HasSeedAt && b.SeedAtC < 0 ||
+		b.HasClearDown && b.ClearDownToC-b.ClearMarginK < 0) {
+		return
+	}
+	srcs.add(fz.Source)
+	if fz.HasEutectic {
 		srcs.add(fz.EutecticSource)
 	}
-	conc := res.ConcentrationG100
-	if t, ok := fz.TempC(conc); ok {
-		res.HasFreezing, res.FreezingPointC = true, t
+	if ok {
 		return
 	}
 	if fz.HasEutectic {

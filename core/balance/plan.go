@@ -175,7 +175,7 @@ func Plan(b Batch) (Result, error) {
 				" g of water at "+fmtC(b.DissolveTempC)+"; this charge needs at least "+
 				unit.FormatCompact(res.MinWaterG, 4)+" g of water")
 	}
-	freezingPoint(&res, c, &warn, &srcs)
+	freezingPoint(&res, b, &warn, &srcs)
 	if err := dissolveAboveFreezing(&res, b); err != nil {
 		return Result{}, err
 	}
