@@ -422,9 +422,9 @@ func TestMassBalanceProperty(t *testing.T) {
 			t.Fatalf("%s: impurity %v of %v g at %v %%", r.SoluteID, r.ImpurityG, r.ChargeG, r.PurityPct)
 		}
 		if r.HasTarget {
-			out := r.CrystalsG + r.LiquorG + r.EvaporatedWaterG
+			out := r.CrystalsG + r.IceG + r.LiquorG + r.EvaporatedWaterG
 			if math.Abs(out-in) > balanceTol*in {
-				t.Fatalf("%s: crystals %v + liquor %v + evaporated %v = %v, want %v", r.SoluteID, r.CrystalsG, r.LiquorG, r.EvaporatedWaterG, out, in)
+				t.Fatalf("%s: crystals %v + ice %v + liquor %v + evaporated %v = %v, want %v", r.SoluteID, r.CrystalsG, r.IceG, r.LiquorG, r.EvaporatedWaterG, out, in)
 			}
 			anh := r.CrystalsG*r.CrystalAnhydrousFrac + r.LiquorSoluteG
 			if math.Abs(anh-r.SoluteG) > balanceTol*r.SoluteG {
@@ -546,7 +546,7 @@ func FuzzBatch(f *testing.F) {
 			t.Fatalf("negative crystals: %v, %v", r.CrystalsG, r.AdiabaticCrystalsG)
 		}
 		if r.HasTarget {
-			if out := r.CrystalsG + r.LiquorG + r.EvaporatedWaterG; math.Abs(out-in) > balanceTol*in {
+			if out := r.CrystalsG + r.IceG + r.LiquorG + r.EvaporatedWaterG; math.Abs(out-in) > balanceTol*in {
 				t.Fatalf("%s: mass out %v, in %v", r.SoluteID, out, in)
 			}
 		}

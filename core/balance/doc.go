@@ -36,9 +36,16 @@
 // solutions (from memory); a measured value in kJ/(kg·K) of liquor can replace it, and a
 // vessel heat capacity in J/K can be added.
 //
+// Below 0 °C, for a compound with freezing data (compound.Freezing), ice separates when the
+// liquor lies below its freezing point: the liquor left beside the ice is the one whose
+// freezing point is the target, and below the eutectic the batch freezes solid (all the
+// solute in the stable solid, the rest ice). See ice.go. Compounds without freezing data get
+// a warning instead. The latent heat of the ice is reported in a warning, not in the duty.
+//
 // # Not modelled
 //
 // Kinetics (growth and nucleation rates), agglomeration, inclusions of mother liquor,
 // solid solutions, other solutes (common-ion effects), the heat carried off by evaporated
-// water, heat losses to the room, and the boiling point.
+// water, heat losses to the room, the boiling point, and metastable ice-free liquors below the
+// freezing point (supercooling).
 package balance

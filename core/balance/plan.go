@@ -144,6 +144,9 @@ func Plan(b Batch) (Result, error) {
 		warn.add(w)
 		srcs.add(segC.Curve.Source)
 		g := lowestSolubility(c, tc, b.DissolveTempC)
+		if err := clearOfIce(c, g, tc, b.ClearDownToC); err != nil {
+			return Result{}, err
+		}
 		if m, err = ChargeFor(form, p, b.WaterG, g, "clear_down_to_C"); err != nil {
 			return Result{}, err
 		}
@@ -171,6 +174,10 @@ func Plan(b Batch) (Result, error) {
 			"at most "+unit.FormatCompact(most, 4)+" g of "+form.Formula+" dissolves in "+unit.FormatCompact(b.WaterG, 4)+
 				" g of water at "+fmtC(b.DissolveTempC)+"; this charge needs at least "+
 				unit.FormatCompact(res.MinWaterG, 4)+" g of water")
+	}
+	freezingPoint(&res, b, &warn, &srcs)
+	if err := dissolveAboveFreezing(&res, b); err != nil {
+		return Result{}, err
 	}
 	if res.MinWaterG == 0 {
 		warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
@@ -230,6 +237,9 @@ func Plan(b Batch) (Result, error) {
 		if !ok {
 			return Result{}, setsSolid(b, segT.Form, form, p, S, Wt, sD)
 		}
+		if k, err = coldCrash(&res, c, k, S, Wt-b.EvaporatedWaterG, &warn); err != nil {
+			return Result{}, err
+		}
 		res.HasTarget = true
 		res.TargetC = b.TargetC
 		res.EvaporatedWaterG = b.EvaporatedWaterG
@@ -239,7 +249,7 @@ func Plan(b Batch) (Result, error) {
 		res.YieldPct = 100 * k.CrystalsG * k.Phase.AnhydrousFraction / S
 		res.LiquorSoluteG, res.LiquorWaterG = k.LiquorSoluteG, k.LiquorWaterG
 		res.LiquorG = k.LiquorG()
-		res.LiquorG100 = 100 * k.LiquorSoluteG / k.LiquorWaterG
+		res.LiquorG100 = liquorG100(k, c)
 		res.SolubilityAtTargetG100 = sT
 		res.PhaseChanges = phaseChanges(c, b.DissolveTempC, b.TargetC)
 		for _, pc := range res.PhaseChanges {
@@ -360,6 +370,7 @@ func Plan(b Batch) (Result, error) {
 	}
 
 	temperatureWarnings(&res, b, &warn)
+	coldWarnings(&res, b, &warn)
 
 	// Cautions: the compound's note, the general ones, and the SDS last.
 	cautions.add(c.Hazard)
@@ -454,6 +465,8 @@ func temperatureWarnings(res *Result, b Batch, warn *notes) {
 	} {
 		switch {
 		case !n.ok:
+		case n.t < freezeC && res.Compound.Freezing != nil:
+			warn.add(coldNote(res, n.key, n.t))
 		case n.t < freezeC:
 			warn.add(n.key + " " + fmtC(n.t) + " is below 0 °C: the liquor may freeze there, and ice is not modelled " +
 				"(the solute lowers the freezing point by an amount Saltcast does not compute; below the eutectic ice and salt separate together)")
@@ -509,7 +522,7 @@ func (r *Result) checkFinite() error {
 		r.HeatCapacityKJPerK, r.DissolutionHeatKJ, r.DissolutionTempChangeK, r.DissolutionEnthalpyKJPerMol,
 		r.CrystallizationHeatKJ, r.CrystalEnthalpyKJPerMol, r.ApparentEnthalpyKJPerMol, r.SensibleHeatKJ,
 		r.CoolingDutyKJ, r.CoolingPowerW, r.CoolingTimeMin, r.SeedAtC, r.AdiabaticEndC, r.AdiabaticCrystalsG,
-		r.AdiabaticRiseK, r.AdiabaticG100} {
+		r.AdiabaticRiseK, r.AdiabaticG100, r.FreezingPointC, r.IceG, r.EutecticC, r.EutecticG100} {
 		chk(v)
 	}
 	for _, p := range r.PhaseChanges {

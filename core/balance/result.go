@@ -48,6 +48,20 @@ type Result struct {
 	SolubilityAtTargetG100 float64
 	PhaseChanges           []PhaseChange
 
+	// The cold side (ice.go). FreezingPointC is where ice starts to form from the solution as
+	// made (HasFreezing: the freezing data cover it). IceG is the ice at the target (HasIce: the
+	// target is below 0 °C and the compound has freezing data; 0 = none); Frozen means the
+	// target is below the eutectic and no liquor is left. The eutectic is the compound's.
+	HasFreezing    bool
+	FreezingPointC float64
+	HasIce         bool
+	IceG           float64
+	Frozen         bool
+	HasEutectic    bool
+	EutecticC      float64
+	EutecticG100   float64
+	EutecticPhase  string
+
 	// Unseeded path and seeding.
 	Supersaturation  []SupersaturationPoint // from the onset to the target (or to seed_at_C)
 	HasMetastable    bool

@@ -49,6 +49,7 @@ type Compound struct {
 	Notes            []string  // remarks on the data a technician should see
 	Cautions         []Caution // range-bound warnings added to Solubility
 	Custom           bool      // made by NewCustom, not from the library
+	Freezing         *Freezing // freezing curve and eutectic; nil where the library has no data
 	density          *densityFit
 }
 

@@ -65,10 +65,20 @@ type parser struct {
 	out     []*Compound
 	seen    map[string]bool
 
-	c       *Compound
-	phases  []*phaseDef
-	rows    *rowSet // rows being filled: a phase's or the density's
-	density *rowSet
+	c        *Compound
+	phases   []*phaseDef
+	rows     *rowSet // rows being filled: a phase's, the density's or the freezing curve's
+	density  *rowSet
+	freezing *rowSet
+	eutectic *eutecticDef
+}
+
+type eutecticDef struct {
+	line         int
+	text         string
+	tempC, massP float64
+	form         *Form
+	source       string
 }
 
 func (p *parser) fail(msg string) error { return &ParseError{Line: p.line, Text: p.text, Msg: msg} }
@@ -143,6 +153,10 @@ func (p *parser) statement() error {
 		}
 		p.density = &rowSet{line: p.line, unit: "density", source: src}
 		p.rows = p.density
+	case "freezing":
+		return p.freezingBlock(fields)
+	case "eutectic":
+		return p.eutecticLine(fields)
 	case "caution":
 		if len(fields) != 3 {
 			return p.fail("want: caution from °C | to °C | text")
@@ -249,7 +263,7 @@ func (p *parser) compound(fields []string) error {
 	}
 	p.seen[id] = true
 	p.c = &Compound{ID: id, MolarMassGPerMol: m}
-	p.phases, p.rows, p.density = nil, nil, nil
+	p.phases, p.rows, p.density, p.freezing, p.eutectic = nil, nil, nil, nil, nil
 	return nil
 }
 
@@ -339,6 +353,9 @@ func (p *parser) phase(fields []string) error {
 	if p.density != nil {
 		return p.fail("phases come before the density block")
 	}
+	if p.freezing != nil {
+		return p.fail("phases come before the freezing block")
+	}
 	ph := &phaseDef{form: f, minC: lo, maxC: hi, rows: rowSet{line: p.line}}
 	p.phases = append(p.phases, ph)
 	p.rows = &ph.rows
@@ -346,7 +363,7 @@ func (p *parser) phase(fields []string) error {
 }
 
 func (p *parser) unit(fields []string) error {
-	if p.rows == nil || p.rows == p.density {
+	if p.rows == nil || p.rows == p.density || p.rows == p.freezing {
 		return p.fail("unit belongs under a phase line")
 	}
 	if len(fields) != 2 || (fields[0] != "mass%" && fields[0] != "g/100g") {
@@ -362,7 +379,7 @@ func (p *parser) unit(fields []string) error {
 
 func (p *parser) row(s string) error {
 	if p.c == nil || p.rows == nil {
-		return p.fail("a data row must follow a phase or density line")
+		return p.fail("a data row must follow a phase, density or freezing line")
 	}
 	nums, src, _ := strings.Cut(s, "|")
 	f := strings.Fields(nums)
@@ -398,6 +415,10 @@ func (p *parser) row(s string) error {
 		if !(a > 0 && a < 100 && b > 0.5 && b < 5) {
 			return p.fail("a density row is mass % (0–100) and g/cm³ (0.5–5)")
 		}
+	case "freezing":
+		if !(a > 0 && a < 100 && b > 0 && b < 100) {
+			return p.fail("a freezing row is mass % (0–100) and a depression in K (0–100)")
+		}
 	}
 	p.rows.pts = append(p.rows.pts, solubility.Point{TempC: a, GPer100gWater: b})
 	p.rows.rowSources = append(p.rows.rowSources, source)
@@ -429,6 +450,10 @@ func (p *parser) end() error {
 		return p.fail("compound " + c.ID + " has no forms")
 	case len(p.phases) == 0:
 		return p.fail("compound " + c.ID + " has no phases")
+	}
+	extended, err := p.extendToEutectic()
+	if err != nil {
+		return err
 	}
 	for i, ph := range p.phases {
 		pts := ph.rows.pts
@@ -464,6 +489,9 @@ func (p *parser) end() error {
 			}
 		}
 	}
+	if err := p.buildFreezing(extended); err != nil {
+		return err
+	}
 	if p.density != nil {
 		d, err := fitDensity(p.density.pts, p.density.source)
 		if err != nil {
@@ -472,6 +500,6 @@ func (p *parser) end() error {
 		c.density = d
 	}
 	p.out = append(p.out, c)
-	p.c, p.phases, p.rows, p.density = nil, nil, nil, nil
+	p.c, p.phases, p.rows, p.density, p.freezing, p.eutectic = nil, nil, nil, nil, nil, nil
 	return nil
 }

@@ -83,6 +83,11 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("liquor_g", r.LiquorG, t)
 	opt("liquor_g_per_100g_water", r.LiquorG100, t)
 	opt("solubility_at_target_g_per_100g_water", r.SolubilityAtTargetG100, t)
+	opt("freezing_point_C", r.FreezingPointC, r.HasFreezing)
+	opt("ice_g", r.IceG, t && r.HasIce)
+	e.Key("frozen_solid").Bool(t && r.Frozen)
+	opt("eutectic_C", r.EutecticC, r.HasEutectic)
+	optStr("eutectic_phase", r.EutecticPhase, r.HasEutectic)
 	e.Key("phase_changes").BeginArray()
 	for _, p := range r.PhaseChanges {
 		e.BeginObject()
