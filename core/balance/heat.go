@@ -41,8 +41,8 @@ func (pl *planner) heat() {
 		pl.srcs.add(form.EnthalpySource)
 		if math.Abs(res.DissolutionTempChangeK) > 2 {
 			pl.warn.add("the heat of dissolving uses ΔsolH at infinite dilution; dissolving into a strong liquor releases or " +
-			"absorbs a different amount (for salts that form hydrates, such as CH3COONa, far less heat than the " +
-			"infinite-dilution value), so treat the dissolving figures as rough")
+				"absorbs a different amount (for salts that form hydrates, such as CH3COONa, far less heat than the " +
+				"infinite-dilution value), so treat the dissolving figures as rough")
 		}
 	} else {
 		pl.warn.add("the library has no enthalpy of solution for " + form.Formula + ": the heat of dissolving is not given")
