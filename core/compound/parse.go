@@ -6,6 +6,7 @@ import (
 	"strconv"
 	"strings"
 
+	"saltcast/core/activity"
 	"saltcast/core/solubility"
 )
 
@@ -136,6 +137,10 @@ func (p *parser) statement() error {
 		return p.form(fields)
 	case "enthalpy":
 		return p.enthalpy(fields)
+	case "fusion", "solidcp", "meltcp":
+		return p.formHeat(kw, fields)
+	case "pitzer":
+		return p.pitzer(fields)
 	case "phase":
 		return p.phase(fields)
 	case "unit":
@@ -330,6 +335,93 @@ func (p *parser) enthalpy(fields []string) error {
 		return err
 	}
 	f.SolutionEnthalpyKJPerMol, f.HasEnthalpy, f.EnthalpySource = v, true, src
+	p.addSource(src)
+	return nil
+}
+
+// formHeat reads the heat data of one form: fusion FORMULA | kJ/kg low | kJ/kg high | source,
+// solidcp FORMULA | J/(mol·K) | source, meltcp FORMULA | kJ/(kg·K) | source.
+func (p *parser) formHeat(kw string, fields []string) error {
+	want := map[string]string{
+		"fusion":  "fusion FORMULA | kJ/kg low | kJ/kg high | source",
+		"solidcp": "solidcp FORMULA | J/(mol·K) | source",
+		"meltcp":  "meltcp FORMULA | kJ/(kg·K) | source",
+	}[kw]
+	n := 3
+	if kw == "fusion" {
+		n = 4
+	}
+	if len(fields) != n {
+		return p.fail("want: " + want)
+	}
+	f, err := p.findForm(fields[0])
+	if err != nil {
+		return err
+	}
+	v := make([]float64, n-2)
+	for i := range v {
+		x, err := strconv.ParseFloat(fields[1+i], 64)
+		if err != nil || !(x > 0 && x < 5000) {
+			return p.fail("want: " + want + ", with positive numbers")
+		}
+		v[i] = x
+	}
+	src, err := p.source(fields[n-1])
+	if err != nil {
+		return err
+	}
+	switch kw {
+	case "fusion":
+		if f.HasFusion || f.WaterPerFormula == 0 || v[0] > v[1] {
+			return p.fail("one fusion line per hydrate, low value first")
+		}
+		f.FusionKJPerKgLow, f.FusionKJPerKgHigh, f.HasFusion, f.FusionSource = v[0], v[1], true, src
+	case "solidcp":
+		if f.HasSolidCp {
+			return p.fail("second solidcp for " + f.Formula)
+		}
+		f.SolidCpJPerMolK, f.HasSolidCp, f.SolidCpSource = v[0], true, src
+	case "meltcp":
+		if f.HasMeltCp || f.WaterPerFormula == 0 || v[0] > 10 {
+			return p.fail("one meltcp line per hydrate, in kJ/(kg·K)")
+		}
+		f.MeltCpKJPerKgK, f.HasMeltCp, f.MeltCpSource = v[0], true, src
+	}
+	p.addSource(src)
+	return nil
+}
+
+// pitzer reads pitzer ν+ | z+ | ν− | z− | β0 | β1 | Cφ | max mol/kg | source.
+func (p *parser) pitzer(fields []string) error {
+	const want = "want: pitzer ν+ | z+ | ν− | z− | β0 | β1 | Cφ | max mol/kg | source"
+	if len(fields) != 9 || p.c.Activity != nil {
+		return p.fail(want + " (once per compound)")
+	}
+	var v [8]float64
+	for i := range v {
+		x, err := strconv.ParseFloat(fields[i], 64)
+		if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || math.Abs(x) > 100 {
+			return p.fail(want)
+		}
+		v[i] = x
+	}
+	for _, i := range [...]int{0, 1, 2, 3, 7} {
+		if !(v[i] > 0) {
+			return p.fail(want + ", with positive ion counts, charges and range")
+		}
+	}
+	if v[0]*v[1] != v[2]*v[3] {
+		return p.fail("the charges do not balance: ν+·z+ must equal ν−·z−")
+	}
+	if v[1] > 1 && v[3] > 1 {
+		return p.fail("salts of two multivalent ions need β2, which this model leaves out")
+	}
+	src, err := p.source(fields[8])
+	if err != nil {
+		return err
+	}
+	p.c.Activity = &activity.Salt{NuM: v[0], ZM: v[1], NuX: v[2], ZX: v[3], Beta0: v[4], Beta1: v[5], CPhi: v[6],
+		MaxMolal: v[7], Source: src}
 	p.addSource(src)
 	return nil
 }
