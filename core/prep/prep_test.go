@@ -152,6 +152,25 @@ func TestByHand(t *testing.T) {
 			t.Errorf("form %q impurity %.4f g", r.Form, r.ImpurityG)
 		}
 	})
+	t.Run("250 mL of 0.1 mol/L CaCl2 from the dihydrate", func(t *testing.T) {
+		// CaCl2·2H2O: M = 40.078 + 2·35.45 + 2·18.015 = 147.008 g/mol (IUPAC abridged).
+		// 0.1·0.25·147.008 = 3.6752 g, by definition of mol/L; its water 0.025·2·18.015 =
+		// 0.9008 g. Density: 0.1 mol/L lies between the CRC 102nd ed. rows 1 % (0.091 mol/L,
+		// 1.0065) and 2 % (0.183, 1.0148): w ≈ 1.098 %, ρ ≈ 1.0073 g/mL; solution 251.8 g, water
+		// added 251.8 − 3.675 = 248.2 g.
+		c, _ := mustLookup(t, "CaCl2")
+		di, err := c.Form("CaCl2·2H2O")
+		if err != nil {
+			t.Fatal(err)
+		}
+		r := plan(t, Spec{Compound: c, Form: di, Concentration: 0.1, Unit: MolPerL, Amount: ByVolume, AmountValue: 250, TempC: 20})
+		if !relNear(r.FormG, 0.025*147.008, 1e-5) || !relNear(r.HydrateWaterG, 0.025*2*18.015, 1e-4) {
+			t.Errorf("form %.4f g, hydrate water %.4f g; want 3.6752 and 0.9008", r.FormG, r.HydrateWaterG)
+		}
+		if !relNear(r.WaterG, 248.2, 0.1/100) {
+			t.Errorf("water %.2f g, want about 248.2", r.WaterG)
+		}
+	})
 	t.Run("500 mL of 10 % w/v KNO3", func(t *testing.T) {
 		// 10 % w/v = 100 g/L: 50 g in 500 mL, by definition. CRC rows 9 % (1.0560) and
 		// 10 % (1.0627): w·ρ = 100 g/L at w ≈ 9.442 %, ρ ≈ 1.0590 g/mL; solution 529.5 g,
