@@ -28,7 +28,7 @@ func TestScreenshots(t *testing.T) {
 		}
 		open(t, ctx, u)
 		click(t, ctx, `[data-demo="cuso4"]`)
-		for _, screen := range []string{"batch", "gas", "box", "sheet"} {
+		for _, screen := range []string{"batch", "prep", "gas", "box", "sheet"} {
 			click(t, ctx, "#tab-"+screen)
 			png, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
 			if err != nil {

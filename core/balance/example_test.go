@@ -62,6 +62,6 @@ func ExamplePlan() {
 	// weigh 1913 g of KAl(SO4)2·12H2O
 	// saturated at 68.0 °C; seed at 67.0 °C with 17–34 g
 	// at 15 °C: 1708 g of KAl(SO4)2·12H2O, yield 90 %, liquor 2185 g
-	// cooling duty 710 kJ, 33 W on average
+	// cooling duty 816 kJ, 38 W on average
 	// half-way through the cubic programme: 60.5 °C
 }

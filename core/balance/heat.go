@@ -3,195 +3,228 @@ package balance
 import (
 	"math"
 
-	"saltcast/core/compound"
 	"saltcast/core/unit"
 )
 
-// enthalpyChoice is the enthalpy of solution used for one solid phase, per mol of the
-// phase (one formula unit: the same as per mol of anhydrous solute).
-type enthalpyChoice struct {
-	kJPerMol float64
-	ok       bool
-	basis    string
-	apparent float64
-	hasApp   bool
-}
-
-// chooseEnthalpy prefers the library value at infinite dilution (sourced); the apparent
-// van 't Hoff value from the curve between t1 and t2 is computed beside it and used only
-// when the library has none.
-func chooseEnthalpy(c *compound.Compound, phase *compound.Form, t1, t2 float64) enthalpyChoice {
-	var e enthalpyChoice
-	e.apparent, e.hasApp = ApparentEnthalpy(c, t1, t2)
-	switch {
-	case phase.HasEnthalpy:
-		e.kJPerMol, e.ok = phase.SolutionEnthalpyKJPerMol, true
-		e.basis = "ΔsolH of " + phase.Formula + " at infinite dilution, 25 °C, from the library (" +
-			unit.FormatCompact(phase.SolutionEnthalpyKJPerMol, 4) + " kJ/mol; " + phase.EnthalpySource + ")"
-	case e.hasApp:
-		e.kJPerMol, e.ok = e.apparent, true
-		e.basis = "apparent ΔsolH of " + phase.Formula + " from the slope of the solubility curve (ideal van 't Hoff, " +
-			unit.FormatCompact(e.apparent, 4) + " kJ/mol), because the library has no measured value"
-	}
-	return e
-}
-
-// heat fills the heat fields of res: batch heat capacity, heat of dissolving, heat of
-// crystallization at the target, cooling duty, and the adiabatic end temperature.
-func heat(res *Result, b Batch, form *compound.Form, m, p, S, Wt float64, heating bool, warn, srcs *notes) {
-	c := b.Compound
+// heat fills the heat fields: batch heat capacity, heat of dissolving, heat of
+// crystallization at the target, cooling duty, and the insulated seeded batch.
+func (pl *planner) heat() {
+	res, b, c := pl.res, pl.b, pl.c
+	hc := newHeatCap(c, b.LiquorCpKJPerKgK, b.VesselJPerK)
 	tMean := b.DissolveTempC
 	if b.HasTarget {
 		tMean = (b.DissolveTempC + b.TargetC) / 2
 	}
-	capAt := func(t float64) float64 {
-		if b.LiquorCpKJPerKgK > 0 {
-			return (m*p+b.WaterG)/1000*b.LiquorCpKJPerKgK + b.VesselJPerK/1000
-		}
-		return Wt/1000*waterHeatCapacity(t) + b.VesselJPerK/1000
-	}
+	// The batch as a clear liquor, before crystals form: the sensible heat is taken out of
+	// it, then the crystals form at the target (Hess's law; the heat of crystallization is
+	// evaluated on the crystallization path).
+	capAt := func(t float64) float64 { return hc.liquor(pl.S, pl.Wt, t) + hc.vesselKJK }
 	res.HeatCapacityKJPerK = capAt(tMean)
-	res.HeatCapacityModel = cpModelWater
-	if b.LiquorCpKJPerKgK > 0 {
-		res.HeatCapacityModel = cpModelUser
-	} else {
-		srcs.add(cpWaterSource)
-	}
-	if b.VesselJPerK > 0 {
-		res.HeatCapacityModel += "; plus the vessel, " + unit.FormatCompact(b.VesselJPerK, 4) + " J/K"
+	res.HeatCapacityModel = hc.model()
+	if b.LiquorCpKJPerKgK == 0 {
+		pl.srcs.add(cpWaterSource)
+		if hc.melt != nil {
+			pl.srcs.add(hc.melt.MeltCpSource)
+		} else {
+			_, src := c.Anhydrous().SolidHeatCapacity()
+			pl.srcs.add(src)
+		}
 	}
 
 	// Dissolving the charge.
+	form := pl.form
 	if form.HasEnthalpy {
 		res.HasDissolutionHeat = true
 		res.DissolutionEnthalpyKJPerMol = form.SolutionEnthalpyKJPerMol
-		res.DissolutionHeatKJ = m * p / form.MolarMassGPerMol * form.SolutionEnthalpyKJPerMol
+		res.DissolutionHeatKJ = pl.m * pl.p / form.MolarMassGPerMol * form.SolutionEnthalpyKJPerMol
 		res.DissolutionTempChangeK = -res.DissolutionHeatKJ / capAt(b.DissolveTempC)
-		srcs.add(form.EnthalpySource)
+		pl.srcs.add(form.EnthalpySource)
+		if math.Abs(res.DissolutionTempChangeK) > 2 {
+			pl.warn.add("the heat of dissolving uses ΔsolH at infinite dilution; dissolving into a strong liquor releases or " +
+				"absorbs a different amount (for salts that form hydrates, such as CH3COONa, far less heat than the " +
+				"infinite-dilution value), so treat the dissolving figures as rough")
+		}
 	} else {
-		warn.add("the library has no enthalpy of solution for " + form.Formula + ": the heat of dissolving is not given")
+		pl.warn.add("the library has no enthalpy of solution for " + form.Formula + ": the heat of dissolving is not given")
 	}
 
-	// Crystallization at the target.
 	if b.HasTarget {
-		phase := c.SegmentAt(b.TargetC).Form
-		from := b.DissolveTempC
-		if res.HasOnset {
-			from = res.SaturationTempC
-		}
-		e := chooseEnthalpy(c, phase, from, b.TargetC)
-		res.ApparentEnthalpyKJPerMol, res.HasApparent = e.apparent, e.hasApp
-		if e.ok {
-			res.CrystalEnthalpyKJPerMol = e.kJPerMol
-			res.EnthalpyBasis = e.basis
-			res.CrystallizationHeatKJ = res.CrystalsG / phase.MolarMassGPerMol * e.kJPerMol
-			if res.CrystalsG > 0 && phase.HasEnthalpy {
-				srcs.add(phase.EnthalpySource)
-			}
-			if res.CrystalsG > 0 {
-				srcs.add(heatSource)
-			}
-			if res.CrystalsG > 0 && phase.HasEnthalpy && e.hasApp && differ(e.kJPerMol, e.apparent) {
-				warn.add("the library ΔsolH of " + phase.Formula + " (" + unit.FormatCompact(e.kJPerMol, 3) +
-					" kJ/mol) and the apparent value from the curve slope (" + unit.FormatCompact(e.apparent, 3) +
-					" kJ/mol) differ by more than " + unit.FormatCompact(enthalpyDiffPct, 2) +
-					" %; the library value is used, so treat the crystallization heat as a rough figure")
-			}
-		} else if res.CrystalsG > 0 {
-			warn.add("no enthalpy of solution for " + phase.Formula + ": the heat of crystallization is not included")
-		}
-		res.SensibleHeatKJ = res.HeatCapacityKJPerK * (b.DissolveTempC - b.TargetC)
-		res.CoolingDutyKJ = res.SensibleHeatKJ + res.CrystallizationHeatKJ
-		if heating {
-			warn.add("the batch is heated to the target: a negative cooling duty is heat to supply")
-		}
-		if b.CoolingTimeMin > 0 {
-			res.HasCoolingPower = true
-			res.CoolingTimeMin = b.CoolingTimeMin
-			res.CoolingPowerW = res.CoolingDutyKJ * 1000 / (b.CoolingTimeMin * 60)
-		}
+		pl.crystallizationHeat()
 	}
-
 	if b.HasSeedAt {
-		adiabatic(res, b, S, Wt, capAt, warn)
+		pl.adiabatic(hc)
 	}
 }
 
-func differ(a, b float64) bool {
-	return math.Abs(a-b) > enthalpyDiffPct/100*math.Max(math.Abs(a), math.Abs(b))
-}
-
-// adiabatic solves the insulated, seeded batch: crystals form at SeedAtC and warm the batch,
-// which raises the solubility, which stops the crystals forming. It finds T_end in
-// [T_seed, T_onset] with C·(T_end − T_seed) = Q_cryst(x_eq(T_end)).
-func adiabatic(res *Result, b Batch, S, Wt float64, capAt func(float64) float64, warn *notes) {
-	c := b.Compound
-	ts, on := b.SeedAtC, res.SaturationTempC
-	seedPhase := c.SegmentAt(ts).Form
-	// One enthalpy per phase met, chosen once (there are at most a few phases).
-	type choice struct {
-		phase *compound.Form
-		e     enthalpyChoice
+// crystallizationHeat works out the heat released by the crystals at the target and the
+// cooling duty, sized on the safe side of the estimates.
+func (pl *planner) crystallizationHeat() {
+	res, b, c := pl.res, pl.b, pl.c
+	seg := c.SegmentAt(b.TargetC)
+	phase := seg.Form
+	from := b.DissolveTempC
+	if res.HasOnset {
+		from = res.SaturationTempC
 	}
-	var choices [4]choice
-	n := 0
-	hOf := func(phase *compound.Form, t float64) enthalpyChoice {
-		for i := 0; i < n; i++ {
-			if choices[i].phase == phase {
-				return choices[i].e
+	res.ApparentEnthalpyKJPerMol, res.HasApparent = ApparentEnthalpy(c, from, b.TargetC)
+	// The crystals of the target phase grow between the onset (or the start of the
+	// phase's range) and the target: the heat is taken at the middle of that stretch.
+	lo, hi := math.Min(from, b.TargetC), math.Max(from, b.TargetC)
+	lo, hi = math.Max(lo, seg.MinC), math.Min(hi, seg.MaxC)
+	tc := b.TargetC
+	if hi > lo {
+		tc = (lo + hi) / 2
+	}
+	ch := CrystallizationHeat(c, phase, tc)
+	if ch.OK {
+		res.CrystalEnthalpyKJPerMol = ch.HighKJPerMol
+		res.CrystalEnthalpyLowKJPerMol = ch.LowKJPerMol
+		res.HeatBasis = ch.Basis
+		res.EnthalpyBasis = ch.Describe()
+		n := res.CrystalsG / phase.MolarMassGPerMol
+		res.CrystallizationHeatKJ = n * ch.HighKJPerMol
+		res.CrystallizationHeatLowKJ = n * ch.LowKJPerMol
+		if res.CrystalsG > 0 {
+			for _, e := range ch.Estimates {
+				pl.srcs.add(e.Source)
 			}
+			pl.srcs.add(heatSource)
 		}
-		e := chooseEnthalpy(c, phase, on, t)
-		if n < len(choices) {
-			choices[n] = choice{phase, e}
-			n++
-		}
-		return e
+	} else if res.CrystalsG > 0 {
+		pl.warn.add("no estimate of the heat of crystallization of " + phase.Formula + ": it is not included in the cooling duty")
 	}
-	e0 := hOf(seedPhase, ts)
-	if !e0.ok {
-		warn.add("no enthalpy of solution for " + seedPhase.Formula + ": the adiabatic end temperature is not worked out")
+	res.SensibleHeatKJ = res.HeatCapacityKJPerK * (b.DissolveTempC - b.TargetC)
+	res.CoolingDutyKJ = res.SensibleHeatKJ + res.CrystallizationHeatKJ
+	if pl.heating {
+		pl.warn.add("the batch is heated to the target: a negative cooling duty is heat to supply")
+	}
+	if b.CoolingTimeMin > 0 {
+		res.HasCoolingPower = true
+		res.CoolingTimeMin = b.CoolingTimeMin
+		res.CoolingPowerW = res.CoolingDutyKJ * 1000 / (b.CoolingTimeMin * 60)
+	}
+}
+
+// adiabaticScanK is the step of the scan for the end of the insulated warming; finer than
+// the features of the library curves near a transition.
+const adiabaticScanK = 0.25
+
+// adiabatic solves the insulated, seeded batch. Crystals of the phase P stable at the seed
+// temperature T_s grow and warm the slurry, which raises the solubility, which stops them.
+// With q the heat released per gram of P and C(x, T) the heat capacity of slurry and vessel
+// holding x grams of P, the end is the first T above T_s with
+//
+//	C(x_eq(T), T)·(T − T_s) = x_eq(T)·q
+//
+// where x_eq(T) is the equilibrium amount of P on P's own curve. If warming reaches the end
+// of P's range (its transition: 58 °C for CH3COONa·3H2O, 32.38 °C for Na2SO4·10H2O) first,
+// the temperature holds there, because above it P dissolves again (the hydrate melts in its
+// own water), and the crystal mass follows from the balance: x·q = C(x)·(T_t − T_s), below
+// the equilibrium amount. The other phase is not seeded and (for the hydrates above)
+// absorbs heat as it crystallizes, so none of it is formed. The balance closes by
+// construction: x is solved from it at the end temperature.
+func (pl *planner) adiabatic(hc heatCap) {
+	res, b, c := pl.res, pl.b, pl.c
+	ts, on := b.SeedAtC, res.SaturationTempC
+	seg := c.SegmentAt(ts)
+	P := seg.Form
+	top := seg.MaxC
+	last := seg == &c.Segments[len(c.Segments)-1] // P's range ends with the data, not at a transition
+	ch := CrystallizationHeat(c, P, (ts+math.Min(on, top))/2)
+	if !ch.OK {
+		pl.warn.add("no estimate of the heat of crystallization of " + P.Formula + ": the insulated seeded batch is not worked out")
 		return
 	}
-	if e0.kJPerMol <= 0 {
-		warn.add(seedPhase.Formula + " releases heat on dissolving, so crystallizing it cools the batch: " +
+	if ch.HighKJPerMol <= 0 {
+		pl.warn.add(P.Formula + " absorbs heat as it crystallizes from its saturated liquor, so seeding cools the batch: " +
 			"the insulated seeded batch is not worked out")
 		return
 	}
-	C := capAt((ts + on) / 2)
-	q := func(t float64) float64 {
-		k, ok := crashAt(c, S, Wt, t)
-		if !ok || k.CrystalsG == 0 {
+	xeq := func(t float64) float64 {
+		k, ok := CrashAt(P, seg.Curve.Model.Value(t), pl.S, pl.Wt, t)
+		if !ok {
 			return 0
 		}
-		e := hOf(k.Phase, t)
-		if !e.ok {
-			return 0
-		}
-		return k.CrystalsG / k.Phase.MolarMassGPerMol * e.kJPerMol
+		return k.CrystalsG
 	}
-	h := func(t float64) float64 { return C*(t-ts) - q(t) }
-	hs := h(ts)
-	if !(hs < 0) {
+	if !(xeq(ts) > 0) {
 		return
 	}
-	tEnd := refine(h, ts, hs, on, h(on))
-	k, _ := crashAt(c, S, Wt, tEnd)
+	solve := func(kJPerMol float64) (tEnd, x float64, atTop, ok bool) {
+		qg := kJPerMol / P.MolarMassGPerMol // kJ per gram of P
+		h := func(t float64) float64 {
+			x := xeq(t)
+			return hc.slurry(pl.S, pl.Wt, P, x, (ts+t)/2)*(t-ts) - x*qg
+		}
+		prevT, prevH := ts, h(ts)
+		tEnd, atTop = top, true
+		n := int(math.Ceil((top - ts) / adiabaticScanK))
+		for i := 1; i <= n; i++ {
+			t := ts + (top-ts)*float64(i)/float64(n)
+			if ht := h(t); ht >= 0 {
+				tEnd, atTop = refine(h, prevT, prevH, t, ht), false
+				break
+			} else {
+				prevT, prevH = t, ht
+			}
+		}
+		if atTop && last {
+			return 0, 0, false, false // would warm past the end of the data
+		}
+		// x from the balance at tEnd: g(x) = x·q − C(x)·ΔT is increasing in x (q exceeds
+		// the heat capacity of a gram of crystals times ΔT wherever g(x_eq) ≤ 0), so bisect.
+		dT := tEnd - ts
+		g := func(x float64) float64 { return x*qg - hc.slurry(pl.S, pl.Wt, P, x, (ts+tEnd)/2)*dT }
+		a, z := 0.0, xeq(tEnd)
+		if g(z) < 0 {
+			z = math.Max(z, hc.slurry(pl.S, pl.Wt, P, 0, (ts+tEnd)/2)*dT/qg*2)
+		}
+		for range 200 {
+			mid := (a + z) / 2
+			if g(mid) < 0 {
+				a = mid
+			} else {
+				z = mid
+			}
+			if z-a <= 1e-14*z {
+				break
+			}
+		}
+		return tEnd, (a + z) / 2, atTop, true
+	}
+	tEnd, x, atTop, ok := solve(ch.HighKJPerMol)
+	if !ok {
+		pl.warn.add("seeded at " + fmtC(ts) + ", the insulated batch would warm past the end of the data for " + c.ID +
+			": its end temperature is not worked out")
+		return
+	}
+	f := P.AnhydrousFraction
 	res.HasAdiabatic = true
 	res.SeedAtC = ts
 	res.AdiabaticEndC = tEnd
-	res.AdiabaticCrystalsG = k.CrystalsG
+	res.AdiabaticCrystalsG = x
 	res.AdiabaticRiseK = tEnd - ts
-	res.AdiabaticPhase = k.Phase.Formula
-	res.AdiabaticG100 = 100 * k.LiquorSoluteG / k.LiquorWaterG
-	if k.Phase != seedPhase {
-		warn.add("the insulated batch warms past a phase change: the solid at its end temperature is " + k.Phase.Formula)
-	}
-	res.AdiabaticBasis = e0.basis
-	for i := 1; i < len(c.Segments); i++ {
-		if bt := c.Segments[i].MinC; math.Abs(bt-tEnd) < 0.5 {
-			warn.add("the adiabatic end temperature is held near the " + fmtC(bt) + " transition, where " +
-				c.Segments[i-1].Form.Formula + " stops being the stable solid")
+	res.AdiabaticPhase = P.Formula
+	res.AdiabaticG100 = 100 * (pl.S - x*f) / (pl.Wt - x*(1-f))
+	res.AdiabaticHeld = atTop
+	res.AdiabaticEnthalpyKJPerMol = ch.HighKJPerMol
+	res.AdiabaticHeatKJ = x / P.MolarMassGPerMol * ch.HighKJPerMol
+	res.AdiabaticHeatCapacityKJPerK = hc.slurry(pl.S, pl.Wt, P, x, (ts+tEnd)/2)
+	res.AdiabaticBasis = ch.Describe()
+	res.AdiabaticEndLowC, res.AdiabaticCrystalsLowG = tEnd, x
+	if ch.LowKJPerMol < ch.HighKJPerMol && ch.LowKJPerMol > 0 {
+		if t2, x2, _, ok := solve(ch.LowKJPerMol); ok {
+			res.AdiabaticEndLowC, res.AdiabaticCrystalsLowG = t2, x2
 		}
+	}
+	for _, e := range ch.Estimates {
+		pl.srcs.add(e.Source)
+	}
+	if atTop {
+		next := c.SegmentAt(top + 1e-9).Form
+		pl.warn.add("seeded, the insulated batch warms to the " + fmtC(top) + " transition and holds there: above it " +
+			P.Formula + " gives way to " + next.Formula + ", whose crystallizing does not release the heat; " +
+			unit.FormatCompact(x, 4) + " g of " + P.Formula + " form (from the energy balance), and the liquor stays " +
+			"supersaturated until it is cooled")
 	}
 }

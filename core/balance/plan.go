@@ -60,10 +60,10 @@ const (
 		"Doki, Kubota et al., J. Chem. Eng. Japan 1999–2002, from memory, low confidence)"
 	programmeSource = "Mullin, J. W. & Nývlt, J. (1971), Programmed cooling of batch crystallizers, " +
 		"Chem. Eng. Sci. 26:369 (cubic profile T = T0 − (T0 − Tf)(t/τ)³, from memory for the attribution)"
-	heatSource = "enthalpy of crystallization taken as −ΔsolH at infinite dilution; approximate, " +
-		"5–20 % off for concentrated solutions (Mullin, Crystallization, 4th ed., 2001, ch. 2–3, from memory)"
-	cpModelWater = "water-equivalent: mass of water × c_p of water; " +
-		"solute and crystals add nothing (approximation, common practice)"
+	heatSource = "crystallization heat on the basis that holds at saturation: the differential heat of solution from the " +
+		"solubility slope with the Pitzer activity correction where the activity model covers the saturation molality, and " +
+		"the heat of fusion for hydrates that melt in their own water; the design value is the largest best estimate " +
+		"(Mullin, Crystallization, 4th ed., 2001, ch. 3, from memory, for the differential heat at saturation)"
 	cpWaterSource = "c_p of water: IAPWS-95 (Wagner & Pruss, 2002, J. Phys. Chem. Ref. Data 31:387), " +
 		"values tabulated every 10 K (from memory)"
 	cpModelUser = "user value × mass of solute and water"
@@ -91,7 +91,27 @@ func (n *notes) add(s string) {
 	n.list = append(n.list, s)
 }
 
-// Plan works out the whole batch.
+// planner carries one batch through the steps of Plan.
+type planner struct {
+	b        Batch
+	c        *compound.Compound
+	form     *compound.Form // the charged form
+	p        float64        // purity, mass fraction
+	res      *Result
+	warn     notes
+	srcs     notes
+	cautions cautionList
+
+	m, S, Wt, conc float64 // charge, anhydrous solute, total water, g/100 g water
+	sD             float64 // solubility at the dissolve temperature
+	heating        bool    // the target lies above the dissolve temperature (retrograde)
+	sT             float64 // solubility at the target
+	segT           *compound.Segment
+}
+
+// Plan works out the whole batch, step by step: the charge, the onset, the crash-out at the
+// target, the check of the seeding temperature, the unseeded path, the seed suggestion and
+// the cooling programme, the heat, and the cautions.
 func Plan(b Batch) (Result, error) {
 	c := b.Compound
 	if c == nil || len(c.Segments) == 0 {
@@ -105,22 +125,45 @@ func Plan(b Batch) (Result, error) {
 	if purityPct == 0 {
 		purityPct = 100
 	}
-	p := purityPct / 100
-	var warn, srcs, cautions notes
-
 	res := Result{
 		Compound: c, SoluteID: c.ID, SoluteName: c.Name, ChargedForm: form.Formula, PurityPct: purityPct,
 		WaterG: b.WaterG, DissolveTempC: b.DissolveTempC,
 	}
-	sD, segD, w, err := c.SolubilityField("dissolve_temp_C", b.DissolveTempC)
-	if err != nil {
+	pl := &planner{b: b, c: c, form: form, p: purityPct / 100, res: &res}
+	for _, step := range [...]func() error{pl.charge, pl.onset, pl.crashOut, pl.checkSeed} {
+		if err := step(); err != nil {
+			return Result{}, err
+		}
+	}
+	pl.unseededPath()
+	pl.seedAndProgramme()
+	pl.heat()
+	pl.finishPath()
+	temperatureWarnings(&res, b, &pl.warn)
+	coldWarnings(&res, b, &pl.warn)
+	pl.cautionNotes()
+
+	res.Cautions, res.CautionKinds = pl.cautions.text, pl.cautions.kinds
+	res.Warnings = pl.warn.list
+	res.Sources = pl.srcs.list
+	if err := res.checkFinite(); err != nil {
 		return Result{}, err
 	}
-	warn.add(w)
-	srcs.add(segD.Curve.Source)
-	res.SolubilityAtStart = sD
+	return res, nil
+}
 
-	// The charge.
+// charge works out the charge to weigh and the composition of the batch.
+func (pl *planner) charge() error {
+	b, c, form, p, res := pl.b, pl.c, pl.form, pl.p, pl.res
+	sD, segD, w, err := c.SolubilityField("dissolve_temp_C", b.DissolveTempC)
+	if err != nil {
+		return err
+	}
+	pl.warn.add(w)
+	pl.srcs.add(segD.Curve.Source)
+	res.SolubilityAtStart = sD
+	pl.sD = sD
+
 	var m float64
 	switch {
 	case b.ChargeG > 0:
@@ -129,7 +172,7 @@ func Plan(b Batch) (Result, error) {
 		// The saturation temperature is put ClearMarginK below the storage temperature.
 		tc := b.ClearDownToC - b.ClearMarginK
 		if tc > b.DissolveTempC {
-			return Result{}, unit.NumberError("clear_down_to_C", b.ClearDownToC,
+			return unit.NumberError("clear_down_to_C", b.ClearDownToC,
 				"a temperature at or below the dissolve temperature "+fmtC(b.DissolveTempC)+" plus the margin of "+
 					unit.FormatCompact(b.ClearMarginK, 3)+" K")
 		}
@@ -139,13 +182,16 @@ func Plan(b Batch) (Result, error) {
 			if errors.As(err, &fe) && b.ClearMarginK > 0 {
 				fe.Allowed += " once the margin of " + unit.FormatCompact(b.ClearMarginK, 3) + " K is taken off"
 			}
-			return Result{}, err
+			return err
 		}
-		warn.add(w)
-		srcs.add(segC.Curve.Source)
+		pl.warn.add(w)
+		pl.srcs.add(segC.Curve.Source)
 		g := lowestSolubility(c, tc, b.DissolveTempC)
+		if err := clearOfIce(c, g, tc, b.ClearDownToC); err != nil {
+			return err
+		}
 		if m, err = ChargeFor(form, p, b.WaterG, g, "clear_down_to_C"); err != nil {
-			return Result{}, err
+			return err
 		}
 		res.HasClearDown, res.ClearDownToC = true, b.ClearDownToC
 	default:
@@ -154,11 +200,12 @@ func Plan(b Batch) (Result, error) {
 			q = 100
 		}
 		if m, err = ChargeFor(form, p, b.WaterG, q/100*sD, "saturation_pct"); err != nil {
-			return Result{}, err
+			return err
 		}
 	}
 	S, Wt := Composition(form, p, m, b.WaterG)
 	conc := 100 * S / Wt
+	pl.m, pl.S, pl.Wt, pl.conc = m, S, Wt, conc
 	res.ChargeG, res.SoluteG, res.TotalWaterG = m, S, Wt
 	res.HydrateWaterG = Wt - b.WaterG
 	res.ImpurityG = m * (1 - p)
@@ -167,41 +214,47 @@ func Plan(b Batch) (Result, error) {
 	res.MinWaterG = MinWater(form, p, m, sD)
 	if conc > sD*(1+1e-9) {
 		most, _ := ChargeFor(form, p, b.WaterG, sD, "charge_g")
-		return Result{}, unit.NumberError("charge_g", m,
+		return unit.NumberError("charge_g", m,
 			"at most "+unit.FormatCompact(most, 4)+" g of "+form.Formula+" dissolves in "+unit.FormatCompact(b.WaterG, 4)+
 				" g of water at "+fmtC(b.DissolveTempC)+"; this charge needs at least "+
 				unit.FormatCompact(res.MinWaterG, 4)+" g of water")
 	}
+	freezingPoint(res, b, &pl.warn, &pl.srcs)
+	if err := dissolveAboveFreezing(res, b); err != nil {
+		return err
+	}
 	if res.MinWaterG == 0 {
-		warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
+		pl.warn.add("the water of crystallization of " + form.Formula + " alone dissolves this charge at " + fmtC(b.DissolveTempC))
 	}
 	res.Path = make([]PathPoint, 1, 6)
-	res.Path[0] = PathPoint{Label: "dissolve", TempC: b.DissolveTempC, G100: conc}
+	res.Path[0] = point(PathDissolve, b.DissolveTempC, conc)
+	return nil
+}
 
-	// Direction of travel and the saturation (onset) temperature.
+// onset finds the direction of travel and the saturation (onset) temperature.
+func (pl *planner) onset() error {
+	b, c, res := pl.b, pl.c, pl.res
 	minC, maxC := c.Range()
-	heating := false
-	var sT float64
-	var segT *compound.Segment
 	if b.HasTarget {
-		sT, segT, w, err = c.SolubilityField("cool_to_C", b.TargetC)
+		sT, segT, w, err := c.SolubilityField("cool_to_C", b.TargetC)
 		if err != nil {
-			return Result{}, err
+			return err
 		}
-		warn.add(w)
-		srcs.add(segT.Curve.Source)
+		pl.sT, pl.segT = sT, segT
+		pl.warn.add(w)
+		pl.srcs.add(segT.Curve.Source)
 		if b.TargetC > b.DissolveTempC {
-			if !(sT < sD) {
-				return Result{}, unit.NumberError("cool_to_C", b.TargetC,
+			if !(sT < pl.sD) {
+				return unit.NumberError("cool_to_C", b.TargetC,
 					"a temperature below the dissolve temperature "+fmtC(b.DissolveTempC)+
 						", or above it only where the solubility of "+c.ID+" is lower than there (retrograde)")
 			}
-			heating = true
+			pl.heating = true
 		}
 	}
-	if heating {
+	if pl.heating {
 		hi := math.Max(maxC, b.TargetC)
-		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, hi)
+		res.SaturationTempC, res.HasOnset = Onset(c, pl.conc, b.DissolveTempC, hi)
 		if !res.HasOnset {
 			res.OnsetNote = "stays unsaturated on heating up to " + fmtC(hi) + " (end of the data)"
 		}
@@ -211,79 +264,97 @@ func Plan(b Batch) (Result, error) {
 		if b.HasTarget {
 			lo = math.Min(lo, b.TargetC)
 		}
-		res.SaturationTempC, res.HasOnset = Onset(c, conc, b.DissolveTempC, lo)
+		res.SaturationTempC, res.HasOnset = Onset(c, pl.conc, b.DissolveTempC, lo)
 		if !res.HasOnset {
 			res.OnsetNote = "stays unsaturated on cooling down to " + fmtC(lo) + " (end of the data)"
 		}
 	}
 	if res.HasOnset {
-		res.Path = append(res.Path, PathPoint{Label: "onset", TempC: res.SaturationTempC, G100: conc})
+		res.Path = append(res.Path, point(PathOnset, res.SaturationTempC, pl.conc))
 	}
+	return nil
+}
 
-	// Crash-out at the target.
-	if b.HasTarget {
-		if b.EvaporatedWaterG >= Wt {
-			return Result{}, unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
-				"less than the "+unit.FormatCompact(Wt, 4)+" g of water in the batch")
-		}
-		k, ok := CrashAt(segT.Form, sT, S, Wt-b.EvaporatedWaterG, b.TargetC)
-		if !ok {
-			return Result{}, setsSolid(b, segT.Form, form, p, S, Wt, sD)
-		}
-		res.HasTarget = true
-		res.TargetC = b.TargetC
-		res.EvaporatedWaterG = b.EvaporatedWaterG
-		res.CrystalsG = k.CrystalsG
-		res.CrystalPhase = k.Phase.Formula
-		res.CrystalAnhydrousFrac = k.Phase.AnhydrousFraction
-		res.YieldPct = 100 * k.CrystalsG * k.Phase.AnhydrousFraction / S
-		res.LiquorSoluteG, res.LiquorWaterG = k.LiquorSoluteG, k.LiquorWaterG
-		res.LiquorG = k.LiquorG()
-		res.LiquorG100 = 100 * k.LiquorSoluteG / k.LiquorWaterG
-		res.SolubilityAtTargetG100 = sT
-		res.PhaseChanges = phaseChanges(c, b.DissolveTempC, b.TargetC)
-		for _, pc := range res.PhaseChanges {
-			warn.add("the stable solid changes from " + pc.From + " to " + pc.To + " at " + fmtC(pc.TempC) + " on the way")
-		}
-		if b.EvaporatedWaterG > 0 {
-			warn.add("the heat carried off by the evaporated water is not included in the cooling duty")
-		}
-		if k.CrystalsG == 0 {
-			if b.EvaporatedWaterG == 0 && res.HasOnset && !heating && res.SaturationTempC > b.TargetC {
-				// cannot happen for a curve that is consistent; kept as a guard
-				warn.add("no crystals at the target although the saturation temperature lies above it; check the curve")
-			}
-		}
+// crashOut works out the equilibrium crystals and liquor at the target.
+func (pl *planner) crashOut() error {
+	b, c, res := pl.b, pl.c, pl.res
+	if !b.HasTarget {
+		return nil
 	}
-
-	// Seeding at seed_at_C (checked before the unseeded path uses it).
-	if b.HasSeedAt {
-		_, segS, w, err := c.SolubilityField("seed_at_C", b.SeedAtC)
-		if err != nil {
-			return Result{}, err
-		}
-		warn.add(w)
-		srcs.add(segS.Curve.Source)
-		if heating || !res.HasOnset || !(b.SeedAtC < res.SaturationTempC) {
-			allowed := "a temperature below the saturation temperature of the batch"
-			if res.HasOnset && !heating {
-				allowed += ", " + fmtC(res.SaturationTempC)
-			} else {
-				allowed += "; this batch has none on cooling"
-			}
-			return Result{}, unit.NumberError("seed_at_C", b.SeedAtC, allowed)
-		}
+	S, Wt := pl.S, pl.Wt
+	if b.EvaporatedWaterG >= Wt {
+		return unit.NumberError("evaporated_water_g", b.EvaporatedWaterG,
+			"less than the "+unit.FormatCompact(Wt, 4)+" g of water in the batch")
 	}
+	k, ok := CrashAt(pl.segT.Form, pl.sT, S, Wt-b.EvaporatedWaterG, b.TargetC)
+	if !ok {
+		return setsSolid(b, pl.segT.Form, pl.form, pl.p, S, Wt, pl.sD)
+	}
+	k, err := coldCrash(res, c, k, S, Wt-b.EvaporatedWaterG, &pl.warn)
+	if err != nil {
+		return err
+	}
+	res.HasTarget = true
+	res.TargetC = b.TargetC
+	res.EvaporatedWaterG = b.EvaporatedWaterG
+	res.CrystalsG = k.CrystalsG
+	res.CrystalPhase = k.Phase.Formula
+	res.CrystalAnhydrousFrac = k.Phase.AnhydrousFraction
+	res.YieldPct = 100 * k.CrystalsG * k.Phase.AnhydrousFraction / S
+	res.LiquorSoluteG, res.LiquorWaterG = k.LiquorSoluteG, k.LiquorWaterG
+	res.LiquorG = k.LiquorG()
+	res.LiquorG100 = liquorG100(k, c)
+	res.SolubilityAtTargetG100 = pl.sT
+	res.PhaseChanges = phaseChanges(c, b.DissolveTempC, b.TargetC)
+	for _, pc := range res.PhaseChanges {
+		pl.warn.add("the stable solid changes from " + pc.From + " to " + pc.To + " at " + fmtC(pc.TempC) + " on the way")
+	}
+	if b.EvaporatedWaterG > 0 {
+		pl.warn.add("the heat carried off by the evaporated water is not included in the cooling duty")
+	}
+	if k.CrystalsG == 0 && b.EvaporatedWaterG == 0 && res.HasOnset && !pl.heating && res.SaturationTempC > b.TargetC {
+		// cannot happen for a curve that is consistent; kept as a guard
+		pl.warn.add("no crystals at the target although the saturation temperature lies above it; check the curve")
+	}
+	return nil
+}
 
-	// The unseeded path: supersaturation from the onset to the seed point or the target.
+// checkSeed checks seed_at_C before the unseeded path uses it.
+func (pl *planner) checkSeed() error {
+	b, c, res := pl.b, pl.c, pl.res
+	if !b.HasSeedAt {
+		return nil
+	}
+	_, segS, w, err := c.SolubilityField("seed_at_C", b.SeedAtC)
+	if err != nil {
+		return err
+	}
+	pl.warn.add(w)
+	pl.srcs.add(segS.Curve.Source)
+	if pl.heating || !res.HasOnset || !(b.SeedAtC < res.SaturationTempC) {
+		allowed := "a temperature below the saturation temperature of the batch"
+		if res.HasOnset && !pl.heating {
+			allowed += ", " + fmtC(res.SaturationTempC)
+		} else {
+			allowed += "; this batch has none on cooling"
+		}
+		return unit.NumberError("seed_at_C", b.SeedAtC, allowed)
+	}
+	return nil
+}
+
+// unseededPath tabulates the supersaturation from the onset to the seed point or the
+// target, and places the expected nucleation.
+func (pl *planner) unseededPath() {
+	b, c, res, conc := pl.b, pl.c, pl.res, pl.conc
 	endC, hasEnd := 0.0, false
 	switch {
 	case b.HasSeedAt:
 		endC, hasEnd = b.SeedAtC, true
-	case b.HasTarget && !heating:
+	case b.HasTarget && !pl.heating:
 		endC, hasEnd = b.TargetC, true
 	}
-	if res.HasOnset && !heating && hasEnd && endC < res.SaturationTempC {
+	if res.HasOnset && !pl.heating && hasEnd && endC < res.SaturationTempC {
 		on := res.SaturationTempC
 		res.Supersaturation = make([]SupersaturationPoint, 1, pathPoints+1)
 		res.Supersaturation[0] = SupersaturationPoint{TempC: on, Ratio: 1, DeltaG: 0}
@@ -293,76 +364,84 @@ func Plan(b Batch) (Result, error) {
 			res.Supersaturation = append(res.Supersaturation, SupersaturationPoint{TempC: t, Ratio: conc / s, DeltaG: conc - s})
 		}
 	}
-	if b.MetastableWidthK > 0 && res.HasOnset && !heating {
+	if b.MetastableWidthK > 0 && res.HasOnset && !pl.heating {
 		res.HasMetastable = true
 		res.MetastableWidthK = b.MetastableWidthK
 		res.NucleationC = res.SaturationTempC - b.MetastableWidthK
 		if hasEnd && res.NucleationC >= endC {
-			res.Path = append(res.Path, PathPoint{Label: "nucleation", TempC: res.NucleationC, G100: conc})
+			res.Path = append(res.Path, point(PathNucleation, res.NucleationC, conc))
 		}
 		switch {
 		case b.HasSeedAt && b.SeedAtC < res.NucleationC:
-			warn.add("seed_at_C lies below the expected nucleation temperature " + fmtC(res.NucleationC) +
+			pl.warn.add("seed_at_C lies below the expected nucleation temperature " + fmtC(res.NucleationC) +
 				" (saturation less the metastable width): the batch may crystallize on its own before it is seeded")
 		case b.HasTarget && !b.HasSeedAt && res.CrystalsG > 0 && res.NucleationC < b.TargetC:
-			warn.add("unseeded, the batch may stay supersaturated down to " + fmtC(b.TargetC) +
+			pl.warn.add("unseeded, the batch may stay supersaturated down to " + fmtC(b.TargetC) +
 				" (the metastable zone reaches " + fmtC(res.NucleationC) + "): seed it to get the crystals")
 		}
 	}
 	if b.HasSeedAt {
-		res.Path = append(res.Path, PathPoint{Label: "seed", TempC: b.SeedAtC, G100: conc})
+		res.Path = append(res.Path, point(PathSeed, b.SeedAtC, conc))
 	}
+}
 
-	// Seed suggestion and cooling programme, for a cooling batch that yields crystals.
-	if b.HasTarget && !heating && res.HasOnset && res.CrystalsG > 0 {
-		drop := 1.0
-		if b.MetastableWidthK > 0 {
-			drop = math.Min(drop, b.MetastableWidthK/2)
-		}
-		res.HasSeedHint = true
-		res.SeedHintC = res.SaturationTempC - drop
-		if res.SeedHintC < b.TargetC {
-			res.SeedHintC = b.TargetC
-			warn.add("the seeding suggestion is held at the target " + fmtC(b.TargetC) +
-				", less than " + unit.FormatCompact(drop, 2) + " K below the saturation temperature")
-		}
-		res.SeedPhase = c.SegmentAt(res.SeedHintC).Form.Formula
-		res.SeedLowG = 0.01 * res.CrystalsG
-		res.SeedHighG = 0.02 * res.CrystalsG
-		res.SeedRule = seedRule
-		srcs.add(seedRule)
-		if b.CoolingTimeMin > 0 && res.SeedHintC > b.TargetC {
-			res.ProgrammeFromC, res.ProgrammeToC = res.SeedHintC, b.TargetC
-			t0, tf := res.SeedHintC, b.TargetC
-			res.Programme = make([]ProgrammeStep, 0, programmeRows+1)
-			for i := 0; i <= programmeRows; i++ {
-				u := float64(i) / programmeRows
-				res.Programme = append(res.Programme, ProgrammeStep{
-					TimeMin: b.CoolingTimeMin * u,
-					LinearC: t0 - (t0-tf)*u,
-					CubicC:  t0 - (t0-tf)*u*u*u,
-				})
-			}
-			srcs.add(programmeSource)
-		}
+// seedAndProgramme suggests seeding and a cooling programme for a cooling batch that yields
+// crystals.
+func (pl *planner) seedAndProgramme() {
+	b, c, res := pl.b, pl.c, pl.res
+	if !(b.HasTarget && !pl.heating && res.HasOnset && res.CrystalsG > 0) {
+		return
 	}
+	drop := 1.0
+	if b.MetastableWidthK > 0 {
+		drop = math.Min(drop, b.MetastableWidthK/2)
+	}
+	res.HasSeedHint = true
+	res.SeedHintC = res.SaturationTempC - drop
+	if res.SeedHintC < b.TargetC {
+		res.SeedHintC = b.TargetC
+		pl.warn.add("the seeding suggestion is held at the target " + fmtC(b.TargetC) +
+			", less than " + unit.FormatCompact(drop, 2) + " K below the saturation temperature")
+	}
+	res.SeedPhase = c.SegmentAt(res.SeedHintC).Form.Formula
+	res.SeedLowG = 0.01 * res.CrystalsG
+	res.SeedHighG = 0.02 * res.CrystalsG
+	res.SeedRule = seedRule
+	pl.srcs.add(seedRule)
+	if b.CoolingTimeMin > 0 && res.SeedHintC > b.TargetC {
+		res.ProgrammeFromC, res.ProgrammeToC = res.SeedHintC, b.TargetC
+		t0, tf := res.SeedHintC, b.TargetC
+		res.Programme = make([]ProgrammeStep, 0, programmeRows+1)
+		for i := 0; i <= programmeRows; i++ {
+			u := float64(i) / programmeRows
+			res.Programme = append(res.Programme, ProgrammeStep{
+				TimeMin: b.CoolingTimeMin * u,
+				LinearC: t0 - (t0-tf)*u,
+				CubicC:  t0 - (t0-tf)*u*u*u,
+			})
+		}
+		pl.srcs.add(programmeSource)
+	}
+}
 
-	// Heat.
-	heat(&res, b, form, m, p, S, Wt, heating, &warn, &srcs)
+// finishPath adds the insulated end and the target to the path.
+func (pl *planner) finishPath() {
+	b, res := pl.b, pl.res
 	if res.HasAdiabatic {
-		res.Path = append(res.Path, PathPoint{Label: "adiabatic end", TempC: res.AdiabaticEndC, G100: res.AdiabaticG100})
+		res.Path = append(res.Path, point(PathAdiabaticEnd, res.AdiabaticEndC, res.AdiabaticG100))
 	}
 	if res.HasTarget {
-		res.Path = append(res.Path, PathPoint{Label: "end", TempC: res.TargetC, G100: res.LiquorG100})
+		res.Path = append(res.Path, point(PathEnd, res.TargetC, res.LiquorG100))
 	}
 	if b.WaterG > 0 && res.MinWaterG > 0 && res.SaturationPct > 99 {
-		warn.add("the batch is saturated at the dissolve temperature: any cooling or loss of water before filtering starts crystallization")
+		pl.warn.add("the batch is saturated at the dissolve temperature: any cooling or loss of water before filtering starts crystallization")
 	}
+}
 
-	temperatureWarnings(&res, b, &warn)
-
-	// Cautions: the compound's note, the general ones, and the SDS last.
-	cautions.add(c.Hazard)
+// cautionNotes adds the compound's note, the general cautions, and the SDS note last.
+func (pl *planner) cautionNotes() {
+	b, c, res := pl.b, pl.c, pl.res
+	pl.cautions.add(CautionHazard, c.Hazard)
 	hottest := b.DissolveTempC
 	if res.HasAdiabatic {
 		hottest = math.Max(hottest, res.AdiabaticEndC)
@@ -371,35 +450,47 @@ func Plan(b Batch) (Result, error) {
 		hottest = math.Max(hottest, b.TargetC)
 	}
 	if hottest > hotLiquidC {
-		cautions.add("Hot liquid: the batch reaches " + fmtC(hottest) + ". A spill scalds; use heat-resistant glassware, " +
-			"eye protection and gloves, and never close a heated vessel (the " + unit.FormatCompact(hotLiquidC, 2) +
+		pl.cautions.add(CautionHot, "Hot liquid: the batch reaches "+fmtC(hottest)+". A spill scalds; use heat-resistant glassware, "+
+			"eye protection and gloves, and never close a heated vessel (the "+unit.FormatCompact(hotLiquidC, 2)+
 			" °C threshold is common practice).")
 	}
 	if res.HasAdiabatic && res.AdiabaticRiseK > strongThermalK {
-		cautions.add("Strong exotherm: seeded, the insulated batch warms by " + unit.FormatCompact(res.AdiabaticRiseK, 3) +
+		pl.cautions.add(CautionExotherm, "Strong exotherm: seeded, the insulated batch warms by "+unit.FormatCompact(res.AdiabaticRiseK, 3)+
 			" K within minutes. Seed in an open vessel with room to stir, and expect a hot solid mass.")
 	}
 	if res.HasDissolutionHeat && math.Abs(res.DissolutionTempChangeK) > strongThermalK {
 		if res.DissolutionTempChangeK < 0 {
-			cautions.add("Strong endotherm: dissolving the charge cools the batch by up to " +
-				unit.FormatCompact(-res.DissolutionTempChangeK, 3) + " K; heat it while dissolving, and do not judge the temperature by touch.")
+			pl.cautions.add(CautionEndotherm, "Strong endotherm: dissolving the charge cools the batch by up to "+
+				unit.FormatCompact(-res.DissolutionTempChangeK, 3)+" K; heat it while dissolving, and do not judge the temperature by touch.")
 		} else {
-			cautions.add("Strong exotherm: dissolving the charge heats the batch by up to " +
-				unit.FormatCompact(res.DissolutionTempChangeK, 3) + " K; add the solid in portions with stirring.")
+			pl.cautions.add(CautionExotherm, "Strong exotherm: dissolving the charge heats the batch by up to "+
+				unit.FormatCompact(res.DissolutionTempChangeK, 3)+" K; add the solid in portions with stirring.")
 		}
 	}
 	if c.Oxidizer {
-		cautions.add(c.ID + " is an oxidizer: keep the solid, its solutions and the crystals away from organic material " +
+		pl.cautions.add(CautionOxidizer, c.ID+" is an oxidizer: keep the solid, its solutions and the crystals away from organic material "+
 			"(paper, wood, cloth, sugar, solvents); residues dried onto organics burn fiercely.")
 	}
-	cautions.add(safetyNote)
+	pl.cautions.add(CautionSDS, safetyNote)
+}
 
-	res.Cautions, res.Warnings = cautions.list, warn.list
-	res.Sources = srcs.list
-	if err := res.checkFinite(); err != nil {
-		return Result{}, err
+// cautionList collects cautions with their kinds, without repeats.
+type cautionList struct {
+	text  []string
+	kinds []CautionKind
+}
+
+func (l *cautionList) add(k CautionKind, s string) {
+	if s == "" {
+		return
 	}
-	return res, nil
+	for _, x := range l.text {
+		if x == s {
+			return
+		}
+	}
+	l.text = append(l.text, s)
+	l.kinds = append(l.kinds, k)
 }
 
 // setsSolid explains a batch whose crystals at the target would take up all the water:
@@ -454,6 +545,8 @@ func temperatureWarnings(res *Result, b Batch, warn *notes) {
 	} {
 		switch {
 		case !n.ok:
+		case n.t < freezeC && res.Compound.Freezing != nil:
+			warn.add(coldNote(res, n.key, n.t))
 		case n.t < freezeC:
 			warn.add(n.key + " " + fmtC(n.t) + " is below 0 °C: the liquor may freeze there, and ice is not modelled " +
 				"(the solute lowers the freezing point by an amount Saltcast does not compute; below the eutectic ice and salt separate together)")
@@ -509,7 +602,9 @@ func (r *Result) checkFinite() error {
 		r.HeatCapacityKJPerK, r.DissolutionHeatKJ, r.DissolutionTempChangeK, r.DissolutionEnthalpyKJPerMol,
 		r.CrystallizationHeatKJ, r.CrystalEnthalpyKJPerMol, r.ApparentEnthalpyKJPerMol, r.SensibleHeatKJ,
 		r.CoolingDutyKJ, r.CoolingPowerW, r.CoolingTimeMin, r.SeedAtC, r.AdiabaticEndC, r.AdiabaticCrystalsG,
-		r.AdiabaticRiseK, r.AdiabaticG100} {
+		r.AdiabaticRiseK, r.AdiabaticG100, r.CrystalEnthalpyLowKJPerMol, r.CrystallizationHeatLowKJ, r.AdiabaticHeatKJ,
+		r.AdiabaticEnthalpyKJPerMol, r.AdiabaticHeatCapacityKJPerK, r.AdiabaticCrystalsLowG, r.AdiabaticEndLowC,
+		r.FreezingPointC, r.IceG, r.EutecticC, r.EutecticG100} {
 		chk(v)
 	}
 	for _, p := range r.PhaseChanges {

@@ -48,6 +48,20 @@ type Result struct {
 	SolubilityAtTargetG100 float64
 	PhaseChanges           []PhaseChange
 
+	// The cold side (ice.go). FreezingPointC is where ice starts to form from the solution as
+	// made (HasFreezing: the freezing data cover it). IceG is the ice at the target (HasIce: the
+	// target is below 0 °C and the compound has freezing data; 0 = none); Frozen means the
+	// target is below the eutectic and no liquor is left. The eutectic is the compound's.
+	HasFreezing    bool
+	FreezingPointC float64
+	HasIce         bool
+	IceG           float64
+	Frozen         bool
+	HasEutectic    bool
+	EutecticC      float64
+	EutecticG100   float64
+	EutecticPhase  string
+
 	// Unseeded path and seeding.
 	Supersaturation  []SupersaturationPoint // from the onset to the target (or to seed_at_C)
 	HasMetastable    bool
@@ -67,22 +81,27 @@ type Result struct {
 
 	// Heat. Positive DissolutionHeatKJ = the batch absorbs heat while dissolving; positive
 	// CrystallizationHeatKJ = released by the crystals forming.
-	HeatCapacityKJPerK          float64 // batch (liquor + vessel)
-	HeatCapacityModel           string
+	HeatCapacityKJPerK          float64 // batch (liquor + vessel) before crystals form
+	HeatCapacityModel           string  // the model, with its sources, beside the figure
 	HasDissolutionHeat          bool
 	DissolutionHeatKJ           float64
 	DissolutionTempChangeK      float64 // if insulated: negative = the batch cools
 	DissolutionEnthalpyKJPerMol float64 // of the charged form
 	CrystallizationHeatKJ       float64
-	CrystalEnthalpyKJPerMol     float64 // of the crystal phase, the value used
+	CrystalEnthalpyKJPerMol     float64 // of the crystal phase, the design value (the safe end of the range)
 	ApparentEnthalpyKJPerMol    float64 // van 't Hoff, from the curve slope (HasApparent)
 	HasApparent                 bool
-	EnthalpyBasis               string // which enthalpy is used and why
-	SensibleHeatKJ              float64
-	CoolingDutyKJ               float64
-	HasCoolingPower             bool
-	CoolingPowerW               float64 // mean over the cooling time
-	CoolingTimeMin              float64
+	EnthalpyBasis               string // which enthalpy is used and why, with every estimate and its source
+
+	// The crystallization heat basis and the range of the estimates behind the design value.
+	HeatBasis                  HeatBasis // short name of the basis of the central estimate
+	CrystalEnthalpyLowKJPerMol float64   // lowest best estimate; equals the design value when they agree
+	CrystallizationHeatLowKJ   float64   // the crystallization heat with the lowest best estimate
+	SensibleHeatKJ             float64
+	CoolingDutyKJ              float64
+	HasCoolingPower            bool
+	CoolingPowerW              float64 // mean over the cooling time
+	CoolingTimeMin             float64
 
 	// Seeded in an insulated vessel at SeedAtC.
 	HasAdiabatic       bool
@@ -93,14 +112,50 @@ type Result struct {
 	AdiabaticPhase     string
 	AdiabaticG100      float64 // liquor concentration at the end, g per 100 g water
 	AdiabaticBasis     string  // the enthalpy used
+	// The insulated balance: AdiabaticHeatKJ released by the crystals equals
+	// AdiabaticHeatCapacityKJPerK × AdiabaticRiseK taken up by slurry and vessel.
+	AdiabaticHeatKJ             float64
+	AdiabaticEnthalpyKJPerMol   float64 // heat released per mol of the phase, the design value
+	AdiabaticHeatCapacityKJPerK float64
+	AdiabaticHeld               bool    // the temperature holds at the end of the seeded phase's range
+	AdiabaticCrystalsLowG       float64 // crystals with the lowest best estimate of the heat
+	AdiabaticEndLowC            float64 // end temperature with the lowest best estimate
 
 	// Points for a chart of concentration against temperature, in path order.
 	Path []PathPoint
 
-	Cautions []string
-	Warnings []string
-	Sources  []string
+	Cautions     []string
+	CautionKinds []CautionKind // CautionKinds[i] is the kind of Cautions[i]
+	Warnings     []string
+	Sources      []string
 }
+
+// CautionKind sorts cautions so that code tests the kind, never the wording.
+type CautionKind string
+
+// The kinds of caution.
+const (
+	CautionHazard    CautionKind = "hazard"     // the compound's own hazard note (points to the SDS)
+	CautionHot       CautionKind = "hot-liquid" // the batch gets hot enough to scald
+	CautionExotherm  CautionKind = "exotherm"   // an insulated batch warms strongly
+	CautionEndotherm CautionKind = "endotherm"  // dissolving cools the batch strongly
+	CautionOxidizer  CautionKind = "oxidizer"   // keep from organics
+	CautionSDS       CautionKind = "sds"        // read the SDS, local rules, licensed practice
+)
+
+// HasCaution reports whether a caution of kind k applies.
+func (r *Result) HasCaution(k CautionKind) bool {
+	for _, x := range r.CautionKinds {
+		if x == k {
+			return true
+		}
+	}
+	return false
+}
+
+// PointsToSDS reports whether the cautions send the reader to the SDS (the general safety
+// note, or the compound's hazard note, which always ends by pointing there).
+func (r *Result) PointsToSDS() bool { return r.HasCaution(CautionSDS) || r.HasCaution(CautionHazard) }
 
 // PhaseChange is a change of the stable solid phase crossed between the dissolve and the
 // target temperature.
@@ -126,7 +181,29 @@ type ProgrammeStep struct {
 
 // PathPoint is a labelled state on the concentration–temperature chart.
 type PathPoint struct {
-	Label string // "dissolve", "onset", "nucleation", "seed", "adiabatic end", "end"
+	Kind  PathKind
+	Label string // text for a reader: "dissolve", "onset", "nucleation", "seed", "adiabatic end", "end"
 	TempC float64
 	G100  float64 // liquor concentration, g per 100 g water
+}
+
+// PathKind says which state a path point is; code matches the kind, not the label.
+type PathKind string
+
+// The kinds of path point, in path order.
+const (
+	PathDissolve     PathKind = "dissolve"
+	PathOnset        PathKind = "onset"
+	PathNucleation   PathKind = "nucleation"
+	PathSeed         PathKind = "seed"
+	PathAdiabaticEnd PathKind = "adiabatic_end"
+	PathEnd          PathKind = "end"
+)
+
+// pathLabels are the labels the JSON has always carried for each kind.
+var pathLabels = map[PathKind]string{PathDissolve: "dissolve", PathOnset: "onset", PathNucleation: "nucleation",
+	PathSeed: "seed", PathAdiabaticEnd: "adiabatic end", PathEnd: "end"}
+
+func point(k PathKind, tempC, g100 float64) PathPoint {
+	return PathPoint{Kind: k, Label: pathLabels[k], TempC: tempC, G100: g100}
 }

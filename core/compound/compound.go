@@ -4,6 +4,7 @@ import (
 	"math"
 	"strings"
 
+	"saltcast/core/activity"
 	"saltcast/core/solubility"
 	"saltcast/core/unit"
 )
@@ -18,6 +19,37 @@ type Form struct {
 	SolutionEnthalpyKJPerMol float64 // per mol of this form, infinite dilution, 25 °C; + = endothermic
 	HasEnthalpy              bool
 	EnthalpySource           string
+
+	// Heat of fusion of a hydrate that melts congruently or nearly so (in its own water of
+	// crystallization), per kg of this form; a published range, low ≤ high.
+	FusionKJPerKgLow, FusionKJPerKgHigh float64
+	HasFusion                           bool
+	FusionSource                        string
+
+	// Heat capacity of the solid near 25 °C; see SolidHeatCapacity for the fallback.
+	SolidCpJPerMolK float64
+	HasSolidCp      bool
+	SolidCpSource   string
+
+	// Heat capacity of the melt of this hydrate (the liquid of its own composition).
+	MeltCpKJPerKgK float64
+	HasMeltCp      bool
+	MeltCpSource   string
+}
+
+// SolidHeatCapacity returns the heat capacity of the solid form in kJ/(kg·K) (= J/(g·K)) near
+// 25 °C, and where it comes from: the library value, or else Kopp's rule (the sum of atomic
+// heat capacities; see KoppHeatCapacity), said so in the source.
+func (f *Form) SolidHeatCapacity() (kJPerKgK float64, source string) {
+	if f.HasSolidCp {
+		return f.SolidCpJPerMolK / f.MolarMassGPerMol, f.SolidCpSource
+	}
+	cp, ok := KoppHeatCapacity(f.Formula)
+	if !ok {
+		// Every library and custom formula parses (its molar mass did); keep a neutral value.
+		cp = 1.0 * f.MolarMassGPerMol
+	}
+	return cp / f.MolarMassGPerMol, koppSource
 }
 
 // Segment is a temperature range in which Form is the stable solid, with its curve.
@@ -39,16 +71,18 @@ type Compound struct {
 	Name             string
 	Names            []string
 	MolarMassGPerMol float64
-	Forms            []*Form   // Forms[0] is the anhydrous form
-	Segments         []Segment // ordered by temperature, contiguous
-	Hazard           string    // general note, ends by pointing to the SDS
-	Oxidizer         bool      // strong oxidizer: keep from organics and fuels
-	Organic          bool      // the solute itself is organic (combustible)
-	Toxic            bool      // acutely toxic, carcinogenic, mutagenic or toxic to reproduction: Hazard carries the strong wording
-	Sources          []string  // every source cited by the compound's data
-	Notes            []string  // remarks on the data a technician should see
-	Cautions         []Caution // range-bound warnings added to Solubility
-	Custom           bool      // made by NewCustom, not from the library
+	Forms            []*Form        // Forms[0] is the anhydrous form
+	Segments         []Segment      // ordered by temperature, contiguous
+	Hazard           string         // general note, ends by pointing to the SDS
+	Oxidizer         bool           // strong oxidizer: keep from organics and fuels
+	Organic          bool           // the solute itself is organic (combustible)
+	Toxic            bool           // acutely toxic, carcinogenic, mutagenic or toxic to reproduction: Hazard carries the strong wording
+	Sources          []string       // every source cited by the compound's data
+	Notes            []string       // remarks on the data a technician should see
+	Cautions         []Caution      // range-bound warnings added to Solubility
+	Custom           bool           // made by NewCustom, not from the library
+	Activity         *activity.Salt // Pitzer parameters of the dissolved salt; nil when the library has none
+	Freezing         *Freezing      // freezing curve and eutectic; nil where the library has no data
 	density          *densityFit
 }
 

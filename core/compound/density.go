@@ -114,6 +114,16 @@ func (d *densityFit) at(w float64) float64 {
 // HasDensity reports whether the library has solution densities for the compound.
 func (c *Compound) HasDensity() bool { return c.density != nil }
 
+// DensityLimits returns the strongest tabulated solution (mass fraction of anhydrous solute)
+// and the strongest that SolutionDensityKgPerM3 still answers, with a warning, beyond it;
+// both are 0 when the compound has no density data.
+func (c *Compound) DensityLimits() (tabulated, answered float64) {
+	if c.density == nil {
+		return 0, 0
+	}
+	return c.density.maxW, c.density.maxW + densityOverMassPct/100.0
+}
+
 // DensitySource names the source of the density data, or "" if there are none.
 func (c *Compound) DensitySource() string {
 	if c.density == nil {

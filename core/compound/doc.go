@@ -17,6 +17,10 @@
 // temperatures or stronger solutions give a warning; a compound without density data returns
 // an error that asks for the density.
 //
+// Freezing: a compound may carry a freezing curve (Freezing: the freezing point of its
+// solutions against concentration, linear between CRC rows, never extrapolated) and the
+// eutectic with ice, which also ends the coldest phase's solubility curve.
+//
 // Sources: the data file library.txt names a source on every dataset and value; mainly the CRC
 // Handbook of Chemistry and Physics (98th ed., aqueous solubility; 102nd ed., concentrative
 // properties), Perry's Chemical Engineers' Handbook and the PHREEQC thermodynamic databases.

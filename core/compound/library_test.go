@@ -2,6 +2,7 @@ package compound
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"saltcast/core/solubility"
@@ -406,4 +407,68 @@ func contains(s, sub string) bool {
 		}
 	}
 	return false
+}
+
+func TestHeatData(t *testing.T) {
+	// Kopp's rule against measured solid heat capacities at 25 °C (NBS tables, Wagman et al.
+	// 1982, from memory): the rule is good to about 20 %.
+	const koppTol = 0.20 // relative, the rule's usual accuracy (Perry's, from memory)
+	for _, c := range []struct {
+		formula string
+		want    float64 // J/(mol·K)
+	}{{"KNO3", 96.4}, {"Na2SO4·10H2O", 592.0}, {"CuSO4·5H2O", 280.0}, {"NaCl", 50.5}} {
+		got, ok := KoppHeatCapacity(c.formula)
+		if !ok || math.Abs(got-c.want) > koppTol*c.want {
+			t.Errorf("KoppHeatCapacity(%s) = %v, %v; want %v ± %v %%", c.formula, got, ok, c.want, 100*koppTol)
+		}
+	}
+	na, _, _ := Lookup("CH3COONa")
+	tri, _ := na.Form("CH3COONa·3H2O")
+	if !tri.HasFusion || tri.FusionKJPerKgLow != 264 || !tri.HasMeltCp {
+		t.Errorf("CH3COONa·3H2O fusion %v %v, melt cp %v", tri.HasFusion, tri.FusionKJPerKgLow, tri.HasMeltCp)
+	}
+	if na.Activity != nil {
+		t.Error("CH3COONa has Pitzer parameters; the library holds none for it")
+	}
+	k, _, _ := Lookup("KNO3")
+	if k.Activity == nil || k.Activity.MaxMolal != 3.8 {
+		t.Fatal("KNO3 has no Pitzer parameters")
+	}
+	if cp, src := k.Forms[0].SolidHeatCapacity(); math.Abs(cp-96.4/101.1032) > 1e-3 || !strings.Contains(src, "NBS") {
+		t.Errorf("KNO3 SolidHeatCapacity = %v (%s)", cp, src)
+	}
+	if _, src := mustForm(t, "C6H5COOH").SolidHeatCapacity(); strings.Contains(src, "Kopp") {
+		t.Errorf("benzoic acid solid cp from %q, want the library value", src)
+	}
+}
+
+func mustForm(t *testing.T, id string) *Form {
+	t.Helper()
+	c, _, err := Lookup(id)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return c.Forms[0]
+}
+
+func TestParseHeatStatements(t *testing.T) {
+	base := "compound KCl\nname x\nhazard h. See the SDS.\nform KCl\n%s\nphase KCl | 0 | 10\nunit g/100g | s\n0 1\n10 2\nend\n"
+	for _, c := range []struct {
+		line string
+		ok   bool
+	}{
+		{"pitzer 1 | 1 | 1 | 1 | 0.05 | 0.2 | 0 | 4 | s", true},
+		{"pitzer 2 | 1 | 1 | 1 | 0.05 | 0.2 | 0 | 4 | s", false}, // charges do not balance
+		{"pitzer 1 | 2 | 1 | 2 | 0.05 | 0.2 | 0 | 4 | s", false}, // 2-2 needs β2
+		{"pitzer 1 | 1 | 1 | 1 | 0.05 | 0.2 | 0 | 0 | s", false}, // no range
+		{"solidcp KCl | 51.3 | s", true},
+		{"solidcp KCl | -1 | s", false},
+		{"fusion KCl | 1 | 2 | s", false}, // not a hydrate
+		{"meltcp KCl | 3 | s", false},
+	} {
+		_, err := Parse([]byte(strings.Replace(base, "%s", c.line, 1)))
+		if (err == nil) != c.ok {
+			t.Errorf("Parse(%q) error %v, want ok %v", c.line, err, c.ok)
+		}
+	}
 }

@@ -6,6 +6,7 @@ import (
 	"strconv"
 	"strings"
 
+	"saltcast/core/activity"
 	"saltcast/core/solubility"
 )
 
@@ -65,10 +66,20 @@ type parser struct {
 	out     []*Compound
 	seen    map[string]bool
 
-	c       *Compound
-	phases  []*phaseDef
-	rows    *rowSet // rows being filled: a phase's or the density's
-	density *rowSet
+	c        *Compound
+	phases   []*phaseDef
+	rows     *rowSet // rows being filled: a phase's, the density's or the freezing curve's
+	density  *rowSet
+	freezing *rowSet
+	eutectic *eutecticDef
+}
+
+type eutecticDef struct {
+	line         int
+	text         string
+	tempC, massP float64
+	form         *Form
+	source       string
 }
 
 func (p *parser) fail(msg string) error { return &ParseError{Line: p.line, Text: p.text, Msg: msg} }
@@ -126,6 +137,10 @@ func (p *parser) statement() error {
 		return p.form(fields)
 	case "enthalpy":
 		return p.enthalpy(fields)
+	case "fusion", "solidcp", "meltcp":
+		return p.formHeat(kw, fields)
+	case "pitzer":
+		return p.pitzer(fields)
 	case "phase":
 		return p.phase(fields)
 	case "unit":
@@ -143,6 +158,10 @@ func (p *parser) statement() error {
 		}
 		p.density = &rowSet{line: p.line, unit: "density", source: src}
 		p.rows = p.density
+	case "freezing":
+		return p.freezingBlock(fields)
+	case "eutectic":
+		return p.eutecticLine(fields)
 	case "caution":
 		if len(fields) != 3 {
 			return p.fail("want: caution from °C | to °C | text")
@@ -249,7 +268,7 @@ func (p *parser) compound(fields []string) error {
 	}
 	p.seen[id] = true
 	p.c = &Compound{ID: id, MolarMassGPerMol: m}
-	p.phases, p.rows, p.density = nil, nil, nil
+	p.phases, p.rows, p.density, p.freezing, p.eutectic = nil, nil, nil, nil, nil
 	return nil
 }
 
@@ -320,6 +339,93 @@ func (p *parser) enthalpy(fields []string) error {
 	return nil
 }
 
+// formHeat reads the heat data of one form: fusion FORMULA | kJ/kg low | kJ/kg high | source,
+// solidcp FORMULA | J/(mol·K) | source, meltcp FORMULA | kJ/(kg·K) | source.
+func (p *parser) formHeat(kw string, fields []string) error {
+	want := map[string]string{
+		"fusion":  "fusion FORMULA | kJ/kg low | kJ/kg high | source",
+		"solidcp": "solidcp FORMULA | J/(mol·K) | source",
+		"meltcp":  "meltcp FORMULA | kJ/(kg·K) | source",
+	}[kw]
+	n := 3
+	if kw == "fusion" {
+		n = 4
+	}
+	if len(fields) != n {
+		return p.fail("want: " + want)
+	}
+	f, err := p.findForm(fields[0])
+	if err != nil {
+		return err
+	}
+	v := make([]float64, n-2)
+	for i := range v {
+		x, err := strconv.ParseFloat(fields[1+i], 64)
+		if err != nil || !(x > 0 && x < 5000) {
+			return p.fail("want: " + want + ", with positive numbers")
+		}
+		v[i] = x
+	}
+	src, err := p.source(fields[n-1])
+	if err != nil {
+		return err
+	}
+	switch kw {
+	case "fusion":
+		if f.HasFusion || f.WaterPerFormula == 0 || v[0] > v[1] {
+			return p.fail("one fusion line per hydrate, low value first")
+		}
+		f.FusionKJPerKgLow, f.FusionKJPerKgHigh, f.HasFusion, f.FusionSource = v[0], v[1], true, src
+	case "solidcp":
+		if f.HasSolidCp {
+			return p.fail("second solidcp for " + f.Formula)
+		}
+		f.SolidCpJPerMolK, f.HasSolidCp, f.SolidCpSource = v[0], true, src
+	case "meltcp":
+		if f.HasMeltCp || f.WaterPerFormula == 0 || v[0] > 10 {
+			return p.fail("one meltcp line per hydrate, in kJ/(kg·K)")
+		}
+		f.MeltCpKJPerKgK, f.HasMeltCp, f.MeltCpSource = v[0], true, src
+	}
+	p.addSource(src)
+	return nil
+}
+
+// pitzer reads pitzer ν+ | z+ | ν− | z− | β0 | β1 | Cφ | max mol/kg | source.
+func (p *parser) pitzer(fields []string) error {
+	const want = "want: pitzer ν+ | z+ | ν− | z− | β0 | β1 | Cφ | max mol/kg | source"
+	if len(fields) != 9 || p.c.Activity != nil {
+		return p.fail(want + " (once per compound)")
+	}
+	var v [8]float64
+	for i := range v {
+		x, err := strconv.ParseFloat(fields[i], 64)
+		if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || math.Abs(x) > 100 {
+			return p.fail(want)
+		}
+		v[i] = x
+	}
+	for _, i := range [...]int{0, 1, 2, 3, 7} {
+		if !(v[i] > 0) {
+			return p.fail(want + ", with positive ion counts, charges and range")
+		}
+	}
+	if v[0]*v[1] != v[2]*v[3] {
+		return p.fail("the charges do not balance: ν+·z+ must equal ν−·z−")
+	}
+	if v[1] > 1 && v[3] > 1 {
+		return p.fail("salts of two multivalent ions need β2, which this model leaves out")
+	}
+	src, err := p.source(fields[8])
+	if err != nil {
+		return err
+	}
+	p.c.Activity = &activity.Salt{NuM: v[0], ZM: v[1], NuX: v[2], ZX: v[3], Beta0: v[4], Beta1: v[5], CPhi: v[6],
+		MaxMolal: v[7], Source: src}
+	p.addSource(src)
+	return nil
+}
+
 func (p *parser) phase(fields []string) error {
 	if len(fields) != 3 {
 		return p.fail("want: phase FORMULA | from °C | to °C")
@@ -339,6 +445,9 @@ func (p *parser) phase(fields []string) error {
 	if p.density != nil {
 		return p.fail("phases come before the density block")
 	}
+	if p.freezing != nil {
+		return p.fail("phases come before the freezing block")
+	}
 	ph := &phaseDef{form: f, minC: lo, maxC: hi, rows: rowSet{line: p.line}}
 	p.phases = append(p.phases, ph)
 	p.rows = &ph.rows
@@ -346,7 +455,7 @@ func (p *parser) phase(fields []string) error {
 }
 
 func (p *parser) unit(fields []string) error {
-	if p.rows == nil || p.rows == p.density {
+	if p.rows == nil || p.rows == p.density || p.rows == p.freezing {
 		return p.fail("unit belongs under a phase line")
 	}
 	if len(fields) != 2 || (fields[0] != "mass%" && fields[0] != "g/100g") {
@@ -362,7 +471,7 @@ func (p *parser) unit(fields []string) error {
 
 func (p *parser) row(s string) error {
 	if p.c == nil || p.rows == nil {
-		return p.fail("a data row must follow a phase or density line")
+		return p.fail("a data row must follow a phase, density or freezing line")
 	}
 	nums, src, _ := strings.Cut(s, "|")
 	f := strings.Fields(nums)
@@ -398,6 +507,10 @@ func (p *parser) row(s string) error {
 		if !(a > 0 && a < 100 && b > 0.5 && b < 5) {
 			return p.fail("a density row is mass % (0–100) and g/cm³ (0.5–5)")
 		}
+	case "freezing":
+		if !(a > 0 && a < 100 && b > 0 && b < 100) {
+			return p.fail("a freezing row is mass % (0–100) and a depression in K (0–100)")
+		}
 	}
 	p.rows.pts = append(p.rows.pts, solubility.Point{TempC: a, GPer100gWater: b})
 	p.rows.rowSources = append(p.rows.rowSources, source)
@@ -429,6 +542,10 @@ func (p *parser) end() error {
 		return p.fail("compound " + c.ID + " has no forms")
 	case len(p.phases) == 0:
 		return p.fail("compound " + c.ID + " has no phases")
+	}
+	extended, err := p.extendToEutectic()
+	if err != nil {
+		return err
 	}
 	for i, ph := range p.phases {
 		pts := ph.rows.pts
@@ -464,6 +581,9 @@ func (p *parser) end() error {
 			}
 		}
 	}
+	if err := p.buildFreezing(extended); err != nil {
+		return err
+	}
 	if p.density != nil {
 		d, err := fitDensity(p.density.pts, p.density.source)
 		if err != nil {
@@ -472,6 +592,6 @@ func (p *parser) end() error {
 		c.density = d
 	}
 	p.out = append(p.out, c)
-	p.c, p.phases, p.rows, p.density = nil, nil, nil, nil
+	p.c, p.phases, p.rows, p.density, p.freezing, p.eutectic = nil, nil, nil, nil, nil, nil
 	return nil
 }

@@ -83,6 +83,11 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("liquor_g", r.LiquorG, t)
 	opt("liquor_g_per_100g_water", r.LiquorG100, t)
 	opt("solubility_at_target_g_per_100g_water", r.SolubilityAtTargetG100, t)
+	opt("freezing_point_C", r.FreezingPointC, r.HasFreezing)
+	opt("ice_g", r.IceG, t && r.HasIce)
+	e.Key("frozen_solid").Bool(t && r.Frozen)
+	opt("eutectic_C", r.EutecticC, r.HasEutectic)
+	optStr("eutectic_phase", r.EutecticPhase, r.HasEutectic)
 	e.Key("phase_changes").BeginArray()
 	for _, p := range r.PhaseChanges {
 		e.BeginObject()
@@ -138,6 +143,9 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("crystal_enthalpy_kJ_per_mol", r.CrystalEnthalpyKJPerMol, t && r.EnthalpyBasis != "")
 	opt("apparent_enthalpy_kJ_per_mol", r.ApparentEnthalpyKJPerMol, t && r.HasApparent)
 	optStr("enthalpy_basis", r.EnthalpyBasis, r.EnthalpyBasis != "")
+	optStr("heat_basis", string(r.HeatBasis), r.HeatBasis != "")
+	opt("crystal_enthalpy_low_kJ_per_mol", r.CrystalEnthalpyLowKJPerMol, t && r.HeatBasis != "")
+	opt("crystallization_heat_low_kJ", r.CrystallizationHeatLowKJ, t && r.HeatBasis != "")
 	opt("sensible_heat_kJ", r.SensibleHeatKJ, t)
 	opt("cooling_duty_kJ", r.CoolingDutyKJ, t)
 	opt("cooling_time_min", r.CoolingTimeMin, r.HasCoolingPower)
@@ -150,17 +158,34 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("adiabatic_crystals_g", r.AdiabaticCrystalsG, a)
 	opt("adiabatic_rise_K", r.AdiabaticRiseK, a)
 	optStr("adiabatic_phase", r.AdiabaticPhase, a)
+	if a {
+		e.Key("adiabatic_held_at_transition").Bool(r.AdiabaticHeld)
+	} else {
+		e.Key("adiabatic_held_at_transition").Null()
+	}
+	opt("adiabatic_heat_kJ", r.AdiabaticHeatKJ, a)
+	opt("adiabatic_heat_capacity_kJ_per_K", r.AdiabaticHeatCapacityKJPerK, a)
+	opt("adiabatic_enthalpy_kJ_per_mol", r.AdiabaticEnthalpyKJPerMol, a)
+	opt("adiabatic_crystals_low_g", r.AdiabaticCrystalsLowG, a)
+	opt("adiabatic_end_low_temp_C", r.AdiabaticEndLowC, a)
+	optStr("adiabatic_basis", r.AdiabaticBasis, a)
 
 	e.Key("path").BeginArray()
 	for _, p := range r.Path {
 		e.BeginObject()
 		e.Key("label").String(p.Label)
+		e.Key("kind").String(string(p.Kind))
 		num("temp_C", p.TempC)
 		num("g_per_100g_water", p.G100)
 		e.EndObject()
 	}
 	e.EndArray()
 	list("cautions", r.Cautions)
+	e.Key("caution_kinds").BeginArray()
+	for _, k := range r.CautionKinds {
+		e.String(string(k))
+	}
+	e.EndArray()
 	list("warnings", r.Warnings)
 	list("sources", r.Sources)
 	e.EndObject()

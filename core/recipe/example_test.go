@@ -36,3 +36,22 @@ func ExampleDecode() {
 	fmt.Println(err)
 	// Output: purity_pct: "120" is not allowed; allowed: a percentage > 0 and ≤ 100
 }
+
+// A preparation recipe as a technician writes it: 1 L of 0.5 mol/L NaCl from the 5 mol/L
+// stock on the shelf. c1·V1 = c2·V2 gives 100 mL of stock; 0.5·58.44 = 29.2 g/L by definition;
+// 2.87 % w/w between the CRC 102nd ed. rows 2.5 % (0.435 mol/L) and 3 % (0.523 mol/L).
+func ExamplePlanPrep() {
+	p, err := recipe.DecodePrep([]byte(`{"solute":"NaCl","concentration":0.5,"concentration_unit":"mol/L",
+		"final_volume_mL":1000,"stock_concentration":5,"stock_unit":"mol/L"}`))
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	res, err := recipe.PlanPrep(p)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%.1f mL of stock, water to the mark; %.2f %% w/w, %.1f g/L\n", res.StockML, res.PctWW, res.GPerL)
+	// Output: 100.0 mL of stock, water to the mark; 2.87 % w/w, 29.2 g/L
+}

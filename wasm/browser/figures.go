@@ -67,6 +67,9 @@ var Figures = []Figure{
 	{Key: "adiabatic_end_temp_C", Label: "Seeded in an insulated vessel: ends at", Kind: kTemp, Sig: 1, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticEndC })},
 	{Key: "adiabatic_crystals_g", Label: "Seeded in an insulated vessel: crystals", Kind: kMass, Sig: 4, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticCrystalsG })},
 	{Key: "adiabatic_rise_K", Label: "Seeded in an insulated vessel: temperature jump", Kind: kDelta, Sig: 1, Get: numIf(hasAdiabatic, func(r *recipe.Result) float64 { return r.AdiabaticRiseK })},
+	{Key: "freezing_point_C", Label: "Solution freezes (ice forms) at", Kind: kTemp, Sig: 1, Get: numIf(func(r *recipe.Result) bool { return r.HasFreezing }, func(r *recipe.Result) float64 { return r.FreezingPointC })},
+	{Key: "ice_g", Label: "Ice at target", Kind: kMass, Sig: 4, Get: numIf(func(r *recipe.Result) bool { return r.HasTarget && r.HasIce }, func(r *recipe.Result) float64 { return r.IceG })},
+	{Key: "eutectic_C", Label: "Freezes solid (eutectic) below", Kind: kTemp, Sig: 1, Get: numIf(func(r *recipe.Result) bool { return r.HasTarget && r.HasIce && r.HasEutectic }, func(r *recipe.Result) float64 { return r.EutecticC })},
 }
 
 // FigureByKey finds a figure of Figures.

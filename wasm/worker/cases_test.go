@@ -48,6 +48,10 @@ func plan(body []byte) func() ([]byte, error) {
 	return func() ([]byte, error) { return api.Plan(body) }
 }
 
+func prepare(body []byte) func() ([]byte, error) {
+	return func() ([]byte, error) { return api.Prep(body) }
+}
+
 func params(call func(api.Params) ([]byte, error), p api.Params) func() ([]byte, error) {
 	return func() ([]byte, error) { return call(p) }
 }
@@ -56,6 +60,8 @@ func params(call func(api.Params) ([]byte, error), p api.Params) func() ([]byte,
 func apiCases(t testing.TB) []apiCase {
 	kno3 := testdataFile(t, "demo-kno3-stock.json")
 	cuso4 := testdataFile(t, "demo-cuso4-crystals.json")
+	kclPrep := testdataFile(t, "demo-prep-kcl-coldroom.json")
+	const dilution = `{"solute":"NaCl","concentration":0.5,"concentration_unit":"mol/L","final_volume_mL":1000,"stock_concentration":5,"stock_unit":"mol/L"}`
 	oversize := append([]byte(`{"notes":"`), bytes.Repeat([]byte("x"), MaxBodyBytes)...)
 	oversize = append(oversize, `"}`...)
 	const js = "application/json"
@@ -79,6 +85,17 @@ func apiCases(t testing.TB) []apiCase {
 		{name: "plan form-encoded", method: "POST", path: "/api/v1/plan", contentType: "application/x-www-form-urlencoded", body: []byte("solute=KNO3"), status: 415},
 		{name: "plan GET", method: "GET", path: "/api/v1/plan", status: 405, allow: "POST, OPTIONS"},
 		{name: "plan OPTIONS", method: "OPTIONS", path: "/api/v1/plan", status: 204, allow: "POST, OPTIONS"},
+
+		// prep: a solution made up to the mark, a dilution, bad input
+		{name: "prep kcl", method: "POST", path: "/api/v1/prep", contentType: js, body: kclPrep, status: 200, want: prepare(kclPrep)},
+		{name: "prep dilution", method: "POST", path: "/api/v1/prep", contentType: js, body: []byte(dilution), status: 200, want: prepare([]byte(dilution))},
+		{name: "prep unknown field", method: "POST", path: "/api/v1/prep", contentType: js, body: []byte(`{"solute":"KCl","concentration":1,"concentration_unit":"mol/L","final_volume_mL":100,"flask":"A"}`),
+			status: 400, field: "flask", want: prepare([]byte(`{"solute":"KCl","concentration":1,"concentration_unit":"mol/L","final_volume_mL":100,"flask":"A"}`))},
+		{name: "prep no density", method: "POST", path: "/api/v1/prep", contentType: js, body: []byte(`{"solute":"KH2PO4","concentration":1,"concentration_unit":"mol/L","final_volume_mL":100}`),
+			status: 400, field: "concentration_unit", want: prepare([]byte(`{"solute":"KH2PO4","concentration":1,"concentration_unit":"mol/L","final_volume_mL":100}`))},
+		{name: "prep malformed", method: "POST", path: "/api/v1/prep", contentType: js, body: []byte(`{"solute":`), status: 400, want: prepare([]byte(`{"solute":`))},
+		{name: "prep oversize", method: "POST", path: "/api/v1/prep", contentType: js, body: oversize, status: 413},
+		{name: "prep GET", method: "GET", path: "/api/v1/prep", status: 405, allow: "POST, OPTIONS"},
 
 		// solubility
 		{name: "solubility KNO3", method: "GET", path: "/api/v1/solubility?solute=KNO3&temp_C=20", status: 200,

@@ -92,6 +92,7 @@ func NewHandler(opt Options) http.Handler {
 	}
 	h.routes = map[string]route{
 		"/api/v1/plan":         {methods: "POST", serve: h.plan},
+		"/api/v1/prep":         {methods: "POST", serve: h.prep},
 		"/api/v1/solubility":   {methods: "GET, HEAD", serve: h.query(api.Solubility)},
 		"/api/v1/gas":          {methods: "GET, HEAD, POST", serve: h.gas},
 		"/api/v1/gas/outgas":   {methods: "GET, HEAD", serve: h.query(api.Outgas)},
@@ -228,6 +229,15 @@ func (h *handler) plan(r *http.Request) ([]byte, error) {
 		return nil, err
 	}
 	return api.Plan(body)
+}
+
+// prep answers POST /api/v1/prep: a preparation recipe in, the worked preparation out.
+func (h *handler) prep(r *http.Request) ([]byte, error) {
+	body, err := readBody(r)
+	if err != nil {
+		return nil, err
+	}
+	return api.Prep(body)
 }
 
 // query adapts a service call that takes the query string's parameters.

@@ -140,9 +140,33 @@ func TestOpenAPIParametersMatchService(t *testing.T) {
 		{"POST /api/v1/plan", schema("Recipe"), known(func() ([]byte, error) {
 			return api.Plan([]byte(`{"` + bogus + `":1,"dissolve_temp_C":20}`))
 		})},
+		{"POST /api/v1/prep", schema("Preparation"), known(func() ([]byte, error) {
+			return api.Prep([]byte(`{"` + bogus + `":1}`))
+		})},
+		{"POST /api/v1/prep answer", schema("PreparationResult"), resultKeys(t, api.Prep,
+			`{"solute":"NaCl","concentration":0.5,"concentration_unit":"mol/L","final_volume_mL":1000,"stock_concentration":5,"stock_unit":"mol/L"}`)},
 	} {
 		if !slices.Equal(tt.got, tt.want) {
 			t.Errorf("%s: openapi.json lists %v, web/api takes %v", tt.what, tt.got, tt.want)
 		}
 	}
+}
+
+// resultKeys returns the sorted top-level keys of a service's answer to body.
+func resultKeys(t *testing.T, call func([]byte) ([]byte, error), body string) []string {
+	t.Helper()
+	out, err := call([]byte(body))
+	if err != nil {
+		t.Fatalf("%s: %v", body, err)
+	}
+	var m map[string]any
+	if err := json.Unmarshal(out, &m); err != nil {
+		t.Fatalf("answer to %s: %v", body, err)
+	}
+	var keys []string
+	for k := range m {
+		keys = append(keys, k)
+	}
+	slices.Sort(keys)
+	return keys
 }

@@ -1,4 +1,4 @@
-// Package api answers the requests every Saltcast front end makes (plan, solubility,
+// Package api answers the requests every Saltcast front end makes (plan, prep, solubility,
 // compounds, and the gas requests in gas.go) with JSON in and JSON out. The CLI, the worker
 // and the browser all call it, so their answers are byte-identical.
 //
@@ -31,6 +31,20 @@ func Plan(body []byte) ([]byte, error) {
 		return nil, err
 	}
 	res, err := recipe.Plan(r)
+	if err != nil {
+		return nil, err
+	}
+	return res.Encode(), nil
+}
+
+// Prep reads a preparation recipe (JSON) and returns the worked preparation (JSON); see
+// recipe.PrepResult.Encode.
+func Prep(body []byte) ([]byte, error) {
+	p, err := recipe.DecodePrep(body)
+	if err != nil {
+		return nil, err
+	}
+	res, err := recipe.PlanPrep(p)
 	if err != nil {
 		return nil, err
 	}

@@ -142,9 +142,9 @@ func checkBalance(t *testing.T, i int, r recipe.Recipe, res recipe.Result) {
 		return
 	}
 	in := res.ChargeG*p + res.WaterG
-	outG := res.CrystalsG + res.LiquorG + res.EvaporatedWaterG
+	outG := res.CrystalsG + res.IceG + res.LiquorG + res.EvaporatedWaterG
 	if math.Abs(in-outG) > massTol*in {
-		fail("mass in %v ≠ crystals %v + liquor %v + evaporated %v", in, res.CrystalsG, res.LiquorG, res.EvaporatedWaterG)
+		fail("mass in %v ≠ crystals %v + ice %v + liquor %v + evaporated %v", in, res.CrystalsG, res.IceG, res.LiquorG, res.EvaporatedWaterG)
 	}
 	sol := res.CrystalsG*res.CrystalAnhydrousFrac + res.LiquorSoluteG
 	if math.Abs(sol-res.SoluteG) > massTol*res.SoluteG {
@@ -152,6 +152,12 @@ func checkBalance(t *testing.T, i int, r recipe.Recipe, res recipe.Result) {
 	}
 	if res.CrystalsG < 0 || res.YieldPct < 0 || res.YieldPct > 100*(1+massTol) {
 		fail("crystals %v g, yield %v %%", res.CrystalsG, res.YieldPct)
+	}
+	if res.IceG < 0 || res.IceG > 0 && !res.HasIce {
+		fail("ice %v g (has ice %v)", res.IceG, res.HasIce)
+	}
+	if res.Frozen || res.IceG > 0 {
+		return // the liquor is set by the freezing curve or gone; checked in package balance
 	}
 	// The liquor is saturated when crystals form, and at most saturated when none do.
 	s := res.SolubilityAtTargetG100
@@ -254,7 +260,13 @@ func (g gen) library(c *compound.Compound) recipe.Recipe {
 		r.Solute, r.ChargedForm = f.Formula, "" // the form named by the solute itself
 	}
 	lo, hi := c.Range()
-	g.common(&r, lo, hi, func(dissolveC, waterG, p float64) (float64, bool) {
+	// A recipe dissolving below the freezing point of its solution is invalid, so the
+	// dissolve temperature of a compound with freezing data stays at or above 0 °C.
+	dlo := lo
+	if c.Freezing != nil {
+		dlo = max(lo, 0)
+	}
+	g.common(&r, dlo, lo, hi, func(dissolveC, waterG, p float64) (float64, bool) {
 		s, _, _, err := c.Solubility(dissolveC)
 		if err != nil {
 			return 0, false
@@ -287,14 +299,15 @@ func (g gen) custom() recipe.Recipe {
 		cu.SolutionEnthalpyKJPerMol = recipe.Some(g.uniform(-40, 40))
 	}
 	r := recipe.Recipe{Custom: cu}
-	g.common(&r, lo, hi, func(dissolveC, waterG, p float64) (float64, bool) {
+	g.common(&r, lo, lo, hi, func(dissolveC, waterG, p float64) (float64, bool) {
 		return waterG * a * math.Exp(b*(dissolveC-25)) / 100 / p, true
 	}, func(float64) bool { return b < 0 })
 	return r
 }
 
-// common fills in the water, the temperatures, the charge and the options.
-func (g gen) common(r *recipe.Recipe, lo, hi float64, most func(dissolveC, waterG, p float64) (float64, bool), retro func(float64) bool) {
+// common fills in the water, the temperatures, the charge and the options; the dissolve
+// temperature is drawn from dissolveLo to hi, the others from lo.
+func (g gen) common(r *recipe.Recipe, dissolveLo, lo, hi float64, most func(dissolveC, waterG, p float64) (float64, bool), retro func(float64) bool) {
 	if g.rng.IntN(4) == 0 {
 		r.PurityPct = recipe.Some(g.uniform(50, 100))
 	}
@@ -308,7 +321,7 @@ func (g gen) common(r *recipe.Recipe, lo, hi float64, most func(dissolveC, water
 	} else {
 		r.WaterG = recipe.Some(waterG)
 	}
-	r.DissolveTempC = g.temp(lo, hi)
+	r.DissolveTempC = g.temp(dissolveLo, hi)
 	switch k := g.rng.IntN(8); {
 	case k < 4:
 		r.SaturationPct = recipe.Some(g.uniform(5, 100))

@@ -38,7 +38,7 @@ func TestPhasesFromCompound(t *testing.T) {
 	}{
 		{"KNO3", []string{"KNO3"}, 20, 31.93},
 		{"Na2SO4", []string{"Na2SO4·10H2O", "Na2SO4"}, 50, 46.09},
-		{"MgSO4", []string{"MgSO4·7H2O", "MgSO4·6H2O", "MgSO4·H2O"}, 40, 44.72},
+		{"MgSO4", []string{"MgSO4·11H2O", "MgSO4·7H2O", "MgSO4·6H2O", "MgSO4·H2O"}, 40, 44.72},
 	} {
 		c := lookup(t, tc.name)
 		ph, err := Phases(c, 101)

@@ -108,6 +108,9 @@ func Sheet(res recipe.Result) string {
 	if r.HasClearDown {
 		s.row("sized to stay clear down to", tc(r.ClearDownToC))
 	}
+	if r.HasFreezing {
+		s.row("freezing point", tc(r.FreezingPointC)+" (ice forms below it)")
+	}
 	if r.HasOnset {
 		s.row("saturation temperature", tc(r.SaturationTempC)+" (crystals can form beyond it)")
 	} else {
@@ -125,7 +128,14 @@ func Sheet(res recipe.Result) string {
 		} else {
 			s.row("crystals", "none: the liquor stays unsaturated ("+n(r.LiquorG100)+" of "+n(r.SolubilityAtTargetG100)+" g per 100 g water)")
 		}
-		s.row("mother liquor", g(r.LiquorG)+", "+n(r.LiquorG100)+" g per 100 g water")
+		if r.HasIce {
+			s.row("ice", g(r.IceG))
+		}
+		if r.Frozen {
+			s.row("mother liquor", "none: below the eutectic the batch freezes solid")
+		} else {
+			s.row("mother liquor", g(r.LiquorG)+", "+n(r.LiquorG100)+" g per 100 g water")
+		}
 		for _, p := range r.PhaseChanges {
 			s.row("phase change", p.From+" → "+p.To+" at "+tc(p.TempC))
 		}

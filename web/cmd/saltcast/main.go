@@ -3,6 +3,7 @@
 //
 //	saltcast solubility --solute KNO3 --temp-C 20
 //	saltcast plan recipe.json          (or - for standard input)
+//	saltcast prep preparation.json     (or -: a solution made up to the mark)
 //	saltcast compounds
 //	saltcast gas --temp-C 20           (see saltcast gas --help)
 //	saltcast demo recipe.json ...      (plans printed as a readable batch sheet)
@@ -30,6 +31,9 @@ const usage = `saltcast: crystallization and solubility planning
       solubility of a library compound (g anhydrous per 100 g water) and its stable solid, as JSON
   saltcast plan recipe.json        (or "-" to read the recipe from standard input)
       the plan of one batch recipe, as JSON
+  saltcast prep preparation.json   (or "-" to read it from standard input)
+      a solution made up to the mark (or diluted from a stock): what to weigh, the water,
+      the concentration in every unit and the lowest storage temperature, as JSON
   saltcast compounds
       the compound library, as JSON
   saltcast gas ...
@@ -85,6 +89,15 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			return fail(rerr)
 		}
 		out, err = api.Plan(data)
+	case "prep":
+		if len(rest) != 1 {
+			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "one preparation file, or - for standard input"})
+		}
+		data, rerr := readRecipe(rest[0], stdin)
+		if rerr != nil {
+			return fail(rerr)
+		}
+		out, err = api.Prep(data)
 	case "compounds":
 		if len(rest) != 0 {
 			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "none"})
@@ -98,7 +111,7 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		}
 		return demo(rest, stdin, stdout, stderr)
 	default:
-		return fail(&unit.FieldError{Field: "command", Value: cmd, Allowed: "solubility, plan, compounds, gas, demo or help"})
+		return fail(&unit.FieldError{Field: "command", Value: cmd, Allowed: "solubility, plan, prep, compounds, gas, demo or help"})
 	}
 	if err != nil {
 		return fail(err)

@@ -1,0 +1,545 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"strconv"
+	"strings"
+	"syscall/js"
+
+	"saltcast/core/compound"
+	"saltcast/core/prep"
+	"saltcast/core/recipe"
+	"saltcast/core/unit"
+)
+
+// The preparation screen ("Make up"): a solution made up to the mark or diluted from a stock,
+// its figures, the stock-bottle labels, and the saved preparations. Its inputs are named like
+// the recipe keys (prepform.go) and its results carry the answer's keys as data-key.
+
+// keyPreps holds the saved preparations, as a preparations collection file.
+const keyPreps = "saltcast.preps"
+
+// keyLabelBy remembers who makes the solutions on this device, for the label.
+const keyLabelBy = "saltcast.label_by"
+
+// maxLabels bounds the labels printed at once (three A4 pages of the 2 × 4 grid).
+const maxLabels = 24
+
+type prepScreen struct {
+	started bool
+	form    PrepForm
+	last    *recipe.PrepResult
+	saved   []recipe.Prep
+	shown   map[string]js.Value // result outputs by data-key
+	boxes   map[string]js.Value // their tiles
+	subs    map[string]js.Value // the line under a tile's value
+}
+
+var ps prepScreen
+
+func (a *app) startPrep() {
+	ps.started = true
+	ps.form = NewPrepForm()
+	ps.shown, ps.boxes, ps.subs = map[string]js.Value{}, map[string]js.Value{}, map[string]js.Value{}
+	form := byID("prep")
+	dl := byID("p-solutes")
+	for _, c := range compound.All() {
+		opt := add(dl, "option", "", "")
+		setAttr(opt, "value", c.ID)
+		setAttr(opt, "label", c.Name)
+	}
+	figs := byID("prep-figures")
+	for _, t := range []struct{ key, label string }{
+		{"form_g", "Weigh"},
+		{"stock_mL", "Measure of the stock"},
+		{"water_g", "Water, about"},
+		{"solution_mL", "Solution"},
+		{"density_g_per_mL", "Density"},
+		{"saturation_pct", "Of saturation"},
+		{"keep_above_C", "Keep above"},
+		{"saturation_temp_C", "Crystallizes below"},
+	} {
+		box := addFigure(figs, t.label)
+		val := add(box, "span", "val", "")
+		out := add(val, "output", "", "—")
+		setAttr(out, "data-key", t.key)
+		ps.shown[t.key], ps.boxes[t.key] = out, box
+		ps.subs[t.key] = add(box, "span", "sub", "")
+	}
+	classSet(ps.boxes["form_g"], "big", true)
+	classSet(ps.boxes["stock_mL"], "big", true)
+	classSet(ps.boxes["keep_above_C"], "big", true)
+	tbl := byID("prep-units")
+	body := add(tbl, "tbody", "", "")
+	for _, u := range []struct{ key, label string }{
+		{"mol_per_L", "mol/L"}, {"mmol_per_L", "mmol/L"}, {"g_per_L", "g/L"}, {"mg_per_L", "mg/L"},
+		{"pct_w_v", "% w/v (g per 100 mL)"}, {"pct_w_w", "% w/w"}, {"mol_per_kg", "mol/kg (molality)"},
+		{"g_per_100g_water", "g per 100 g water"},
+	} {
+		tr := add(body, "tr", "", "")
+		th := add(tr, "th", "", u.label)
+		setAttr(th, "scope", "row")
+		td := add(tr, "td", "", "—")
+		out := add(td, "output", "", "—")
+		td.Call("replaceChildren", out)
+		setAttr(out, "data-key", u.key)
+		ps.shown[u.key] = out
+	}
+	if s, ok := a.store.get(keyPreps); ok {
+		if list, err := recipe.DecodePrepCollection([]byte(s)); err == nil {
+			ps.saved = list
+		} else {
+			setText(byID("m-prep-save"), "The saved preparations in this browser could not be read ("+err.Error()+"); they are left as they were.")
+		}
+	}
+	if s, ok := a.store.get(keyLabelBy); ok {
+		setValue(byID("p-label_by"), s)
+	}
+	setValue(byID("p-label_date"), isoToday())
+
+	on(form, "input", a.onPrepInput)
+	on(form, "change", a.onPrepInput)
+	on(form, "submit", func(_ js.Value, ev event) { ev.PreventDefault() })
+	on(byID("prep-to-batch"), "click", func(js.Value, event) { a.prepToBatch() })
+	on(byID("prep-print"), "click", func(js.Value, event) { a.printLabels() })
+	on(byID("p-label_by"), "input", func(js.Value, event) {
+		a.store.set(keyLabelBy, value(byID("p-label_by")))
+		a.renderLabels()
+	})
+	on(byID("p-label_date"), "input", func(js.Value, event) { a.renderLabels() })
+	on(byID("p-label_copies"), "input", func(js.Value, event) { a.renderLabels() })
+	on(byID("prep-save"), "click", func(js.Value, event) { a.savePrep() })
+	on(byID("prep-saved"), "click", a.onSavedPrep)
+	on(byID("prep-export"), "click", func(js.Value, event) {
+		setValue(byID("prep-transfer"), string(recipe.EncodePrepCollection(ps.saved)))
+		setText(byID("m-prep-import"), "The saved preparations are in the box below: copy them, or download them as a file.")
+	})
+	on(byID("prep-download"), "click", func(js.Value, event) {
+		download("saltcast-preparations.json", "application/json", string(recipe.EncodePrepCollection(ps.saved)))
+	})
+	on(byID("prep-import"), "click", func(js.Value, event) { a.importPreps() })
+	on(byID("prep-share"), "click", func(js.Value, event) { a.sharePrep() })
+	a.showPrepForm()
+	a.renderSavedPreps()
+	a.recomputePrep()
+}
+
+// loadPrep shows p on the preparation screen.
+func (a *app) loadPrep(p recipe.Prep) {
+	if !ps.started {
+		a.startPrep()
+	}
+	ps.form = FormFromPrep(p, a.u)
+	setValue(byID("prep-save-name"), p.Name)
+	a.showPrepForm()
+	a.recomputePrep()
+}
+
+// showPrepForm writes the form state into the inputs.
+func (a *app) showPrepForm() {
+	form := byID("prep")
+	for _, name := range []string{"solute", "concentration", "concentration_unit", "amount", "temp_C", "purity_pct",
+		"stock_concentration", "stock_unit", "store_at_C", "name", "notes"} {
+		setValue(q(form, `[name="`+name+`"]`), ps.form.Text[name])
+		a.prepFieldError(name, nil)
+	}
+	for _, el := range qa(form, `[name="prep_amount"]`) {
+		setChecked(el, value(el) == ps.form.Amount)
+	}
+	for _, el := range qa(form, `[name="prep_from"]`) {
+		setChecked(el, (value(el) == "stock") == ps.form.FromStock)
+	}
+	a.showPrepParts()
+	a.fillForms()
+}
+
+// showPrepParts shows the inputs of the way the solution is made and names the amount.
+func (a *app) showPrepParts() {
+	for _, el := range qa(byID("prep"), "[data-from]") {
+		setHidden(el, (attr(el, "data-from") == "stock") != ps.form.FromStock)
+	}
+	label := map[string]string{"final_volume_mL": "Made up to ", "final_mass_g": "Solution mass ", "solvent_g": "Water in it "}[ps.form.Amount]
+	u := "mL"
+	if ps.form.Amount != "final_volume_mL" {
+		u = "g"
+	}
+	lbl := byID("p-amount-label")
+	clear(lbl)
+	lbl.Call("append", label)
+	add(lbl, "span", "u", u)
+}
+
+// fillForms lists the forms on the shelf of the solute typed.
+func (a *app) fillForms() {
+	sel := byID("p-charged_form")
+	clear(sel)
+	c, f, err := compound.Lookup(ps.form.Text["solute"])
+	picked := byID("p-picked")
+	if err != nil {
+		setText(picked, "")
+		add(sel, "option", "", "choose a solute first")
+		return
+	}
+	setText(picked, c.Name+" · "+c.ID)
+	want := ps.form.Text["charged_form"]
+	if fw, err := c.Form(want); err == nil {
+		want = fw.Formula
+	} else {
+		want = f.Formula
+	}
+	for i, form := range c.Forms {
+		label := form.Formula
+		if i == 0 {
+			label += " (anhydrous)"
+		} else if len(form.Names) > 0 {
+			label += " (" + form.Names[0] + ")"
+		}
+		opt := add(sel, "option", "", label)
+		setAttr(opt, "value", form.Formula)
+	}
+	setValue(sel, want)
+	ps.form.Text["charged_form"] = want
+}
+
+func (a *app) onPrepInput(el js.Value, _ event) {
+	name := attr(el, "name")
+	switch name {
+	case "prep_amount":
+		ps.form.Amount = value(el)
+		a.showPrepParts()
+	case "prep_from":
+		ps.form.FromStock = value(el) == "stock"
+		a.showPrepParts()
+	case "":
+		return
+	default:
+		ps.form.Text[name] = value(el)
+		if name == "solute" {
+			delete(ps.form.Text, "charged_form")
+			a.fillForms()
+		}
+		if name == "name" {
+			setValue(byID("prep-save-name"), value(el))
+		}
+	}
+	a.recomputePrep()
+}
+
+func (a *app) prepFieldError(name string, err error) {
+	in := q(byID("prep"), `[name="`+name+`"]`)
+	msg := byID("m-p-" + name)
+	if !exists(in) {
+		return
+	}
+	if err == nil {
+		in.Call("removeAttribute", "aria-invalid")
+		if exists(msg) {
+			setText(msg, "")
+		}
+		return
+	}
+	setAttr(in, "aria-invalid", "true")
+	if exists(msg) {
+		setText(msg, fieldMessage(err, value(in)))
+	}
+}
+
+// recomputePrep works the preparation out; on an error it keeps the last good result.
+func (a *app) recomputePrep() {
+	if !ps.started {
+		return
+	}
+	form := byID("prep")
+	for _, name := range prepNumbers {
+		a.prepFieldError(name, nil)
+	}
+	for _, name := range []string{"solute", "charged_form", "concentration_unit", "stock_unit", "name"} {
+		a.prepFieldError(name, nil)
+	}
+	stale := byID("prep-stale")
+	p, errs := ps.form.Prep(a.u)
+	var res recipe.PrepResult
+	var err error
+	if len(errs) == 0 {
+		res, err = recipe.PlanPrep(p)
+		if err != nil {
+			errs = map[string]error{PrepInput(err): err}
+		}
+	}
+	if len(errs) > 0 {
+		msg := "Showing the last good result: correct the marked field to update."
+		for name, e := range errs {
+			if in := q(form, `[name="`+name+`"]`); exists(in) && !inHiddenPart(in) {
+				a.prepFieldError(name, e)
+			} else {
+				msg = "Showing the last good result. " + fieldMessage(e, "")
+			}
+		}
+		setText(stale, msg)
+		setHidden(stale, false)
+		classSet(byID("prep-outcome"), "is-stale", true)
+		return
+	}
+	setHidden(stale, true)
+	classSet(byID("prep-outcome"), "is-stale", false)
+	ps.last = &res
+	a.renderPrep()
+}
+
+func (a *app) renderPrep() {
+	res := ps.last
+	if res == nil {
+		return
+	}
+	r := res.Result
+	num := func(v float64) string { return unit.FormatNumber(v, 4) }
+	set := func(key, text, sub string, show bool) {
+		if out, ok := ps.shown[key]; ok {
+			setText(out, text)
+		}
+		if box, ok := ps.boxes[key]; ok {
+			setHidden(box, !show)
+		}
+		if s, ok := ps.subs[key]; ok {
+			setText(s, sub)
+		}
+	}
+	formSub := ""
+	if r.HasForm {
+		formSub = "g of " + r.Form
+		if r.PurityPct < 100 {
+			formSub += " at " + unit.FormatCompact(r.PurityPct, 4) + " %"
+		}
+	}
+	set("form_g", num(r.FormG), formSub, r.HasForm)
+	set("stock_mL", num(r.StockML), "mL of stock = "+num(r.StockG)+" g", r.HasStock && r.HasStockVolume)
+	waterSub := "g = " + num(r.WaterML) + " mL"
+	if r.WaterApprox {
+		waterSub += "; fill to the mark"
+	}
+	set("water_g", num(r.WaterG), waterSub, true)
+	set("solution_mL", num(r.SolutionML), "mL = "+num(r.SolutionG)+" g", r.HasDensity || r.Amount == prep.ByVolume)
+	set("density_g_per_mL", unit.FormatNumber(r.DensityKgPerM3/1000, 5), "g/mL ± "+unit.FormatCompact(r.DensityErrPct, 2)+" %", r.HasDensity)
+	set("saturation_pct", unit.FormatNumber(r.SaturationPct, 3), "% at "+TempText(r.TempC, a.u), true)
+	set("keep_above_C", fixed(TempFromC(r.KeepAboveC, a.u), 1), a.u.TempSymbol(), r.HasKeepAbove)
+	set("saturation_temp_C", fixed(TempFromC(r.SaturationTempC, a.u), 1), a.u.TempSymbol(), r.HasSaturationTemp && !r.Supersaturated)
+	for key, v := range map[string]float64{"mol_per_L": r.MolPerL, "mmol_per_L": r.MmolPerL, "g_per_L": r.GPerL,
+		"mg_per_L": r.MgPerL, "pct_w_v": r.PctWV} {
+		s := "—"
+		if r.HasDensity {
+			s = num(v)
+		}
+		setText(ps.shown[key], s)
+	}
+	setText(ps.shown["pct_w_w"], num(r.PctWW))
+	setText(ps.shown["mol_per_kg"], num(r.MolPerKg))
+	setText(ps.shown["g_per_100g_water"], num(r.GPer100gWater))
+	fillList(byID("prep-cautions"), r.Cautions)
+	fillList(byID("prep-warnings"), orNone(r.Warnings))
+	fillList(byID("prep-sources"), r.Sources)
+	a.renderLabels()
+}
+
+// labelCopies reads how many labels to print, 1 to maxLabels.
+func labelCopies() int {
+	n, err := strconv.Atoi(strings.TrimSpace(value(byID("p-label_copies"))))
+	if err != nil || n < 1 {
+		return 1
+	}
+	return min(n, maxLabels)
+}
+
+// renderLabels draws the stock-bottle labels as they will print.
+func (a *app) renderLabels() {
+	box := byID("labels")
+	clear(box)
+	if ps.last == nil {
+		return
+	}
+	l := LabelFor(*ps.last, strings.TrimSpace(value(byID("p-label_by"))), strings.TrimSpace(value(byID("p-label_date"))), a.u)
+	for range labelCopies() {
+		el := add(box, "div", "plabel", "")
+		h := add(el, "p", "pl-title", l.Title+" ")
+		add(h, "span", "pl-formula", l.Formula)
+		add(el, "p", "pl-conc", l.Concentration)
+		add(el, "p", "pl-also", l.Also)
+		add(el, "p", "pl-made", l.Made)
+		add(el, "p", "pl-keep", l.Keep)
+		by := "Made " + l.Date
+		if l.By != "" {
+			by += " by " + l.By
+		}
+		add(el, "p", "pl-by", by)
+		hz := add(el, "p", "pl-hazard", l.Hazard)
+		if l.Oxidizer {
+			classSet(hz, "ox", true)
+		}
+	}
+}
+
+func (a *app) printLabels() {
+	if ps.last == nil {
+		setText(byID("m-p-label"), "Nothing to print: correct the marked field first.")
+		return
+	}
+	setText(byID("m-p-label"), "")
+	a.renderLabels()
+	classSet(doc.Get("body"), "print-labels", true)
+	js.Global().Call("print")
+}
+
+// prepToBatch opens the batch screen with the same solution, to plan crystallizing from it.
+func (a *app) prepToBatch() {
+	if ps.last == nil {
+		return
+	}
+	a.load(recipe.BatchFrom(*ps.last))
+	a.showScreen("batch")
+}
+
+func (a *app) savePrep() {
+	msg := byID("m-prep-save")
+	p, errs := ps.form.Prep(a.u)
+	if len(errs) > 0 {
+		setText(msg, "Not saved: correct the marked field first.")
+		return
+	}
+	name := strings.TrimSpace(value(byID("prep-save-name")))
+	if name == "" {
+		name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
+	}
+	p.Name = name
+	list := append([]recipe.Prep(nil), ps.saved...)
+	replaced := false
+	for i := range list {
+		if list[i].Name == name {
+			list[i], replaced = p, true
+		}
+	}
+	if !replaced {
+		list = append(list, p)
+	}
+	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+		setText(msg, "Not saved: this browser's storage is full or switched off. Export the saved preparations first.")
+		return
+	}
+	ps.saved = list
+	ps.form.Text["name"] = name
+	setValue(q(byID("prep"), `[name="name"]`), name)
+	setText(msg, "Saved “"+name+"”.")
+	a.renderSavedPreps()
+}
+
+func (a *app) renderSavedPreps() {
+	list := byID("prep-saved")
+	clear(list)
+	for i, p := range ps.saved {
+		li := add(list, "li", "", "")
+		add(li, "span", "nm", p.Name)
+		b := add(li, "button", "act", "Open")
+		setAttr(b, "type", "button")
+		setAttr(b, "data-open", strconv.Itoa(i))
+		d := add(li, "button", "act danger", "Delete")
+		setAttr(d, "type", "button")
+		setAttr(d, "data-delete", strconv.Itoa(i))
+	}
+}
+
+func (a *app) onSavedPrep(t js.Value, _ event) {
+	if b := closest(t, "[data-open]"); exists(b) {
+		if i, err := strconv.Atoi(attr(b, "data-open")); err == nil && i < len(ps.saved) {
+			a.loadPrep(ps.saved[i])
+		}
+		return
+	}
+	if b := closest(t, "[data-delete]"); exists(b) {
+		i, err := strconv.Atoi(attr(b, "data-delete"))
+		if err != nil || i >= len(ps.saved) {
+			return
+		}
+		list := append(append([]recipe.Prep(nil), ps.saved[:i]...), ps.saved[i+1:]...)
+		if a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+			ps.saved = list
+			a.renderSavedPreps()
+		}
+	}
+}
+
+// importPreps takes a whole preparations file (or one preparation) or nothing.
+func (a *app) importPreps() {
+	msg := byID("m-prep-import")
+	text := strings.TrimSpace(value(byID("prep-transfer")))
+	in, err := recipe.DecodePrepCollection([]byte(text))
+	if err != nil {
+		if one, err1 := recipe.DecodePrep([]byte(text)); err1 == nil {
+			in, err = []recipe.Prep{one}, nil
+		}
+	}
+	if err != nil {
+		setText(msg, "Nothing imported: "+err.Error())
+		return
+	}
+	list := append([]recipe.Prep(nil), ps.saved...)
+	for _, p := range in {
+		if p.Name == "" {
+			p.Name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
+		}
+		same := false
+		for i := range list {
+			if list[i].Name == p.Name {
+				list[i], same = p, true
+			}
+		}
+		if !same {
+			list = append(list, p)
+		}
+	}
+	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+		setText(msg, "Nothing imported: this browser's storage is full or switched off.")
+		return
+	}
+	ps.saved = list
+	a.renderSavedPreps()
+	setText(msg, "Imported "+strconv.Itoa(len(in))+" preparation(s).")
+}
+
+func (a *app) sharePrep() {
+	p, errs := ps.form.Prep(a.u)
+	if len(errs) > 0 {
+		setText(byID("m-prep-import"), "No link: correct the marked field first.")
+		return
+	}
+	loc := win.Location()
+	link := strings.SplitN(loc.Href(), "#", 2)[0] + PrepFragment(p)
+	setValue(byID("prep-transfer"), link)
+	js.Global().Get("history").Call("replaceState", nil, "", PrepFragment(p))
+	setText(byID("m-prep-import"), "The link is in the box below; the preparation rides in it after the #, nothing is sent anywhere.")
+}
+
+// isoToday is the local date as YYYY-MM-DD (ISO 8601), for the label.
+func isoToday() string {
+	d := js.Global().Get("Date").New()
+	two := func(n int) string {
+		if n < 10 {
+			return "0" + strconv.Itoa(n)
+		}
+		return strconv.Itoa(n)
+	}
+	return strconv.Itoa(d.Call("getFullYear").Int()) + "-" + two(d.Call("getMonth").Int()+1) + "-" + two(d.Call("getDate").Int())
+}
+
+// prepUnits follows the unit switch: the temperatures on the form are shown in the new unit
+// (a form that does not read keeps its text) and the results are drawn again.
+func (a *app) prepUnits(old Units) {
+	if !ps.started {
+		return
+	}
+	if p, errs := ps.form.Prep(old); len(errs) == 0 {
+		from := ps.form.FromStock
+		ps.form = FormFromPrep(p, a.u)
+		ps.form.FromStock = from
+		a.showPrepForm()
+	}
+	a.recomputePrep()
+}
