@@ -6,8 +6,8 @@
 // -gcflags=all=-l, optionally runs Debian's wasm-opt (-wasm-opt; see web.WasmOptFlags: it
 // buys under 0.2 % after gzip, so it is off by default), merges the linker's data segments
 // (saltcast/web/wasmpack: 119 KB less after gzip), compresses the module with zopfli
-// when installed (else compress/gzip), and inlines it base64-encoded with wasm_exec.js and
-// the CSS into the page (see package web).
+// when installed (else compress/gzip), and inlines it as text91 text (saltcast/web/text91)
+// with wasm_exec.js and the CSS into the page (see package web).
 package main
 
 import (
