@@ -1,6 +1,6 @@
 # Saltcast build. `make` builds the single-file app and shows the demo; `make test` runs every
 # test (it installs what the browser and worker tests need first); `make bench` prints the
-# performance figures recorded in the README.
+# performance figures recorded in web/PERFORMANCE.md.
 GO      ?= go
 export PATH := $(shell $(GO) env GOROOT)/lib/wasm:$(PATH)
 

@@ -11,7 +11,7 @@ const sig = 6
 const resultSizeHint = 6 << 10
 
 // Encode writes the result as JSON with a fixed set of keys in a fixed order (see the
-// README's command-line section). A key that does not apply to this batch is null (for
+// web/cmd/saltcast/README.md). A key that does not apply to this batch is null (for
 // instance crystals_g without cool_to_C), so scripts can rely on every key being present.
 func (res Result) Encode() []byte {
 	var e wire.Encoder

@@ -102,7 +102,7 @@ const (
 // TestWorkerdLoad sends a bounded mixed load (the catalogue and the demo recipes, good and
 // bad) to a fresh workerd on loopback from a few goroutines: no transport errors, no 5xx,
 // every status as expected, the Go program's memory and live JS references do not grow, and
-// workerd's resident memory is sampled across the run. The figures are logged for the README.
+// workerd's resident memory is sampled across the run. The figures are logged for web/PERFORMANCE.md.
 func TestWorkerdLoad(t *testing.T) {
 	s := startProbed(t)
 	cases := catalogueCases(t)
