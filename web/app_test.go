@@ -391,7 +391,7 @@ func TestCustomCompound(t *testing.T) {
 	}
 }
 
-// maxPageBytes is the hard limit on dist/saltcast.html (issue 4: "≤ 1.5 MB now").
+// maxPageBytes is the hard limit on dist/saltcast.html (1.5 MB; web/PERFORMANCE.md).
 const maxPageBytes = 1_500_000
 
 func TestPageSize(t *testing.T) {

@@ -20,7 +20,7 @@ import (
 	"saltcast/core/recipe"
 )
 
-// Recipes that travel inside a copy of the page (issue 7), in a real browser over file://.
+// Recipes that travel inside a copy of the page, in a real browser over file://.
 
 // carriedName is the second recipe's name: markup that must stay text all the way round.
 const carriedName = `<img src=x onerror=alert(1)> & </script><b>blue</b>`

@@ -3,9 +3,8 @@
 package web_test
 
 // Performance figures of the bench app, printed by `make bench` (built only with the browser
-// and bench tags). They are
-// measurements, not timed pass/fail tests; the only limits checked are the issue's hard
-// ones: the page is at most 1.5 MB.
+// and bench tags). They are measurements, not timed pass/fail tests; the only limit checked
+// is the hard one: the page is at most 1.5 MB.
 
 import (
 	"context"

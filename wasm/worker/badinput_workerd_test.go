@@ -25,7 +25,7 @@ func TestBadInputsWorkerd(t *testing.T) {
 	}
 }
 
-// Load test bounds. The request count is what the issue asks for. Memory is judged as
+// Load test bounds. 10 000 requests is the load the service is asked to take. Memory is judged as
 // leak_test.go judges it, by the Go program's own memory and its live JS references (read
 // through the probe module), with the same bounds per request; workerd's resident memory is
 // sampled from /proc and reported, and only a gross rise fails, because workerd's RSS grows by

@@ -21,7 +21,7 @@ import (
 	"github.com/chromedp/chromedp"
 )
 
-// The installable copy (issue 7): the worker serves a service worker, a manifest and icons;
+// The installable copy: the worker serves a service worker, a manifest and icons;
 // a browser that visited once opens the app with no network and computes; a new version
 // waits until the user agrees, and the recipes survive it.
 

@@ -23,8 +23,9 @@ func lookup(t *testing.T, name string) *compound.Compound {
 }
 
 // crcTol covers the library's table interpolation and the spread between
-// sources at the tabulated temperatures (3 %, as the reference notes give
-// for KNO3 and Na2SO4).
+// sources at the tabulated temperatures: CRC 98th ed. and the Perry's/Seidell
+// values of Wikipedia's "Solubility table" differ by up to 3 % for KNO3 and
+// Na2SO4 away from the transition (derived: from the two tables).
 const crcTol = 0.03
 
 func TestPhasesFromCompound(t *testing.T) {
