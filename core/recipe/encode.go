@@ -2,9 +2,12 @@ package recipe
 
 import "saltcast/core/wire"
 
-// sig is the number of significant digits of numbers in the result JSON: finer than any
-// balance can weigh, coarse enough that the last digit is not noise.
-const sig = 6
+// Digits is the number of significant digits of every number in an answer (the plan here;
+// web/api's solubility, gas and compound answers use it too): finer than any balance can
+// weigh, coarse enough that the last digit is not noise.
+const Digits = 6
+
+const sig = Digits
 
 // resultSizeHint is about the size of a plan's JSON with its sources and cautions, so the
 // encoder allocates once.

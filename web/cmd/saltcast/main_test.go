@@ -145,3 +145,20 @@ func TestHelpAndCompounds(t *testing.T) {
 		t.Errorf("compounds lists %d, want the 16 of the library", len(list.Items))
 	}
 }
+
+// An unknown flag is refused in the same words by every subcommand: exit status 2 and
+// `saltcast <command>: bogus: "1" is not allowed; allowed: one of the keys: …`.
+func TestUnknownFlagOneWording(t *testing.T) {
+	for _, args := range [][]string{
+		{"solubility", "--solute", "KNO3", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "outgas", "--from-C", "20", "--to-C", "80", "--bogus=1"},
+		{"gas", "table", "--bogus", "1"},
+	} {
+		_, errs, code := run(t, "", args...)
+		want := "saltcast " + args[0] + `: bogus: "1" is not allowed; allowed: one of the keys: `
+		if code != 2 || !strings.HasPrefix(errs, want) {
+			t.Errorf("saltcast %s: exit %d, stderr %q; want 2 and %q…", strings.Join(args, " "), code, errs, want)
+		}
+	}
+}
