@@ -20,6 +20,7 @@ import (
 	"time"
 
 	"saltcast/web/api"
+	"saltcast/web/policy"
 )
 
 // These tests run the built worker (build/worker, from `make worker`) under workerd (from
@@ -257,7 +258,7 @@ func TestWorkerdPage(t *testing.T) {
 	if csp, want := h.Get("Content-Security-Policy"), pageCSP(page); csp != want {
 		t.Errorf("GET / Content-Security-Policy\n got %q\nwant %q", csp, want)
 	}
-	if n := len(inlineScripts(page)); bytes.Contains(page, []byte("saltcast-wasm")) && n < 2 {
+	if n := len(policy.InlineScripts(string(page))); bytes.Contains(page, []byte("saltcast-wasm")) && n < 2 {
 		t.Errorf("the built page has %d inline scripts; the CSP would block the app", n)
 	}
 }
