@@ -81,7 +81,7 @@ func plan(t *testing.T) *balance.Result {
 		DissolveTempC: 35, ConcentrationG100: 50,
 		HasOnset: true, SaturationTempC: 32.6,
 		HasTarget: true, TargetC: 4, LiquorG100: 16.3,
-		CrystalsG: 33.7, // (derived: 50 − 16.3 g per 100 g water, anhydrous solid)
+		CrystalsG:     33.7, // (derived: 50 − 16.3 g per 100 g water, anhydrous solid)
 		HasMetastable: true, MetastableWidthK: 5, NucleationC: 27.6,
 	}
 }
