@@ -1,8 +1,12 @@
+//go:build browser
+
 package web_test
 
 import (
 	"context"
 	"math"
+	"os"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
@@ -384,5 +388,19 @@ func TestCustomCompound(t *testing.T) {
 	}
 	if fit := mustEval[string](t, ctx, `document.getElementById("custom-fit").textContent`); !strings.Contains(fit, "R²") {
 		t.Errorf("fit report = %q", fit)
+	}
+}
+
+// maxPageBytes is the hard limit on dist/saltcast.html (1.5 MB; web/PERFORMANCE.md).
+const maxPageBytes = 1_500_000
+
+func TestPageSize(t *testing.T) {
+	appURL(t)
+	fi, err := os.Stat(filepath.Join("..", "dist", "saltcast.html"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if fi.Size() > maxPageBytes {
+		t.Errorf("dist/saltcast.html is %d bytes, more than the %d allowed", fi.Size(), maxPageBytes)
 	}
 }

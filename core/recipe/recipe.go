@@ -178,7 +178,7 @@ func fromValue(v wire.Value, prefix string) (Recipe, error) {
 		case "vessel_heat_capacity_J_per_K":
 			r.VesselHeatCapacityJPerK = d.num(m.Key, m.Value, atLeast(0), atMost(1e8), "a heat capacity ≥ 0 and ≤ 1e8 J/K")
 		default:
-			d.fail(m.Key, m.Key, "one of the recipe keys: "+strings.Join(recipeKeys, ", "))
+			d.fail(m.Key, m.Key, unit.KeysAllowed(recipeKeys))
 		}
 		if d.err != nil {
 			return Recipe{}, d.err
@@ -317,7 +317,7 @@ func (d *reader) custom(v wire.Value) *Custom {
 		case "solution_enthalpy_kJ_per_mol":
 			c.SolutionEnthalpyKJPerMol = sub.num(m.Key, m.Value, atLeast(-500), atMost(500), "an enthalpy from −500 to 500 kJ/mol")
 		default:
-			sub.fail(m.Key, m.Key, "one of the custom keys: "+strings.Join(customKeys, ", "))
+			sub.fail(m.Key, m.Key, unit.KeysAllowed(customKeys))
 		}
 		if sub.err != nil {
 			break

@@ -198,7 +198,7 @@ const chartPoints = 60
 // chartSVG draws the compound's curves and the batch's path; any problem becomes a
 // placeholder SVG that says what is missing, never a broken chart.
 func (a *app) chartSVG(r *recipe.Result) string {
-	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: batchPath(r)}
+	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: chart.BatchFromPlan(&r.Result)}
 	if r.HasMetastable {
 		view.MetastableK = r.MetastableWidthK
 	}
@@ -244,50 +244,11 @@ func phases(c *compound.Compound) ([]chart.Phase, error) {
 	if p, ok := phaseCache[c.ID]; ok && !c.Custom {
 		return p, nil
 	}
-	var out []chart.Phase
-	for _, seg := range c.Segments {
-		pts, err := chart.Sample(seg.MinC, seg.MaxC, chartPoints, curveAt(seg.Curve))
-		if err != nil {
-			return nil, err
-		}
-		out = append(out, chart.Phase{Form: seg.Form.Formula, Points: pts})
-	}
-	if !c.Custom {
+	out, err := chart.Phases(c, chartPoints)
+	if err == nil && !c.Custom {
 		phaseCache[c.ID] = out
 	}
-	return out, nil
-}
-
-// batchPath turns the plan's labelled path points into the chart's batch route.
-func batchPath(r *recipe.Result) *chart.Batch {
-	var b chart.Batch
-	found := map[string]*chart.Point{}
-	for _, p := range r.Path {
-		pt := chart.Point{X: p.TempC, Y: p.G100}
-		found[p.Label] = &pt
-	}
-	d, ok := found["dissolve"]
-	if !ok {
-		return nil
-	}
-	b.Dissolve = *d
-	b.Saturation = found["onset"]
-	b.Seed = found["seed"]
-	b.Settled = found["adiabatic end"]
-	switch {
-	case b.Seed != nil:
-		b.Onset = b.Seed
-	case found["nucleation"] != nil:
-		b.Onset = found["nucleation"]
-	case r.HasTarget && r.CrystalsG > 0:
-		b.Onset = b.Saturation
-	}
-	if e, ok := found["end"]; ok {
-		b.End = *e
-	} else {
-		b.End = b.Dissolve
-	}
-	return &b
+	return out, err
 }
 
 // fit fits the user's points with the chosen model, as the planner does.

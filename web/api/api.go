@@ -51,8 +51,8 @@ func Prep(body []byte) ([]byte, error) {
 	return res.Encode(), nil
 }
 
-// sig is the number of significant digits of the numbers in answers.
-const sig = 6
+// sig is the number of significant digits of every number in an answer, the plan's rule.
+const sig = recipe.Digits
 
 // Solubility answers the solubility of a library compound at one temperature.
 //
@@ -201,7 +201,7 @@ func strList(e *wire.Encoder, key string, l []string) {
 func knownKeys(p Params, keys ...string) error {
 	for _, k := range slices.Sorted(maps.Keys(p)) {
 		if !slices.Contains(keys, k) {
-			return &unit.FieldError{Field: k, Value: p[k], Allowed: "one of the keys " + strings.Join(keys, ", ")}
+			return &unit.FieldError{Field: k, Value: p[k], Allowed: unit.KeysAllowed(keys)}
 		}
 	}
 	return nil

@@ -66,7 +66,8 @@ func TestGoldens(t *testing.T) {
 }
 
 // The solubility answer keeps the contract keys and values: KNO3 at 20 °C is 31.93 g per
-// 100 g water (CRC 98th ed., 24.2 mass %, reference notes §1a).
+// 100 g water (CRC 98th ed., "Aqueous Solubility of Inorganic Compounds at Various
+// Temperatures", 24.2 mass %; r = 100·w/(100 − w), derived).
 func TestSolubilityContract(t *testing.T) {
 	out, _, code := run(t, "", "solubility", "--solute", "KNO3", "--temp-C", "20")
 	if code != 0 {
@@ -149,5 +150,22 @@ func TestHelpAndCompounds(t *testing.T) {
 	list, _ := v.Get("compounds")
 	if len(list.Items) < 60 {
 		t.Errorf("compounds lists %d, want at least the 60 of the library", len(list.Items))
+	}
+}
+
+// An unknown flag is refused in the same words by every subcommand: exit status 2 and
+// `saltcast <command>: bogus: "1" is not allowed; allowed: one of the keys: …`.
+func TestUnknownFlagOneWording(t *testing.T) {
+	for _, args := range [][]string{
+		{"solubility", "--solute", "KNO3", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "outgas", "--from-C", "20", "--to-C", "80", "--bogus=1"},
+		{"gas", "table", "--bogus", "1"},
+	} {
+		_, errs, code := run(t, "", args...)
+		want := "saltcast " + args[0] + `: bogus: "1" is not allowed; allowed: one of the keys: `
+		if code != 2 || !strings.HasPrefix(errs, want) {
+			t.Errorf("saltcast %s: exit %d, stderr %q; want 2 and %q…", strings.Join(args, " "), code, errs, want)
+		}
 	}
 }
