@@ -187,15 +187,14 @@ func (a *app) showDraft() {
 	if a.d.Text["custom.model"] == "" {
 		setValue(a.inputs["custom.model"], "table")
 	}
-	setChecked(byID("f-use_custom"), a.d.Custom)
-	if a.d.Custom {
+	setChecked(byID("f-use_custom"), a.d.Custom())
+	if a.d.Custom() {
 		setAttr(byID("custom-box"), "open", "")
 	}
-	for _, el := range qa(a.recipeForm, `[name="water_basis"]`) {
-		setChecked(el, value(el) == a.d.Water)
-	}
-	for _, el := range qa(a.recipeForm, `[name="amount_basis"]`) {
-		setChecked(el, value(el) == a.d.Amount)
+	for _, group := range []string{"water", "amount"} {
+		for _, el := range qa(a.recipeForm, `[name="`+groupInputs[group]+`"]`) {
+			setChecked(el, value(el) == a.d.Pick[group])
+		}
 	}
 	a.showBases()
 	a.updateSolute(false)
@@ -203,24 +202,24 @@ func (a *app) showDraft() {
 
 func (a *app) showBases() {
 	for _, el := range qa(a.recipeForm, "[data-basis]") {
-		setHidden(el, attr(el, "data-basis") != a.d.Water)
+		setHidden(el, attr(el, "data-basis") != a.d.Pick["water"])
 	}
 	for _, el := range qa(a.recipeForm, "[data-amount]") {
-		setHidden(el, attr(el, "data-amount") != a.d.Amount)
+		setHidden(el, attr(el, "data-amount") != a.d.Pick["amount"])
 	}
 }
 
 func (a *app) onRecipeInput(el js.Value, _ dom.Event) {
 	name := attr(el, "name")
 	switch name {
-	case "water_basis":
-		a.d.Water = value(el)
+	case groupInputs["water"]:
+		a.d.Pick["water"] = value(el)
 		a.showBases()
-	case "amount_basis":
-		a.d.Amount = value(el)
+	case groupInputs["amount"]:
+		a.d.Pick["amount"] = value(el)
 		a.showBases()
-	case "use_custom":
-		a.d.Custom = checked(el)
+	case groupInputs["solute"]:
+		a.d.SetCustom(checked(el))
 		a.updateSolute(false)
 	default:
 		if !Known(name) {
@@ -361,7 +360,7 @@ func (a *app) updateSolute(typing bool) {
 	sel := a.inputs["charged_form"]
 	clear(matches)
 	a.compound = nil
-	if a.d.Custom {
+	if a.d.Custom() {
 		setText(picked, "Planning with your own compound (below).")
 		clear(sel)
 		opt := add(sel, "option", "", "anhydrous (own compound)")
