@@ -11,6 +11,7 @@ import (
 
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
+	"saltcast/core/recipe/demo"
 	"saltcast/core/unit"
 )
 
@@ -20,17 +21,6 @@ const (
 	keyCurrent = "saltcast.current" // the recipe on screen, so a reload keeps the work
 	keyUnits   = "saltcast.units"   // "C g mL"
 )
-
-// Demo recipes, invented for the examples.
-var demos = map[string]string{
-	"kno3": `{"format":1,"name":"Greenhouse KNO3 stock, tank B (invented)",` +
-		`"notes":"Invented example: a potassium nitrate stock concentrate mixed warm at 35 °C in the nutrient room that must stay clear through a 4 °C night.",` +
-		`"solute":"KNO3","water_mL":20000,"water_temp_C":18,"dissolve_temp_C":35,"clear_down_to_C":4,"clear_margin_K":2,"cool_to_C":4}`,
-	"cuso4": `{"format":1,"name":"Blue vitriol crystal batch (invented)",` +
-		`"notes":"Invented example: copper sulfate pentahydrate recrystallized from hot water for display crystals.",` +
-		`"solute":"CuSO4","charged_form":"CuSO4·5H2O","purity_pct":98,"water_g":1000,"dissolve_temp_C":70,` +
-		`"saturation_pct":95,"cool_to_C":20,"metastable_width_K":8,"cooling_time_min":180,"vessel_heat_capacity_J_per_K":1200}`,
-}
 
 type app struct {
 	u     Units
@@ -92,7 +82,10 @@ func (a *app) start() {
 	}
 
 	// The recipe to start with: a share link, else the last one on screen, else a demo.
-	start, _ := recipe.Decode([]byte(demos["kno3"]))
+	start, err := demo.Recipe(demo.All[0].Key)
+	if err != nil {
+		a.showPlanError(err)
+	}
 	if r, ok, err := FromFragment(win.Location().Hash()); ok {
 		if err == nil {
 			start = r
@@ -115,8 +108,10 @@ func (a *app) start() {
 	for _, b := range qa(doc, "[data-demo]") {
 		b := b
 		on(b, "click", func(js.Value, dom.Event) {
-			if r, err := recipe.Decode([]byte(demos[attr(b, "data-demo")])); err == nil {
+			if r, err := demo.Recipe(attr(b, "data-demo")); err == nil {
 				a.load(r)
+			} else {
+				a.showPlanError(err)
 			}
 		})
 	}

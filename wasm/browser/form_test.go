@@ -12,6 +12,7 @@ import (
 	"testing"
 
 	"saltcast/core/recipe"
+	"saltcast/core/recipe/demo"
 	"saltcast/core/wire"
 	"saltcast/web/api"
 	"saltcast/web/htmlscan"
@@ -405,5 +406,36 @@ func TestInputRowsCoverTable(t *testing.T) {
 	sort.Strings(missing)
 	if len(missing) > 0 {
 		t.Errorf("keys with no sheet or CSV row: %v", missing)
+	}
+}
+
+// The page's example buttons are exactly the demo recipes of core/recipe/demo.
+func TestShellOffersEveryDemo(t *testing.T) {
+	b, err := os.ReadFile("../../web/shell.html")
+	if err != nil {
+		t.Fatal(err)
+	}
+	page := string(b)
+	var offered []string
+	for p := strings.Index(page, "<button"); p >= 0; {
+		key, end := htmlscan.Attr(page, p+len("<button"), "data-demo")
+		if end < 0 {
+			t.Fatal("web/shell.html: a <button> never ends")
+		}
+		if key != "" {
+			offered = append(offered, key)
+		}
+		q := strings.Index(page[end:], "<button")
+		if q < 0 {
+			break
+		}
+		p = end + q
+	}
+	var want []string
+	for _, d := range demo.All {
+		want = append(want, d.Key)
+	}
+	if !slices.Equal(offered, want) {
+		t.Errorf("web/shell.html offers the demos %v, core/recipe/demo has %v", offered, want)
 	}
 }

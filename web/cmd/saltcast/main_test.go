@@ -49,9 +49,10 @@ func TestGoldens(t *testing.T) {
 	}{
 		{"solubility-kno3-20.json", "", []string{"solubility", "--solute", "KNO3", "--temp-C", "20"}},
 		{"solubility-glauber-25.json", "", []string{"solubility", "--solute=Glauber's salt", "--temp-C=25,0"}},
-		{"plan-cuso4.json", "", []string{"plan", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"plan-cuso4.json", "", []string{"plan", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
 		{"plan-stdin.json", `{"solute":"Na2SO4","water_g":100,"dissolve_temp_C":40,"cool_to_C":20}`, []string{"plan", "-"}},
-		{"demo.txt", "", []string{"demo", "../../../testdata/demo-kno3-stock.json", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo", "../../../core/recipe/demo/demo-kno3-stock.json", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo"}}, // the built-in demos are the same files
 	}
 	for _, tt := range tests {
 		out, errOut, code := run(t, tt.stdin, tt.args...)
@@ -115,7 +116,6 @@ func TestErrors(t *testing.T) {
 		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":5,"dissolve_temp_C":60,"extra":1}`, 2, "extra"},
 		{[]string{"plan", "-"}, `{"solute":"KNO3",`, 2, "JSON line 1"},
 		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":NaN,"dissolve_temp_C":60}`, 2, "NaN"},
-		{[]string{"demo"}, "", 2, "recipe files"},
 		{[]string{"demo", "-"}, `{"solute":"KNO3","water_g":100,"dissolve_temp_C":20,"cool_to_C":40}`, 2, "cool_to_C"},
 	}
 	for _, tt := range tests {
