@@ -111,14 +111,14 @@ func (t *Table[R]) Specs() Specs {
 	return s
 }
 
-// Lookup returns the Spec of key.
-func (s Specs) Lookup(key string) (Spec, bool) {
+// Lookup returns the Spec of key (nil, false if s has none); callers must not change it.
+func (s Specs) Lookup(key string) (*Spec, bool) {
 	for i := range s {
 		if s[i].Key == key {
-			return s[i], true
+			return &s[i], true
 		}
 	}
-	return Spec{}, false
+	return nil, false
 }
 
 // Keys lists the keys directly inside parent ("" for the top level), as written in files.

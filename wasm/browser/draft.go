@@ -99,7 +99,7 @@ func (d *Draft) Set(name, text string, u Units) error {
 	if !ok || s.Kind == recipe.Object || s.Kind == recipe.Version {
 		return nil
 	}
-	err := d.set(&s, text, u)
+	err := d.set(s, text, u)
 	if err != nil {
 		d.Errs[name] = err
 	}
@@ -221,7 +221,10 @@ func FromRecipe(r recipe.Recipe) *Draft {
 
 // Display is the text field name shows in units u ("" when the field is empty).
 func (d *Draft) Display(name string, u Units) string {
-	s, _ := d.specs.Lookup(name)
+	s, ok := d.specs.Lookup(name)
+	if !ok {
+		return ""
+	}
 	k := s.Kind
 	switch k {
 	case kText:
