@@ -12,9 +12,9 @@ all: build demo
 cli:
 	$(GO) build -o bin/saltcast ./web/cmd/saltcast
 
-## demo: plan the invented demo recipes in testdata/ and print them readably
+## demo: plan the invented demo recipes (core/recipe/demo) and print them readably
 demo: cli
-	@./bin/saltcast demo testdata/demo-kno3-stock.json testdata/demo-cuso4-crystals.json
+	@./bin/saltcast demo
 
 ## build: dist/saltcast.html, the single offline file (installs zopfli first when root)
 build:

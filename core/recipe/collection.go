@@ -34,7 +34,7 @@ func DecodeCollection(data []byte) ([]Recipe, error) {
 	for _, m := range v.Members {
 		switch m.Key {
 		case "format":
-			d.format(m.Value)
+			d.format(m.Value, CurrentFormat)
 		case "kind":
 			k := d.text("kind", m.Value, 100)
 			if d.err == nil && k != CollectionKind {

@@ -107,7 +107,7 @@ func prepFromValue(v wire.Value, prefix string) (Prep, error) {
 	for _, m := range v.Members {
 		switch m.Key {
 		case "format":
-			p.Format = d.format(m.Value)
+			p.Format = d.format(m.Value, CurrentFormat)
 		case "kind":
 			if k := d.text("kind", m.Value, 100); d.err == nil && k != PrepKind {
 				d.fail("kind", k, `"`+PrepKind+`" (or leave it out)`)
@@ -115,7 +115,7 @@ func prepFromValue(v wire.Value, prefix string) (Prep, error) {
 		default:
 			f := findPrepField(m.Key)
 			if f == nil {
-				d.fail(m.Key, m.Key, "one of the preparation keys: "+strings.Join(PrepKeys(), ", "))
+				d.fail(m.Key, m.Key, unit.KeysAllowed(PrepKeys()))
 				break
 			}
 			f.set(&d, &p, m.Value)
@@ -144,11 +144,7 @@ func (f *prepField) set(d *reader, p *Prep, v wire.Value) {
 		*f.str(p) = d.text(f.key, v, f.text)
 		return
 	}
-	lo := atLeast(f.lo)
-	if f.loOpen {
-		lo = above(f.lo)
-	}
-	o := d.num(f.key, v, lo, atMost(f.hi), f.allowed)
+	o := d.num(f.key, v, &Spec{Key: f.key, Kind: Plain, Min: f.lo, MinOpen: f.loOpen, Max: f.hi, Allowed: f.allowed})
 	if f.req != nil {
 		*f.req(p) = o.Value
 		return
@@ -421,7 +417,7 @@ func DecodePrepCollection(data []byte) ([]Prep, error) {
 	for _, m := range v.Members {
 		switch m.Key {
 		case "format":
-			d.format(m.Value)
+			d.format(m.Value, CurrentFormat)
 		case "kind":
 			if k := d.text("kind", m.Value, 100); d.err == nil && k != PrepCollectionKind {
 				d.fail("kind", k, `"`+PrepCollectionKind+`"`)

@@ -121,8 +121,29 @@ func fixed(v float64, dec int) string {
 	return s
 }
 
-// CSV writes the plan as comma-separated key,value,unit,label rows (RFC 4180 quoting), the
-// recipe's name first, then warnings, cautions and sources as rows of their own.
+// InputRow is one number of a recipe as the batch sheet and the CSV show it.
+type InputRow struct{ Key, Label, Text, Unit string }
+
+// InputRows lists the numbers r gives (outside the custom compound), in the order of the
+// recipe table, as the form shows them in units u.
+func InputRows(r recipe.Recipe, u Units) []InputRow {
+	d := FromRecipe(r)
+	var rows []InputRow
+	for i := range recipe.FieldSpecs {
+		s := &recipe.FieldSpecs[i]
+		if !s.Kind.IsNumber() || s.Parent() != "" {
+			continue
+		}
+		if text := d.Display(s.Key, u); text != "" {
+			rows = append(rows, InputRow{Key: s.Key, Label: s.Label, Text: text, Unit: unitText(s, u)})
+		}
+	}
+	return rows
+}
+
+// CSV writes the plan as comma-separated key,value,unit,label rows (RFC 4180 quoting): the
+// recipe's name and solute first, then its numbers (keys "recipe.water_g"...), the plan's
+// figures, and warnings, cautions and sources as rows of their own.
 func CSV(r *recipe.Result, u Units) string {
 	var b strings.Builder
 	row := func(cells ...string) {
@@ -138,8 +159,12 @@ func CSV(r *recipe.Result, u Units) string {
 		b.WriteString("\r\n")
 	}
 	row("key", "value", "unit", "label")
-	row("name", r.Recipe.Name, "", "Batch name")
+	name, _ := recipe.FieldSpecs.Lookup("name")
+	row("name", r.Recipe.Name, "", name.Label)
 	row("solute", r.SoluteID, "", r.SoluteName)
+	for _, in := range InputRows(r.Recipe, u) {
+		row("recipe."+in.Key, in.Text, in.Unit, in.Label)
+	}
 	for _, f := range Figures {
 		if text, ut, ok := f.Show(r, u); ok {
 			row(f.Key, text, ut, f.Label)

@@ -140,7 +140,7 @@ func orNone(s []string) []string {
 func (a *app) curveText(r *recipe.Result) string {
 	c := a.compound
 	if c == nil {
-		if a.d.Custom && len(a.d.Points) > 0 {
+		if a.d.Custom() && len(a.d.Points) > 0 {
 			lo, hi := pointRange(a.d.Points)
 			return "Your own points for " + a.d.Text["custom.name"] + ", valid from " + TempText(lo, a.u) + " to " + TempText(hi, a.u) + "."
 		}
@@ -169,7 +169,7 @@ func pointRange(pts []recipe.Point) (lo, hi float64) {
 // chartKey names everything the batch chart is drawn from.
 func (a *app) chartKey(r *recipe.Result) string {
 	k := a.u.Temp + "|" + r.SoluteID + "|" + r.Recipe.Solute
-	if a.d.Custom {
+	if a.d.Custom() {
 		k += "|" + string(a.d.JSON())
 	}
 	if r.HasMetastable {
@@ -207,7 +207,7 @@ func (a *app) chartSVG(r *recipe.Result) string {
 	case a.compound != nil:
 		view.Title = a.compound.Name + ", " + a.compound.ID
 		view.Phases, err = phases(a.compound)
-	case a.d.Custom:
+	case a.d.Custom():
 		view.Title = a.d.Text["custom.name"] + " (own data)"
 		var fit solubility.FitResult
 		fit, err = a.fit()
@@ -353,17 +353,9 @@ func (a *app) renderSheet() {
 	row(in, "Solute", solute)
 	row(in, "Form on the shelf", r.ChargedForm)
 	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" %")
-	d := FromRecipe(r.Recipe)
-	for _, k := range []struct{ key, label string }{
-		{"water_g", "Water"}, {"water_mL", "Water (volume)"}, {"water_temp_C", "measured at"},
-		{"evaporated_water_g", "Water boiled off"}, {"dissolve_temp_C", "Process temperature"},
-		{"saturation_pct", "Saturation"}, {"charge_g", "Charge"}, {"clear_down_to_C", "Stays clear down to"},
-		{"clear_margin_K", "Safety margin"}, {"cool_to_C", "Target temperature"}, {"seed_at_C", "Seed at"},
-		{"metastable_width_K", "Metastable band width"}, {"cooling_time_min", "Cooling time"},
-		{"vessel_heat_capacity_J_per_K", "Vessel heat capacity"},
-	} {
-		if txt := d.Display(k.key, a.u); txt != "" {
-			row(in, k.label, txt+" "+a.unitOf(k.key))
+	for _, k := range InputRows(r.Recipe, a.u) {
+		if k.Key != "purity_pct" { // shown above from the plan, with its default
+			row(in, k.Label, k.Text+" "+k.Unit)
 		}
 	}
 
@@ -388,27 +380,4 @@ func (a *app) renderSheet() {
 		fillProgramme(body, r, a.u, false, true)
 	}
 	setHidden(pt.Get("parentElement"), len(r.Programme) == 0)
-}
-
-// unitOf is the unit shown beside a recipe field on the sheet.
-func (a *app) unitOf(key string) string {
-	switch fieldKinds[key] {
-	case kTemp:
-		return a.u.TempSymbol()
-	case kMass:
-		return a.u.Mass
-	case kVolume:
-		return a.u.VolumeSymbol()
-	}
-	switch key {
-	case "saturation_pct":
-		return "%"
-	case "clear_margin_K", "metastable_width_K":
-		return "K"
-	case "cooling_time_min":
-		return "min"
-	case "vessel_heat_capacity_J_per_K":
-		return "J/K"
-	}
-	return ""
 }

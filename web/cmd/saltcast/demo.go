@@ -6,15 +6,27 @@ import (
 	"unicode/utf8"
 
 	"saltcast/core/recipe"
+	demos "saltcast/core/recipe/demo"
 	"saltcast/core/unit"
 	"saltcast/web/api"
 )
 
-// demo plans each recipe file and prints it as a plain-text batch sheet. It stops at the
-// first file that fails, with the file named.
+// demo plans each recipe file (without files, the demo recipes of core/recipe/demo) and
+// prints it as a plain-text batch sheet. It stops at the first file that fails, with the
+// file named.
 func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	read := func(name string) ([]byte, error) { return readRecipe(name, stdin) }
+	if len(files) == 0 {
+		for _, d := range demos.All {
+			files = append(files, d.File)
+		}
+		read = func(name string) ([]byte, error) {
+			d, _ := demos.Lookup(name)
+			return d.JSON, nil
+		}
+	}
 	for i, name := range files {
-		data, err := readRecipe(name, stdin)
+		data, err := read(name)
 		if err == nil {
 			var r recipe.Recipe
 			if r, err = recipe.Decode(data); err == nil {

@@ -49,11 +49,12 @@ func TestGoldens(t *testing.T) {
 	}{
 		{"solubility-kno3-20.json", "", []string{"solubility", "--solute", "KNO3", "--temp-C", "20"}},
 		{"solubility-glauber-25.json", "", []string{"solubility", "--solute=Glauber's salt", "--temp-C=25,0"}},
-		{"plan-cuso4.json", "", []string{"plan", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"plan-cuso4.json", "", []string{"plan", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
 		{"plan-stdin.json", `{"solute":"Na2SO4","water_g":100,"dissolve_temp_C":40,"cool_to_C":20}`, []string{"plan", "-"}},
-		{"prep-kcl.json", "", []string{"prep", "../../../testdata/demo-prep-kcl-coldroom.json"}},
+		{"prep-kcl.json", "", []string{"prep", "../../../core/recipe/demo/demo-prep-kcl-coldroom.json"}},
 		{"prep-stdin.json", `{"solute":"CuSO4·5H2O","concentration":0.1,"concentration_unit":"mol/L","final_volume_mL":250}`, []string{"prep", "-"}},
-		{"demo.txt", "", []string{"demo", "../../../testdata/demo-kno3-stock.json", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo", "../../../core/recipe/demo/demo-kno3-stock.json", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo"}}, // the built-in demos are the same files
 	}
 	for _, tt := range tests {
 		out, errOut, code := run(t, tt.stdin, tt.args...)
@@ -122,7 +123,6 @@ func TestErrors(t *testing.T) {
 		{[]string{"prep", "-"}, `{"solute":"KCl","concentration":1,"concentration_unit":"mol/L","final_volume_mL":-1}`, 2, "final_volume_mL"},
 		{[]string{"prep", "-"}, `{"solute":"KCl","concentration":1,"concentration_unit":"M","final_volume_mL":100}`, 2, "concentration_unit"},
 		{[]string{"prep", "-"}, `{"solute":"KH2PO4","concentration":1,"concentration_unit":"mol/L","final_mass_g":100}`, 2, "concentration_unit"},
-		{[]string{"demo"}, "", 2, "recipe files"},
 		{[]string{"demo", "-"}, `{"solute":"KNO3","water_g":100,"dissolve_temp_C":20,"cool_to_C":40}`, 2, "cool_to_C"},
 	}
 	for _, tt := range tests {
