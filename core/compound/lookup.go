@@ -117,3 +117,104 @@ func formulaKey(s string) string {
 	}
 	return "f:" + b.String()
 }
+
+// Match is one compound found by Search, with the form the query named: the hydrate when the
+// query matched a hydrate's formula or name ("washing soda", "CuSO4·5"), else the anhydrous form.
+type Match struct {
+	Compound *Compound
+	Form     *Form
+}
+
+// Search lists up to max compounds whose id, name, other names, or a form's formula or name
+// contain query, best first: an exact name or formula, then one that starts with the query,
+// then one with a word that starts with it, then any other. Within a rank the library's order
+// holds, and a compound is listed once, with the form of its best hit. Names are folded as
+// Lookup folds them ("sulphate" = "sulfate", any letter case). An empty query lists the first
+// max compounds of the library.
+func Search(query string, max int) []Match {
+	qn := strings.TrimPrefix(nameKey(query), "n:")
+	qf := strings.TrimPrefix(formulaKey(query), "f:")
+	type hit struct {
+		m    Match
+		rank int
+	}
+	var hits []hit
+	for _, e := range searchable() {
+		best := hit{rank: 4}
+		for _, k := range e.keys {
+			r := min(rankOf(k.name, qn), rankOf(k.formula, qf))
+			if r < best.rank {
+				best = hit{Match{e.c, k.f}, r}
+			}
+		}
+		if best.rank < 4 {
+			hits = append(hits, best)
+		}
+	}
+	out := make([]Match, 0, max)
+	for rank := 0; rank < 4 && len(out) < max; rank++ {
+		for _, h := range hits {
+			if h.rank == rank && len(out) < max {
+				out = append(out, h.m)
+			}
+		}
+	}
+	return out
+}
+
+// searchKey is one name or formula of a compound, folded both ways, and the form it names.
+type searchKey struct {
+	name, formula string
+	f             *Form
+}
+
+// searchable folds every name of the library once, in the library's order.
+var searchable = sync.OnceValue(func() []struct {
+	c    *Compound
+	keys []searchKey
+} {
+	lib := load()
+	out := make([]struct {
+		c    *Compound
+		keys []searchKey
+	}, len(lib.all))
+	for i, c := range lib.all {
+		out[i].c = c
+		add := func(text string, f *Form) {
+			out[i].keys = append(out[i].keys, searchKey{
+				strings.TrimPrefix(nameKey(text), "n:"), strings.TrimPrefix(formulaKey(text), "f:"), f})
+		}
+		anh := c.Forms[0]
+		add(c.ID, anh)
+		add(c.Name, anh)
+		for _, n := range c.Names {
+			add(n, anh)
+		}
+		for _, f := range c.Forms[1:] {
+			add(f.Formula, f)
+			for _, n := range f.Names {
+				add(n, f)
+			}
+		}
+	}
+	return out
+})
+
+// rankOf says how well the folded text matches the folded query: 0 the same, 1 it starts with
+// the query, 2 a word of it does, 3 it contains the query, 4 not at all. An empty query
+// matches everything at rank 3.
+func rankOf(text, q string) int {
+	switch {
+	case q == "":
+		return 3
+	case text == q:
+		return 0
+	case strings.HasPrefix(text, q):
+		return 1
+	case strings.Contains(text, " "+q) || strings.Contains(text, "("+q):
+		return 2
+	case strings.Contains(text, q):
+		return 3
+	}
+	return 4
+}

@@ -381,9 +381,19 @@ func (a *app) updateSolute(typing bool) {
 	}
 	// The forms on the shelf of this compound; "" is the anhydrous form.
 	want := a.d.Text["charged_form"]
-	if c != nil && f != nil && want == "" && f != c.Forms[0] && typing {
-		want = f.Formula
-		a.d.Text["charged_form"] = want
+	if c != nil && f != nil && typing {
+		// Typing a hydrate's formula or name puts that hydrate on the shelf; a form left over
+		// from another compound goes.
+		if f != c.Forms[0] {
+			want = f.Formula
+		} else if _, err := c.Form(want); want != "" && err != nil {
+			want = ""
+		}
+		if want == "" {
+			delete(a.d.Text, "charged_form")
+		} else {
+			a.d.Text["charged_form"] = want
+		}
 	}
 	clear(sel)
 	if c == nil {
@@ -426,31 +436,23 @@ func (a *app) updateSolute(typing bool) {
 const maxMatches = 8
 
 func (a *app) listMatches(box js.Value, text string) {
-	q := strings.ToLower(strings.TrimSpace(text))
-	n := 0
-	for _, c := range compound.All() {
-		if n == maxMatches {
-			break
+	for _, m := range compound.Search(text, maxMatches) {
+		label := m.Compound.ID + " "
+		form := ""
+		if m.Form != m.Compound.Forms[0] {
+			label, form = m.Form.Formula+" ", m.Form.Formula
 		}
-		hit := q == "" || strings.Contains(strings.ToLower(c.ID), q) || strings.Contains(strings.ToLower(c.Name), q)
-		for _, nm := range c.Names {
-			hit = hit || strings.Contains(strings.ToLower(nm), q)
-		}
-		for _, f := range c.Forms {
-			hit = hit || strings.Contains(strings.ToLower(f.Formula), q)
-		}
-		if !hit {
-			continue
-		}
-		b := add(box, "button", "", c.ID+" ")
+		b := add(box, "button", "", label)
 		setAttr(b, "type", "button")
 		setAttr(b, "role", "option")
-		setAttr(b, "data-id", c.ID)
-		add(b, "small", "", c.Name)
-		n++
+		setAttr(b, "data-id", m.Compound.ID)
+		setAttr(b, "data-form", form)
+		add(b, "small", "", m.Compound.Name)
 	}
 }
 
+// onPickMatch takes the compound and the form the user's search named: tapping "washing
+// soda" puts the decahydrate on the shelf, not the anhydrous salt.
 func (a *app) onPickMatch(t js.Value, _ dom.Event) {
 	b := closest(t, "[data-id]")
 	if !exists(b) {
@@ -460,7 +462,11 @@ func (a *app) onPickMatch(t js.Value, _ dom.Event) {
 	setValue(a.inputs["solute"], id)
 	a.d.Set("solute", id, a.u)
 	a.showFieldError("solute", nil)
-	delete(a.d.Text, "charged_form")
+	if form := attr(b, "data-form"); form != "" {
+		a.d.Text["charged_form"] = form
+	} else {
+		delete(a.d.Text, "charged_form")
+	}
 	a.updateSolute(false)
 	clear(byID("solute-matches"))
 	a.recompute()
