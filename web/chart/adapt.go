@@ -99,12 +99,23 @@ func PlanView(r *balance.Result, o Options) (SolubilityView, error) {
 	return v, nil
 }
 
-// BatchFromPlan reads the batch's route from the planner's labelled path
-// points ("dissolve", "onset", "nucleation", "seed", "adiabatic end",
-// "end"), or from the result's fields when the path is empty. Crystals
-// start at the seed point if there is one, else at the expected nucleation,
-// else at saturation; with no onset at all the path runs straight to the
-// end.
+// PathPoint returns the point of kind k on r's path (the last one, if the path had two),
+// or nil. Every reader of the planner's path matches points here, by kind, never by label.
+func PathPoint(r *balance.Result, k balance.PathKind) *Point {
+	var out *Point
+	for _, p := range r.Path {
+		if p.Kind == k {
+			out = &Point{p.TempC, p.G100}
+		}
+	}
+	return out
+}
+
+// BatchFromPlan reads the batch's route from the planner's path points (by
+// kind: dissolve, onset, nucleation, seed, adiabatic end, end), or from the
+// result's fields when the path is empty. Crystals start at the seed point
+// if there is one, else at the expected nucleation, else at saturation;
+// with no onset at all the path runs straight to the end.
 func BatchFromPlan(r *balance.Result) *Batch {
 	b := &Batch{
 		Dissolve: Point{r.DissolveTempC, r.ConcentrationG100},
@@ -113,22 +124,15 @@ func BatchFromPlan(r *balance.Result) *Batch {
 	hasEnd := false
 	var nucleation *Point
 	if len(r.Path) > 0 {
-		for _, p := range r.Path {
-			q := &Point{p.TempC, p.G100}
-			switch p.Label {
-			case "dissolve":
-				b.Dissolve = *q
-			case "onset":
-				b.Saturation = q
-			case "nucleation":
-				nucleation = q
-			case "seed":
-				b.Seed = q
-			case "adiabatic end":
-				b.Settled = q
-			case "end":
-				b.End, hasEnd = *q, true
-			}
+		if p := PathPoint(r, balance.PathDissolve); p != nil {
+			b.Dissolve = *p
+		}
+		b.Saturation = PathPoint(r, balance.PathOnset)
+		nucleation = PathPoint(r, balance.PathNucleation)
+		b.Seed = PathPoint(r, balance.PathSeed)
+		b.Settled = PathPoint(r, balance.PathAdiabaticEnd)
+		if p := PathPoint(r, balance.PathEnd); p != nil {
+			b.End, hasEnd = *p, true
 		}
 	} else {
 		c := r.ConcentrationG100

@@ -92,18 +92,20 @@ func TestBatchFromPlan(t *testing.T) {
 		b.End != (Point{4, 16.3}) || b.Seed != nil || b.Settled != nil {
 		t.Errorf("BatchFromPlan(fields) = %+v", b)
 	}
-	// From labelled path points, seeded: crystals start at the seed.
+	// From path points, seeded: crystals start at the seed. Points are matched by kind;
+	// the labels are for readers and may say anything.
 	r.Path = []balance.PathPoint{
-		{Label: "dissolve", TempC: 35, G100: 50},
-		{Label: "onset", TempC: 32.6, G100: 50},
-		{Label: "seed", TempC: 31, G100: 50},
-		{Label: "adiabatic end", TempC: 31.8, G100: 48.6},
-		{Label: "nucleation", TempC: 27.6, G100: 50},
-		{Label: "end", TempC: 4, G100: 16.3},
-		{Label: "something new", TempC: 99, G100: 99}, // ignored
+		{Kind: balance.PathDissolve, Label: "end", TempC: 35, G100: 50},
+		{Kind: balance.PathOnset, Label: "seed", TempC: 32.6, G100: 50},
+		{Kind: balance.PathSeed, Label: "onset", TempC: 31, G100: 50},
+		{Kind: balance.PathAdiabaticEnd, Label: "insulated, reworded", TempC: 31.8, G100: 48.6},
+		{Kind: balance.PathNucleation, Label: "nucleation", TempC: 27.6, G100: 50},
+		{Kind: balance.PathEnd, Label: "dissolve", TempC: 4, G100: 16.3},
+		{Kind: "something new", Label: "end", TempC: 99, G100: 99}, // ignored
 	}
 	b = BatchFromPlan(r)
-	if *b.Onset != (Point{31, 50}) || *b.Seed != (Point{31, 50}) || *b.Settled != (Point{31.8, 48.6}) {
+	if b.Dissolve != (Point{35, 50}) || b.End != (Point{4, 16.3}) || *b.Saturation != (Point{32.6, 50}) ||
+		*b.Onset != (Point{31, 50}) || *b.Seed != (Point{31, 50}) || *b.Settled != (Point{31.8, 48.6}) {
 		t.Errorf("BatchFromPlan(seeded path) = %+v", b)
 	}
 	// No onset: the batch stays clear, the path runs straight.
