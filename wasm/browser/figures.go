@@ -52,7 +52,11 @@ func heldText(r *recipe.Result) (float64, string, bool) {
 	return r.AdiabaticEndC, "not held at a transition: warms to {T}, where the heat of the crystals runs out", true
 }
 func hasAdiabatic(r *recipe.Result) bool { return r.HasAdiabatic }
-func hasSeedHint(r *recipe.Result) bool  { return r.HasSeedHint }
+
+// hasDissolutionHeat: without an enthalpy of solution the library gives no heat of
+// dissolving (a warning says so), which is not the same as none.
+func hasDissolutionHeat(r *recipe.Result) bool { return r.HasDissolutionHeat }
+func hasSeedHint(r *recipe.Result) bool        { return r.HasSeedHint }
 
 // Figures are the plan's results in the order the sheet and the CSV list them. The first
 // ones are also the big tiles of the batch screen (see shell.html).
@@ -71,8 +75,8 @@ var Figures = []Figure{
 	{Key: "yield_pct", Label: "Yield", Kind: kPlain, Unit: "%", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.YieldPct })},
 	{Key: "liquor_g", Label: "Mother liquor", Kind: kMass, Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG })},
 	{Key: "liquor_g_per_100g_water", Label: "Mother liquor strength", Kind: kPlain, Unit: "g/100 g water", Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG100 })},
-	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: num(func(r *recipe.Result) float64 { return r.DissolutionHeatKJ })},
-	{Key: "dissolution_temp_change_K", Label: "Batch temperature change on dissolving, if insulated", Kind: kDelta, Sig: 1, Get: num(func(r *recipe.Result) float64 { return r.DissolutionTempChangeK })},
+	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionHeatKJ })},
+	{Key: "dissolution_temp_change_K", Label: "Batch temperature change on dissolving, if insulated", Kind: kDelta, Sig: 1, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionTempChangeK })},
 	{Key: "crystallization_heat_kJ", Label: "Heat of crystallization (+ released)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CrystallizationHeatKJ })},
 	{Key: "heat_basis", Label: "Heat of crystallization, basis", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) {
 		return 0, string(r.HeatBasis), hasHeatBasis(r)
