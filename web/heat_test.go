@@ -138,7 +138,16 @@ func TestHeatScreenshots(t *testing.T) {
 				var png []byte
 				var err error
 				if screen == "batch" {
-					// The results, where the new tiles are: scrolled into view.
+					// The cautions at the top of the results, then the new tiles below them.
+					mustEval[bool](t, ctx, `document.getElementById("cautions").scrollIntoView({block: "start"}), true`)
+					top, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
+					if err != nil {
+						t.Fatal(err)
+					}
+					name := "heat-" + b.name + "-cautions-" + strconv.FormatInt(size[0], 10) + "x" + strconv.FormatInt(size[1], 10) + ".png"
+					if err := os.WriteFile(filepath.Join(dir, name), top, 0o644); err != nil {
+						t.Fatal(err)
+					}
 					mustEval[bool](t, ctx, `document.getElementById("extra-figures").scrollIntoView({block: "end"}), true`)
 					png, err = chromedp.Run(ctx, chromedp.CaptureScreenshot())
 				} else {
