@@ -150,6 +150,7 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("crystal_enthalpy_low_kJ_per_mol", r.CrystalEnthalpyLowKJPerMol, t && r.HeatBasis != "")
 	opt("crystallization_heat_low_kJ", r.CrystallizationHeatLowKJ, t && r.HeatBasis != "")
 	opt("sensible_heat_kJ", r.SensibleHeatKJ, t)
+	opt("ice_heat_kJ", r.IceHeatKJ, t && r.HasIce)
 	opt("cooling_duty_kJ", r.CoolingDutyKJ, t)
 	opt("cooling_time_min", r.CoolingTimeMin, r.HasCoolingPower)
 	opt("cooling_power_W", r.CoolingPowerW, r.HasCoolingPower)

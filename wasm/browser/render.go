@@ -6,6 +6,7 @@ import (
 	"strings"
 	"syscall/js"
 
+	"saltcast/core/balance"
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
 	"saltcast/core/solubility"
@@ -80,6 +81,7 @@ func (a *app) render() {
 	setText(byID("charge-form"), cf)
 
 	a.fillListOnce("cautions", r.Cautions)
+	markCautions(byID("cautions"), r.CautionKinds)
 	a.fillListOnce("warnings", orNone(r.Warnings))
 	a.fillListOnce("sources", r.Sources)
 	if ct := a.curveText(r); a.changed("curve-range", ct) {
@@ -126,6 +128,19 @@ func (a *app) changed(key, text string) bool {
 func (a *app) fillListOnce(id string, items []string) {
 	if a.changed(id, strings.Join(items, "\x00")) {
 		fillList(byID(id), items)
+	}
+}
+
+// markCautions marks each caution item with its kind (data-kind) and sets the toxic one
+// apart (class strong): the page tests the kind, never the wording.
+func markCautions(list js.Value, kinds []balance.CautionKind) {
+	for i, li := range qa(list, "li") {
+		k := balance.CautionKind("")
+		if i < len(kinds) {
+			k = kinds[i]
+		}
+		setAttr(li, "data-kind", string(k))
+		classSet(li, "strong", k == balance.CautionToxic)
 	}
 }
 
@@ -176,7 +191,7 @@ func (a *app) chartKey(r *recipe.Result) string {
 		k += "|m" + exact(r.MetastableWidthK)
 	}
 	for _, p := range r.Path {
-		k += "|" + p.Label + "," + exact(p.TempC) + "," + exact(p.G100)
+		k += "|" + string(p.Kind) + "," + exact(p.TempC) + "," + exact(p.G100)
 	}
 	return k
 }
@@ -331,6 +346,7 @@ func (a *app) renderSheet() {
 	setText(byID("s-name"), name)
 	setText(byID("s-date"), today())
 	fillList(byID("s-cautions"), r.Cautions)
+	markCautions(byID("s-cautions"), r.CautionKinds)
 	fillList(byID("s-warnings"), orNone(r.Warnings))
 	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
 	setText(byID("s-notes"), r.Recipe.Notes)

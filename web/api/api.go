@@ -175,6 +175,7 @@ func encodeCompounds() []byte {
 		e.Key("valid_from_C").Round(lo, sig)
 		e.Key("valid_to_C").Round(hi, sig)
 		e.Key("oxidizer").Bool(c.Oxidizer)
+		e.Key("toxic").Bool(c.Toxic)
 		e.Key("organic").Bool(c.Organic)
 		e.Key("hazard").String(c.Hazard)
 		strList(&e, "notes", c.Notes)

@@ -99,9 +99,22 @@ func PlanView(r *balance.Result, o Options) (SolubilityView, error) {
 	return v, nil
 }
 
+// PathPoint returns the point of kind k on r's path (the last one, if the path had two),
+// or nil. Every reader of the planner's path matches points here, by kind, never by label.
+func PathPoint(r *balance.Result, k balance.PathKind) *Point {
+	var out *Point
+	for _, p := range r.Path {
+		if p.Kind == k {
+			out = &Point{p.TempC, p.G100}
+		}
+	}
+	return out
+}
+
 // BatchFromPlan reads the batch's route from the planner's path points, or from the
 // result's fields when the path is empty. It is the one adapter from a plan to the chart's
-// route: the app's batch screen and its printed sheet draw through it.
+// route: the app's batch screen and its printed sheet draw through it. Path points are
+// matched by kind (PathPoint), never by label.
 //
 // Where crystals start (Onset) follows the physics of a cooled (or, for a retrograde solute,
 // heated) batch: at the seed point for a seeded batch, since seed crystals give the solid
@@ -118,24 +131,15 @@ func BatchFromPlan(r *balance.Result) *Batch {
 	hasEnd := false
 	var nucleation *Point
 	if len(r.Path) > 0 {
-		for _, p := range r.Path {
-			q := &Point{p.TempC, p.G100}
-			// Path points are told apart here and nowhere else in the chart; when
-			// balance.PathPoint carries a typed kind, this switch is what changes.
-			switch p.Label {
-			case "dissolve":
-				b.Dissolve = *q
-			case "onset":
-				b.Saturation = q
-			case "nucleation":
-				nucleation = q
-			case "seed":
-				b.Seed = q
-			case "adiabatic end":
-				b.Settled = q
-			case "end":
-				b.End, hasEnd = *q, true
-			}
+		if p := PathPoint(r, balance.PathDissolve); p != nil {
+			b.Dissolve = *p
+		}
+		b.Saturation = PathPoint(r, balance.PathOnset)
+		nucleation = PathPoint(r, balance.PathNucleation)
+		b.Seed = PathPoint(r, balance.PathSeed)
+		b.Settled = PathPoint(r, balance.PathAdiabaticEnd)
+		if p := PathPoint(r, balance.PathEnd); p != nil {
+			b.End, hasEnd = *p, true
 		}
 	} else {
 		c := r.ConcentrationG100

@@ -41,6 +41,40 @@ func golden(t *testing.T, name, got string) {
 	}
 }
 
+// Batches whose sheets show the heat basis, the insulated batch, ice and the toxic caution.
+const (
+	acetateSeeded = `{"solute":"CH3COONa","water_g":100,"dissolve_temp_C":70,"seed_at_C":20,"cool_to_C":20}`
+	kno3Ice       = `{"solute":"KNO3","water_g":100,"charge_g":5,"dissolve_temp_C":20,"cool_to_C":-2}`
+	dichromate    = `{"solute":"K2Cr2O7","water_g":100,"dissolve_temp_C":60,"saturation_pct":90,"cool_to_C":20}`
+)
+
+// The readable sheet shows what a chemist checks before the batch: the seeded sodium acetate
+// batch holds at 58 °C (the trihydrate's incongruent melting point, 58 °C, Lane, Solar Heat
+// Storage, 1983, from memory) on the heat-of-fusion basis; 5 g KNO3 in 100 g water
+// (4.76 mass %) freezes at −1.43 °C (derived: between the CRC 102nd ed. "Concentrative
+// Properties of Aqueous Solutions" rows 4 % (1.22 K) and 5 % (1.50 K)), so at −2 °C ice forms
+// and its heat is in the duty; K2Cr2O7 opens with the toxic caution.
+func TestSheetHeatAndCold(t *testing.T) {
+	for _, tt := range []struct {
+		stdin string
+		want  []string
+	}{
+		{acetateSeeded, []string{"heat basis                    heat of fusion of the hydrate", "held at 58 °C", "with the lowest estimate", "heat-capacity model"}},
+		{kno3Ice, []string{"freezing point                -1.43 °C", "  ice  ", "ice freezing releases", "eutectic"}},
+		{dichromate, []string{"Cautions\n  - TOXIC: "}},
+	} {
+		out, errOut, code := run(t, tt.stdin, "demo", "-")
+		if code != 0 {
+			t.Fatalf("saltcast demo - <<< %s: exit %d, %s", tt.stdin, code, errOut)
+		}
+		for _, w := range tt.want {
+			if !strings.Contains(out, w) {
+				t.Errorf("saltcast demo - <<< %s: no %q in\n%s", tt.stdin, w, out)
+			}
+		}
+	}
+}
+
 func TestGoldens(t *testing.T) {
 	tests := []struct {
 		golden string
@@ -55,6 +89,9 @@ func TestGoldens(t *testing.T) {
 		{"prep-stdin.json", `{"solute":"CuSO4·5H2O","concentration":0.1,"concentration_unit":"mol/L","final_volume_mL":250}`, []string{"prep", "-"}},
 		{"demo.txt", "", []string{"demo", "../../../core/recipe/demo/demo-kno3-stock.json", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
 		{"demo.txt", "", []string{"demo"}}, // the built-in demos are the same files
+		{"demo-acetate-seeded.txt", acetateSeeded, []string{"demo", "-"}},
+		{"demo-kno3-ice.txt", kno3Ice, []string{"demo", "-"}},
+		{"demo-dichromate.txt", dichromate, []string{"demo", "-"}},
 	}
 	for _, tt := range tests {
 		out, errOut, code := run(t, tt.stdin, tt.args...)
