@@ -57,10 +57,15 @@ const (
 	Points              // solubility points, [[temp_C, g_per_100g_water], ...]
 	Object              // an object of further keys, named "object.key" in the table
 	Version             // the file format number ("format"); Max is the newest format read
+	Tag                 // a fixed text naming the kind of file ("kind"): Choices[0], always written, optional to read
 )
 
 // IsNumber reports whether k is one of the number kinds.
 func (k Kind) IsNumber() bool { return k <= Volume }
+
+// Fixed reports whether k is written by the table itself rather than held in a form:
+// the format number and the kind tag.
+func (k Kind) Fixed() bool { return k == Version || k == Tag }
 
 // Spec is what every front end needs to know about a key, without the Go type it lives in:
 // how to read and check it, how to show and label it.
@@ -226,8 +231,15 @@ func (t *Table[R]) read(d *reader, r *R, f *Field[R], v wire.Value) {
 	switch f.Kind {
 	case Version:
 		*f.Int(r) = d.format(v, int(f.Max))
+	case Tag:
+		if s := d.text(f.Key, v, f.MaxBytes); d.err == nil && s != f.Choices[0] {
+			d.fail(f.Key, s, f.Allowed)
+		}
 	case Text:
 		s := d.text(f.Key, v, f.MaxBytes)
+		if f.Choices != nil && f.Trim && contains(f.Choices, strings.TrimSpace(s)) {
+			s = strings.TrimSpace(s) // a choice with spaces around it means the choice
+		}
 		if d.err == nil && f.Choices != nil && !contains(f.Choices, s) {
 			d.fail(f.Key, s, "one of "+strings.Join(f.Choices, ", "))
 		}
@@ -283,6 +295,8 @@ func (t *Table[R]) encodeIn(e *wire.Encoder, r *R, parent string) {
 		switch f.Kind {
 		case Version:
 			e.Key(name).Int(int(f.Max))
+		case Tag:
+			e.Key(name).String(f.Choices[0])
 		case Text:
 			if s := *f.Text(r); s != "" || f.Required {
 				e.Key(name).String(s)
@@ -371,7 +385,7 @@ func (t *Table[R]) ToForm(r *R, f *Form) {
 			f.Points = append([]Point(nil), *fd.Points(r)...)
 		case Object:
 			set = fd.Has(r)
-		case Version:
+		case Version, Tag:
 			set = false
 		default:
 			if fd.Opt == nil {
@@ -428,6 +442,8 @@ func (s Specs) formIn(e *wire.Encoder, f *Form, parent string) {
 		switch sp.Kind {
 		case Version:
 			e.Key(name).Int(int(sp.Max))
+		case Tag:
+			e.Key(name).String(sp.Choices[0])
 		case Text:
 			if v, ok := f.Text[sp.Key]; ok {
 				e.Key(name).String(v)
