@@ -120,7 +120,9 @@ func DecodePrep(data []byte) (Prep, error) { return PrepFields.Decode(data) }
 
 // DecodePrepValue checks one preparation object already read as JSON, as DecodePrep does;
 // prefix goes in front of field names ("recipes[2].").
-func DecodePrepValue(v wire.Value, prefix string) (Prep, error) { return PrepFields.FromValue(v, prefix) }
+func DecodePrepValue(v wire.Value, prefix string) (Prep, error) {
+	return PrepFields.FromValue(v, prefix)
+}
 
 // check enforces the rules that involve more than one key or a required key.
 func (p *Prep) check(prefix string) error {
