@@ -321,6 +321,7 @@ func (res PrepResult) encode(e *wire.Encoder) {
 	num("saturation_pct", r.SaturationPct)
 	e.Key("supersaturated").Bool(r.Supersaturated)
 	opt("saturation_temp_C", r.SaturationTempC, r.HasSaturationTemp)
+	opt("freezing_point_C", r.FreezingPointC, r.HasFreezingPoint)
 	opt("keep_above_C", r.KeepAboveC, r.HasKeepAbove)
 	opt("clear_down_to_C", r.ClearDownToC, !r.HasSaturationTemp && !r.Supersaturated)
 	opt("crystallizes_above_C", r.CrystallizesAbove, r.HasWarmLimit)
@@ -332,6 +333,11 @@ func (res PrepResult) encode(e *wire.Encoder) {
 	}
 	opt("dissolve_temp_change_K", r.DissolveChangeK, r.HasDissolveHeat)
 	list("cautions", r.Cautions)
+	e.Key("caution_kinds").BeginArray()
+	for _, k := range r.CautionKinds {
+		e.String(string(k))
+	}
+	e.EndArray()
 	list("warnings", r.Warnings)
 	list("sources", r.Sources)
 	e.EndObject()
