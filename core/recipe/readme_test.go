@@ -80,3 +80,33 @@ func same(t *testing.T, what string, doc, table []string) {
 		t.Errorf("%s lacks %v and lists %v that recipe.Fields does not have", what, missing, extra)
 	}
 }
+
+// The CLI document's preparation key table lists exactly the keys of PrepFields.
+func TestReadmeListsEveryPrepKey(t *testing.T) {
+	b, err := os.ReadFile("../../web/cmd/saltcast/README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	doc := string(b)
+	const heading = "## `saltcast prep`"
+	start := strings.Index(doc, heading)
+	if start < 0 {
+		t.Fatalf("web/cmd/saltcast/README.md has no section %q", heading)
+	}
+	section := doc[start+len(heading):]
+	if end := strings.Index(section, "\n## "); end >= 0 {
+		section = section[:end]
+	}
+	ident := regexp.MustCompile("`([a-z][A-Za-z0-9_]*)`")
+	var keys []string
+	for _, line := range strings.Split(section, "\n") {
+		cells := strings.Split(line, "|")
+		if len(cells) < 3 || strings.HasPrefix(strings.TrimSpace(cells[1]), "---") || strings.TrimSpace(cells[1]) == "key" {
+			continue
+		}
+		for _, m := range ident.FindAllStringSubmatch(cells[1], -1) {
+			keys = append(keys, m[1])
+		}
+	}
+	same(t, "web/cmd/saltcast/README.md's preparation key table", keys, PrepSpecs.Keys(""))
+}
