@@ -28,6 +28,9 @@ func catalogueCases(t testing.TB) []apiCase {
 		case badinput.RoutePlan:
 			c.method, c.contentType, c.body = "POST", "application/json", []byte(r.Input)
 			c.want = plan(c.body)
+		case badinput.RoutePrep:
+			c.method, c.contentType, c.body = "POST", "application/json", []byte(r.Input)
+			c.want = prepare(c.body)
 		default:
 			p, err := r.Params()
 			if err != nil {
