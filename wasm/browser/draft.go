@@ -77,7 +77,7 @@ func newDraft(s recipe.Specs) *Draft {
 // that holds a value.
 func Known(name string) bool {
 	s, ok := recipe.FieldSpecs.Lookup(name)
-	return ok && s.Kind != recipe.Object && s.Kind != recipe.Version
+	return ok && s.Kind != recipe.Object && !s.Kind.Fixed()
 }
 
 // Custom reports whether the draft plans with the user's own compound.
@@ -96,7 +96,7 @@ func (d *Draft) SetCustom(on bool) {
 func (d *Draft) Set(name, text string, u Units) error {
 	delete(d.Errs, name)
 	s, ok := d.specs.Lookup(name)
-	if !ok || s.Kind == recipe.Object || s.Kind == recipe.Version {
+	if !ok || s.Kind == recipe.Object || s.Kind.Fixed() {
 		return nil
 	}
 	err := d.set(s, text, u)

@@ -22,15 +22,22 @@ import (
 // web/shell.html, in page order: what the page fills from a draft and reads back.
 func shellInputs(t testing.TB) []string {
 	t.Helper()
+	return shellFormInputs(t, "recipe")
+}
+
+// shellFormInputs returns the names of the inputs, selects and text areas of the form with
+// id formID in web/shell.html, in page order.
+func shellFormInputs(t testing.TB, formID string) []string {
+	t.Helper()
 	b, err := os.ReadFile("../../web/shell.html")
 	if err != nil {
 		t.Fatal(err)
 	}
 	page := string(b)
-	start := strings.Index(page, `<form id="recipe"`)
+	start := strings.Index(page, `<form id="`+formID+`"`)
 	end := strings.Index(page[max(start, 0):], "</form>")
 	if start < 0 || end < 0 {
-		t.Fatal(`web/shell.html has no <form id="recipe"> ... </form>`)
+		t.Fatalf(`web/shell.html has no <form id="%s"> ... </form>`, formID)
 	}
 	form := page[start : start+end]
 	var names []string
@@ -41,7 +48,7 @@ func shellInputs(t testing.TB) []string {
 			var name string
 			name, next = htmlscan.Attr(form, after, "name")
 			if next < 0 {
-				t.Fatalf("web/shell.html: a <%s> in the recipe form never ends", tag)
+				t.Fatalf("web/shell.html: a <%s> in the %s form never ends", tag, formID)
 			}
 			if name != "" && !slices.Contains(names, name) {
 				names = append(names, name)

@@ -30,7 +30,7 @@ const maxLabels = 24
 
 type prepScreen struct {
 	started bool
-	form    PrepForm
+	d       *Draft
 	last    *recipe.PrepResult
 	saved   []recipe.Prep
 	shown   map[string]js.Value // result outputs by data-key
@@ -42,7 +42,7 @@ var ps prepScreen
 
 func (a *app) startPrep() {
 	ps.started = true
-	ps.form = NewPrepForm()
+	ps.d = NewPrepDraft()
 	ps.shown, ps.boxes, ps.subs = map[string]js.Value{}, map[string]js.Value{}, map[string]js.Value{}
 	form := byID("prep")
 	dl := byID("p-solutes")
@@ -61,6 +61,7 @@ func (a *app) startPrep() {
 		{"saturation_pct", "Of saturation"},
 		{"keep_above_C", "Keep above"},
 		{"saturation_temp_C", "Crystallizes below"},
+		{"freezing_point_C", "Freezes at"},
 	} {
 		box := addFigure(figs, t.label)
 		val := add(box, "span", "val", "")
@@ -132,51 +133,50 @@ func (a *app) loadPrep(p recipe.Prep) {
 	if !ps.started {
 		a.startPrep()
 	}
-	ps.form = FormFromPrep(p, a.u)
+	ps.d = FromPrep(p)
 	setValue(byID("prep-save-name"), p.Name)
 	a.showPrepForm()
 	a.recomputePrep()
 }
 
-// showPrepForm writes the form state into the inputs.
+// prepInputs are the inputs of the preparation form that hold a recipe key, by name.
+func prepInputs() map[string]js.Value {
+	m := map[string]js.Value{}
+	for _, el := range qa(byID("prep"), "[name]") {
+		if name := attr(el, "name"); PrepKnown(name) {
+			m[name] = el
+		}
+	}
+	return m
+}
+
+// showPrepForm writes the draft into the inputs, in the user's units.
 func (a *app) showPrepForm() {
-	form := byID("prep")
-	for _, name := range []string{"solute", "concentration", "concentration_unit", "amount", "temp_C", "purity_pct",
-		"stock_concentration", "stock_unit", "store_at_C", "name", "notes"} {
-		setValue(q(form, `[name="`+name+`"]`), ps.form.Text[name])
+	for name, el := range prepInputs() {
+		setValue(el, ps.d.Display(name, a.u))
 		a.prepFieldError(name, nil)
 	}
-	for _, el := range qa(form, `[name="prep_amount"]`) {
-		setChecked(el, value(el) == ps.form.Amount)
-	}
-	for _, el := range qa(form, `[name="prep_from"]`) {
-		setChecked(el, (value(el) == "stock") == ps.form.FromStock)
+	for group, control := range prepGroupInputs {
+		for _, el := range qa(byID("prep"), `[name="`+control+`"]`) {
+			setChecked(el, value(el) == ps.d.Pick[group])
+		}
 	}
 	a.showPrepParts()
 	a.fillForms()
 }
 
-// showPrepParts shows the inputs of the way the solution is made and names the amount.
+// showPrepParts shows the inputs of the choices picked (the amount, solid or stock).
 func (a *app) showPrepParts() {
-	for _, el := range qa(byID("prep"), "[data-from]") {
-		setHidden(el, (attr(el, "data-from") == "stock") != ps.form.FromStock)
+	for _, el := range qa(byID("prep"), "[data-group]") {
+		setHidden(el, attr(el, "data-choice") != ps.d.Pick[attr(el, "data-group")])
 	}
-	label := map[string]string{"final_volume_mL": "Made up to ", "final_mass_g": "Solution mass ", "solvent_g": "Water in it "}[ps.form.Amount]
-	u := "mL"
-	if ps.form.Amount != "final_volume_mL" {
-		u = "g"
-	}
-	lbl := byID("p-amount-label")
-	clear(lbl)
-	lbl.Call("append", label)
-	add(lbl, "span", "u", u)
 }
 
 // fillForms lists the forms on the shelf of the solute typed.
 func (a *app) fillForms() {
 	sel := byID("p-charged_form")
 	clear(sel)
-	c, f, err := compound.Lookup(ps.form.Text["solute"])
+	c, f, err := compound.Lookup(ps.d.Text["solute"])
 	picked := byID("p-picked")
 	if err != nil {
 		setText(picked, "")
@@ -184,7 +184,7 @@ func (a *app) fillForms() {
 		return
 	}
 	setText(picked, c.Name+" · "+c.ID)
-	want := ps.form.Text["charged_form"]
+	want := ps.d.Text["charged_form"]
 	if fw, err := c.Form(want); err == nil {
 		want = fw.Formula
 	} else {
@@ -201,29 +201,29 @@ func (a *app) fillForms() {
 		setAttr(opt, "value", form.Formula)
 	}
 	setValue(sel, want)
-	ps.form.Text["charged_form"] = want
+	ps.d.Text["charged_form"] = want
 }
 
 func (a *app) onPrepInput(el js.Value, _ dom.Event) {
 	name := attr(el, "name")
-	switch name {
-	case "prep_amount":
-		ps.form.Amount = value(el)
-		a.showPrepParts()
-	case "prep_from":
-		ps.form.FromStock = value(el) == "stock"
-		a.showPrepParts()
-	case "":
+	for group, control := range prepGroupInputs {
+		if name == control {
+			ps.d.Pick[group] = value(el)
+			a.showPrepParts()
+			a.recomputePrep()
+			return
+		}
+	}
+	if !PrepKnown(name) {
 		return
-	default:
-		ps.form.Text[name] = value(el)
-		if name == "solute" {
-			delete(ps.form.Text, "charged_form")
-			a.fillForms()
-		}
-		if name == "name" {
-			setValue(byID("prep-save-name"), value(el))
-		}
+	}
+	a.prepFieldError(name, ps.d.Set(name, value(el), a.u))
+	switch name {
+	case "solute":
+		delete(ps.d.Text, "charged_form")
+		a.fillForms()
+	case "name":
+		setValue(byID("prep-save-name"), value(el))
 	}
 	a.recomputePrep()
 }
@@ -253,20 +253,21 @@ func (a *app) recomputePrep() {
 		return
 	}
 	form := byID("prep")
-	for _, name := range prepNumbers {
-		a.prepFieldError(name, nil)
-	}
-	for _, name := range []string{"solute", "charged_form", "concentration_unit", "stock_unit", "name"} {
-		a.prepFieldError(name, nil)
+	for name := range prepInputs() {
+		if ps.d.Errs[name] == nil {
+			a.prepFieldError(name, nil)
+		}
 	}
 	stale := byID("prep-stale")
-	p, errs := ps.form.Prep(a.u)
+	errs := ps.d.Errs
 	var res recipe.PrepResult
-	var err error
 	if len(errs) == 0 {
-		res, err = recipe.PlanPrep(p)
+		p, err := ps.d.Prep()
+		if err == nil {
+			res, err = recipe.PlanPrep(p)
+		}
 		if err != nil {
-			errs = map[string]error{PrepInput(err): err}
+			errs = map[string]error{fieldOf(err): err}
 		}
 	}
 	if len(errs) > 0 {
@@ -289,6 +290,14 @@ func (a *app) recomputePrep() {
 	a.renderPrep()
 }
 
+// fieldOf is the field a *unit.FieldError names, or "".
+func fieldOf(err error) string {
+	if fe, ok := err.(*unit.FieldError); ok {
+		return fe.Field
+	}
+	return ""
+}
+
 func (a *app) renderPrep() {
 	res := ps.last
 	if res == nil {
@@ -309,23 +318,27 @@ func (a *app) renderPrep() {
 	}
 	formSub := ""
 	if r.HasForm {
-		formSub = "g of " + r.Form
+		formSub = "of " + r.Form
 		if r.PurityPct < 100 {
 			formSub += " at " + unit.FormatCompact(r.PurityPct, 4) + " %"
 		}
 	}
-	set("form_g", num(r.FormG), formSub, r.HasForm)
-	set("stock_mL", num(r.StockML), "mL of stock = "+num(r.StockG)+" g", r.HasStock && r.HasStockVolume)
-	waterSub := "g = " + num(r.WaterML) + " mL"
+	u := a.u
+	mass := func(g float64) string { return num(MassFromG(g, u)) }
+	vol := func(ml float64) string { return num(VolumeFromML(ml, u)) }
+	set("form_g", mass(r.FormG), u.Mass+" "+formSub, r.HasForm)
+	set("stock_mL", vol(r.StockML), u.VolumeSymbol()+" of stock = "+mass(r.StockG)+" "+u.Mass, r.HasStock && r.HasStockVolume)
+	waterSub := u.Mass + " = " + vol(r.WaterML) + " " + u.VolumeSymbol()
 	if r.WaterApprox {
 		waterSub += "; fill to the mark"
 	}
-	set("water_g", num(r.WaterG), waterSub, true)
-	set("solution_mL", num(r.SolutionML), "mL = "+num(r.SolutionG)+" g", r.HasDensity || r.Amount == prep.ByVolume)
+	set("water_g", mass(r.WaterG), waterSub, true)
+	set("solution_mL", vol(r.SolutionML), u.VolumeSymbol()+" = "+mass(r.SolutionG)+" "+u.Mass, r.HasDensity || r.Amount == prep.ByVolume)
 	set("density_g_per_mL", unit.FormatNumber(r.DensityKgPerM3/1000, 5), "g/mL ± "+unit.FormatCompact(r.DensityErrPct, 2)+" %", r.HasDensity)
 	set("saturation_pct", unit.FormatNumber(r.SaturationPct, 3), "% at "+TempText(r.TempC, a.u), true)
 	set("keep_above_C", fixed(TempFromC(r.KeepAboveC, a.u), 1), a.u.TempSymbol(), r.HasKeepAbove)
 	set("saturation_temp_C", fixed(TempFromC(r.SaturationTempC, a.u), 1), a.u.TempSymbol(), r.HasSaturationTemp && !r.Supersaturated)
+	set("freezing_point_C", fixed(TempFromC(r.FreezingPointC, a.u), 1), a.u.TempSymbol(), r.HasFreezingPoint)
 	for key, v := range map[string]float64{"mol_per_L": r.MolPerL, "mmol_per_L": r.MmolPerL, "g_per_L": r.GPerL,
 		"mg_per_L": r.MgPerL, "pct_w_v": r.PctWV} {
 		s := "—"
@@ -338,6 +351,7 @@ func (a *app) renderPrep() {
 	setText(ps.shown["mol_per_kg"], num(r.MolPerKg))
 	setText(ps.shown["g_per_100g_water"], num(r.GPer100gWater))
 	fillList(byID("prep-cautions"), r.Cautions)
+	markCautions(byID("prep-cautions"), r.CautionKinds)
 	fillList(byID("prep-warnings"), orNone(r.Warnings))
 	fillList(byID("prep-sources"), r.Sources)
 	a.renderLabels()
@@ -402,8 +416,8 @@ func (a *app) prepToBatch() {
 
 func (a *app) savePrep() {
 	msg := byID("m-prep-save")
-	p, errs := ps.form.Prep(a.u)
-	if len(errs) > 0 {
+	p, err := ps.d.Prep()
+	if err != nil || len(ps.d.Errs) > 0 {
 		setText(msg, "Not saved: correct the marked field first.")
 		return
 	}
@@ -427,7 +441,7 @@ func (a *app) savePrep() {
 		return
 	}
 	ps.saved = list
-	ps.form.Text["name"] = name
+	ps.d.Text["name"] = name
 	setValue(q(byID("prep"), `[name="name"]`), name)
 	setText(msg, "Saved “"+name+"”.")
 	a.renderSavedPreps()
@@ -507,8 +521,8 @@ func (a *app) importPreps() {
 }
 
 func (a *app) sharePrep() {
-	p, errs := ps.form.Prep(a.u)
-	if len(errs) > 0 {
+	p, err := ps.d.Prep()
+	if err != nil || len(ps.d.Errs) > 0 {
 		setText(byID("m-prep-import"), "No link: correct the marked field first.")
 		return
 	}
@@ -531,17 +545,17 @@ func isoToday() string {
 	return strconv.Itoa(d.Call("getFullYear").Int()) + "-" + two(d.Call("getMonth").Int()+1) + "-" + two(d.Call("getDate").Int())
 }
 
-// prepUnits follows the unit switch: the temperatures on the form are shown in the new unit
-// (a form that does not read keeps its text) and the results are drawn again.
-func (a *app) prepUnits(old Units) {
+// prepUnits follows the unit switch: temperatures, masses and volumes on the form are shown
+// in the new units (an input that does not read keeps its text; the draft keeps the values
+// themselves, so nothing is rounded) and the results are drawn again.
+func (a *app) prepUnits(Units) {
 	if !ps.started {
 		return
 	}
-	if p, errs := ps.form.Prep(old); len(errs) == 0 {
-		from := ps.form.FromStock
-		ps.form = FormFromPrep(p, a.u)
-		ps.form.FromStock = from
-		a.showPrepForm()
+	for name, el := range prepInputs() {
+		if ps.d.Errs[name] == nil && name != "charged_form" {
+			setValue(el, ps.d.Display(name, a.u))
+		}
 	}
 	a.recomputePrep()
 }
