@@ -73,12 +73,17 @@ func (a *app) start() {
 	a.bindTiles()
 	a.loadUnits()
 
+	shelfRead := true // nothing stored, or read: the box may be written
 	if s, ok := a.store.get(keyShelf); ok {
 		if sh, err := LoadShelf(s); err == nil {
 			a.shelf = sh
 		} else {
+			shelfRead = false
 			a.boxMessage("m-save", "The saved recipes in this browser could not be read ("+err.Error()+"); they are left as they were.")
 		}
+	}
+	if shelfRead {
+		a.adoptOldPreps()
 	}
 
 	// The recipe to start with: a share link, else the last one on screen, else a demo.

@@ -17,6 +17,7 @@ import (
 func (a *app) bindBox() {
 	on(byID("save-btn"), "click", func(js.Value, dom.Event) { a.save() })
 	on(byID("saved"), "click", a.onSavedClick)
+	on(byID("saved-preps"), "click", a.onSavedPrep)
 	on(byID("export-one"), "click", func(js.Value, dom.Event) {
 		if r, err := a.d.Recipe(); err == nil {
 			setValue(byID("transfer"), string(recipe.EncodeCollection([]recipe.Recipe{r})))
@@ -146,6 +147,7 @@ func (a *app) renderShelf() {
 		setAttr(del, "data-delete", itoa(i))
 		setAttr(del, "aria-label", "Delete "+r.Name)
 	}
+	a.renderSavedPreps()
 	// The list to send from and the "in your list" marks of received recipes follow.
 	a.renderCarry()
 	a.renderReceived()

@@ -19,7 +19,8 @@ import (
 // its figures, the stock-bottle labels, and the saved preparations. Its inputs are named like
 // the recipe keys (prepform.go) and its results carry the answer's keys as data-key.
 
-// keyPreps holds the saved preparations, as a preparations collection file.
+// keyPreps held the saved preparations before they joined the recipe box (keyShelf); what
+// it still holds is moved there once (adoptOldPreps).
 const keyPreps = "saltcast.preps"
 
 // keyLabelBy remembers who makes the solutions on this device, for the label.
@@ -32,7 +33,6 @@ type prepScreen struct {
 	started bool
 	d       *Draft
 	last    *recipe.PrepResult
-	saved   []recipe.Prep
 	shown   map[string]js.Value // result outputs by data-key
 	boxes   map[string]js.Value // their tiles
 	subs    map[string]js.Value // the line under a tile's value
@@ -89,13 +89,6 @@ func (a *app) startPrep() {
 		setAttr(out, "data-key", u.key)
 		ps.shown[u.key] = out
 	}
-	if s, ok := a.store.get(keyPreps); ok {
-		if list, err := recipe.DecodePrepCollection([]byte(s)); err == nil {
-			ps.saved = list
-		} else {
-			setText(byID("m-prep-save"), "The saved preparations in this browser could not be read ("+err.Error()+"); they are left as they were.")
-		}
-	}
 	if s, ok := a.store.get(keyLabelBy); ok {
 		setValue(byID("p-label_by"), s)
 	}
@@ -115,11 +108,11 @@ func (a *app) startPrep() {
 	on(byID("prep-save"), "click", func(js.Value, dom.Event) { a.savePrep() })
 	on(byID("prep-saved"), "click", a.onSavedPrep)
 	on(byID("prep-export"), "click", func(js.Value, dom.Event) {
-		setValue(byID("prep-transfer"), string(recipe.EncodePrepCollection(ps.saved)))
+		setValue(byID("prep-transfer"), string(recipe.EncodePrepCollection(a.shelf.Preps)))
 		setText(byID("m-prep-import"), "The saved preparations are in the box below: copy them, or download them as a file.")
 	})
 	on(byID("prep-download"), "click", func(js.Value, dom.Event) {
-		download("saltcast-preparations.json", "application/json", string(recipe.EncodePrepCollection(ps.saved)))
+		download("saltcast-preparations.json", "application/json", string(recipe.EncodePrepCollection(a.shelf.Preps)))
 	})
 	on(byID("prep-import"), "click", func(js.Value, dom.Event) { a.importPreps() })
 	on(byID("prep-share"), "click", func(js.Value, dom.Event) { a.sharePrep() })
@@ -423,101 +416,108 @@ func (a *app) savePrep() {
 	}
 	name := strings.TrimSpace(value(byID("prep-save-name")))
 	if name == "" {
-		name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
+		name = PrepName(p)
 	}
 	p.Name = name
-	list := append([]recipe.Prep(nil), ps.saved...)
-	replaced := false
-	for i := range list {
-		if list[i].Name == name {
-			list[i], replaced = p, true
-		}
-	}
-	if !replaced {
-		list = append(list, p)
-	}
-	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+	next := a.shelf
+	next.PutPrep(p)
+	if !a.store.set(keyShelf, string(next.Encode())) {
 		setText(msg, "Not saved: this browser's storage is full or switched off. Export the saved preparations first.")
 		return
 	}
-	ps.saved = list
+	a.shelf = next
 	ps.d.Text["name"] = name
 	setValue(q(byID("prep"), `[name="name"]`), name)
-	setText(msg, "Saved “"+name+"”.")
-	a.renderSavedPreps()
+	setText(msg, "Saved “"+name+"”; it is in the recipe box too.")
+	a.renderShelf()
 }
 
+// renderSavedPreps lists the saved preparations on the Make up screen and in the recipe box.
 func (a *app) renderSavedPreps() {
-	list := byID("prep-saved")
-	clear(list)
-	for i, p := range ps.saved {
-		li := add(list, "li", "", "")
-		add(li, "span", "nm", p.Name)
-		b := add(li, "button", "act", "Open")
-		setAttr(b, "type", "button")
-		setAttr(b, "data-open", strconv.Itoa(i))
-		d := add(li, "button", "act danger", "Delete")
-		setAttr(d, "type", "button")
-		setAttr(d, "data-delete", strconv.Itoa(i))
+	for _, id := range []string{"prep-saved", "saved-preps"} {
+		list := byID(id)
+		if !exists(list) {
+			continue
+		}
+		clear(list)
+		for i, p := range a.shelf.Preps {
+			li := add(list, "li", "", "")
+			add(li, "span", "nm", p.Name)
+			b := add(li, "button", "act", "Open")
+			setAttr(b, "type", "button")
+			setAttr(b, "data-open", strconv.Itoa(i))
+			d := add(li, "button", "act danger", "Delete")
+			setAttr(d, "type", "button")
+			setAttr(d, "data-delete", strconv.Itoa(i))
+			setAttr(d, "aria-label", "Delete "+p.Name)
+		}
+	}
+	if el := byID("saved-preps-empty"); exists(el) {
+		setHidden(el, len(a.shelf.Preps) > 0)
 	}
 }
 
 func (a *app) onSavedPrep(t js.Value, _ dom.Event) {
 	if b := closest(t, "[data-open]"); exists(b) {
-		if i, err := strconv.Atoi(attr(b, "data-open")); err == nil && i < len(ps.saved) {
-			a.loadPrep(ps.saved[i])
+		if i, err := strconv.Atoi(attr(b, "data-open")); err == nil && i < len(a.shelf.Preps) {
+			a.loadPrep(a.shelf.Preps[i])
+			a.showScreen("prep")
 		}
 		return
 	}
 	if b := closest(t, "[data-delete]"); exists(b) {
 		i, err := strconv.Atoi(attr(b, "data-delete"))
-		if err != nil || i >= len(ps.saved) {
+		if err != nil || i >= len(a.shelf.Preps) || !win.Confirm("Delete the saved preparation “"+a.shelf.Preps[i].Name+"”?") {
 			return
 		}
-		list := append(append([]recipe.Prep(nil), ps.saved[:i]...), ps.saved[i+1:]...)
-		if a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
-			ps.saved = list
-			a.renderSavedPreps()
+		next := a.shelf
+		next.DeletePrep(i)
+		if a.store.set(keyShelf, string(next.Encode())) {
+			a.shelf = next
+			a.renderShelf()
 		}
 	}
 }
 
-// importPreps takes a whole preparations file (or one preparation) or nothing.
+// adoptOldPreps moves preparations saved before they joined the recipe box into it, once.
+func (a *app) adoptOldPreps() {
+	s, ok := a.store.get(keyPreps)
+	if !ok || strings.TrimSpace(s) == "" {
+		return
+	}
+	list, err := recipe.DecodePrepCollection([]byte(s))
+	if err != nil {
+		return // left as it was, for a newer Saltcast to read
+	}
+	next := a.shelf
+	for _, p := range list {
+		p.Name = PrepName(p)
+		next.PutPrep(p)
+	}
+	if a.store.set(keyShelf, string(next.Encode())) {
+		a.shelf = next
+		a.store.set(keyPreps, "")
+	}
+}
+
+// importPreps takes a whole file (preparations, recipes or both, or one preparation) or
+// nothing, into the recipe box.
 func (a *app) importPreps() {
 	msg := byID("m-prep-import")
-	text := strings.TrimSpace(value(byID("prep-transfer")))
-	in, err := recipe.DecodePrepCollection([]byte(text))
-	if err != nil {
-		if one, err1 := recipe.DecodePrep([]byte(text)); err1 == nil {
-			in, err = []recipe.Prep{one}, nil
-		}
-	}
+	next := a.shelf
+	next.Recipes = append([]recipe.Recipe(nil), a.shelf.Recipes...)
+	n, err := next.Import([]byte(strings.TrimSpace(value(byID("prep-transfer")))))
 	if err != nil {
 		setText(msg, "Nothing imported: "+err.Error())
 		return
 	}
-	list := append([]recipe.Prep(nil), ps.saved...)
-	for _, p := range in {
-		if p.Name == "" {
-			p.Name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
-		}
-		same := false
-		for i := range list {
-			if list[i].Name == p.Name {
-				list[i], same = p, true
-			}
-		}
-		if !same {
-			list = append(list, p)
-		}
-	}
-	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+	if !a.store.set(keyShelf, string(next.Encode())) {
 		setText(msg, "Nothing imported: this browser's storage is full or switched off.")
 		return
 	}
-	ps.saved = list
-	a.renderSavedPreps()
-	setText(msg, "Imported "+strconv.Itoa(len(in))+" preparation(s).")
+	a.shelf = next
+	a.renderShelf()
+	setText(msg, "Imported "+strconv.Itoa(n)+" recipe(s) and preparation(s).")
 }
 
 func (a *app) sharePrep() {

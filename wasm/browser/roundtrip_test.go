@@ -253,10 +253,10 @@ func TestRoundTripRandomRecipes(t *testing.T) {
 			exactRecipe(t, "export one, import", one.Recipes[0], r)
 		}
 		// A single recipe file (not a collection) is read too.
-		if got, err := ReadImport(r.Encode()); err != nil || len(got) != 1 {
-			t.Errorf("recipe %d: ReadImport(single recipe) = %d recipes, %v", i, len(got), err)
+		if got, err := ReadImport(r.Encode()); err != nil || len(got.Recipes) != 1 {
+			t.Errorf("recipe %d: ReadImport(single recipe) = %d recipes, %v", i, len(got.Recipes), err)
 		} else {
-			exactRecipe(t, "single recipe file", got[0], r)
+			exactRecipe(t, "single recipe file", got.Recipes[0], r)
 		}
 		// The share link.
 		frag := ShareFragment(r)
