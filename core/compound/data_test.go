@@ -415,3 +415,34 @@ func FuzzParse(f *testing.F) {
 		}
 	})
 }
+
+// The salts whose harmonised classification (EU CLP Annex VI, as printed on their SDS; from
+// memory) carries acute toxicity category 1–3, carcinogenicity, mutagenicity or reproductive
+// toxicity are flagged toxic, so every plan and preparation opens with the strong caution.
+func TestToxicFlags(t *testing.T) {
+	for _, id := range []string{
+		"BaCl2",    // H301, H332
+		"K2Cr2O7",  // H350, H340, H360FD, H330
+		"K2CrO4",   // H350i, H340
+		"Pb(NO3)2", // H360Df
+		"NiSO4",    // H350i, H341, H360D
+		"CoCl2",    // H350i, H341, H360F
+		"Na2B4O7",  // H360FD
+		"H3BO3",    // H360FD
+		"NaF",      // H301
+	} {
+		c, _, err := Lookup(id)
+		if err != nil {
+			t.Errorf("%s: %v", id, err)
+			continue
+		}
+		if !c.Toxic {
+			t.Errorf("%s is not flagged toxic", id)
+		}
+	}
+	for _, id := range []string{"NaCl", "KNO3", "C12H22O11"} {
+		if c, _, err := Lookup(id); err != nil || c.Toxic {
+			t.Errorf("%s: flagged toxic (or %v); it is not", id, err)
+		}
+	}
+}
