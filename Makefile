@@ -1,6 +1,6 @@
 # Saltcast build. `make` builds the single-file app and shows the demo; `make test` runs every
 # test (it installs what the browser and worker tests need first); `make bench` prints the
-# performance figures recorded in the README.
+# performance figures recorded in web/PERFORMANCE.md.
 GO      ?= go
 export PATH := $(shell $(GO) env GOROOT)/lib/wasm:$(PATH)
 
@@ -12,9 +12,9 @@ all: build demo
 cli:
 	$(GO) build -o bin/saltcast ./web/cmd/saltcast
 
-## demo: plan the invented demo recipes in testdata/ and print them readably
+## demo: plan the invented demo recipes (core/recipe/demo) and print them readably
 demo: cli
-	@./bin/saltcast demo testdata/demo-kno3-stock.json testdata/demo-cuso4-crystals.json
+	@./bin/saltcast demo
 
 ## build: dist/saltcast.html, the single offline file (installs zopfli first when root)
 build:
@@ -26,21 +26,28 @@ build:
 test-deps:
 	bash web/scripts/test-deps.sh
 
-## test-core: host tests only (no browser, no worker)
+# The browser (chromedp) and worker (workerd) tests are built only with these tags, so a plain
+# `go test ./...` runs the host tests alone; with the tags a missing chromium, workerd or build
+# is a failure, never a skip.
+E2E_TAGS = browser,workerd
+
+## test-core: host tests only (no browser, no worker), and vet of the js/wasm programs
 test-core:
 	$(GO) vet ./...
+	GOOS=js GOARCH=wasm $(GO) vet ./wasm/... ./web/floor
 	$(GO) test ./...
 
 ## test: everything, including the browser and worker tests, which fail if their tools are missing
 test: test-deps build worker
-	$(GO) vet ./...
-	SALTCAST_REQUIRE_BROWSER=1 SALTCAST_REQUIRE_WORKERD=1 $(GO) test ./...
+	$(GO) vet -tags $(E2E_TAGS) ./...
+	GOOS=js GOARCH=wasm $(GO) vet ./wasm/... ./web/floor
+	$(GO) test -tags $(E2E_TAGS) ./...
 	bash web/scripts/fuzz-short.sh
 
 ## bench: performance figures (core benchmarks, bundle size, load times, worker latency)
 bench: build worker
 	$(GO) test -run '^$$' -bench . -benchmem ./core/...
-	SALTCAST_BENCH=1 $(GO) test -run 'TestFigures' -v ./web/... ./wasm/...
+	$(GO) test -tags $(E2E_TAGS),bench -run 'TestFigures' -v ./web/... ./wasm/...
 
 ## worker: the Cloudflare Workers build in build/worker (wasm/worker/build.sh; sizes printed)
 worker:

@@ -1,3 +1,5 @@
+//go:build browser
+
 package web_test
 
 import "testing"

@@ -1,8 +1,11 @@
+//go:build browser
+
 package web_test
 
 // Browser tests: headless Debian chromium, driven by chromedp, opens dist/saltcast.html over
-// file:// exactly as a user would. They skip when chromium or the built page is missing,
-// unless SALTCAST_REQUIRE_BROWSER=1 (set by `make test`), when that is a failure.
+// file:// exactly as a user would. They are built only with the browser tag (`make test` sets
+// it), so a plain `go test ./...` runs the host tests alone; with the tag, a missing chromium
+// or page is a failure, never a skip.
 
 import (
 	"context"
@@ -42,13 +45,11 @@ func TestMain(m *testing.M) {
 	os.Exit(code)
 }
 
-// need skips (or, under SALTCAST_REQUIRE_BROWSER=1, fails) when a browser test cannot run.
+// need fails a browser test that cannot run: the browser tag asks for these tests, so a
+// missing tool or page is a failure.
 func need(t testing.TB, why string) {
 	t.Helper()
-	if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-		t.Fatal(why + " (SALTCAST_REQUIRE_BROWSER=1: run `make build` and `bash web/scripts/deps-chromium.sh`)")
-	}
-	t.Skip(why + "; run `make test` to build and test for real")
+	t.Fatal(why + " (run `make build` and `bash web/scripts/deps-chromium.sh`, or `make test`)")
 }
 
 func chromiumPath() string {
@@ -60,7 +61,7 @@ func chromiumPath() string {
 	return ""
 }
 
-// appURL returns the file:// URL of the built page, or skips/fails when it is missing.
+// appURL returns the file:// URL of the built page, or fails when it is missing.
 func appURL(t testing.TB) string {
 	t.Helper()
 	path, err := filepath.Abs(filepath.Join("..", "dist", "saltcast.html"))

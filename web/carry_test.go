@@ -1,3 +1,5 @@
+//go:build browser
+
 package web_test
 
 import (
@@ -18,7 +20,7 @@ import (
 	"saltcast/core/recipe"
 )
 
-// Recipes that travel inside a copy of the page (issue 7), in a real browser over file://.
+// Recipes that travel inside a copy of the page, in a real browser over file://.
 
 // carriedName is the second recipe's name: markup that must stay text all the way round.
 const carriedName = `<img src=x onerror=alert(1)> & </script><b>blue</b>`
@@ -347,48 +349,4 @@ func names(rs []recipe.Recipe) []string {
 		out = append(out, r.Name)
 	}
 	return out
-}
-
-// TestCarryScreenshots writes PNGs of the screens of a received copy for a person to look
-// at: SALTCAST_SHOTS=/tmp/shots go test -run TestCarryScreenshots ./web. It checks nothing
-// beyond the page starting.
-func TestCarryScreenshots(t *testing.T) {
-	dir := os.Getenv("SALTCAST_SHOTS")
-	if dir == "" {
-		t.Skip("set SALTCAST_SHOTS to a directory to write screenshots")
-	}
-	page, err := os.ReadFile(filepath.Join("..", "dist", "saltcast.html"))
-	if err != nil {
-		need(t, "dist/saltcast.html is not built")
-	}
-	ctx := tab(t)
-	open(t, ctx, appURL(t))
-	resetStorage(t, ctx, appURL(t))
-	rs := saveRecipes(t, ctx)
-	copyPage, err := carry.WithCarried(page, carry.Carried{AppVersion: "v-shot", SavedAt: "2026-12-01T09:30:00Z",
-		SentBy: "Ana (bench 3)", Recipes: rs})
-	if err != nil {
-		t.Fatal(err)
-	}
-	path := filepath.Join(t.TempDir(), "copy.html")
-	os.WriteFile(path, copyPage, 0o644)
-	os.MkdirAll(dir, 0o755)
-	for _, size := range [][2]int64{{768, 1024}, {1280, 800}} {
-		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
-			t.Fatal(err)
-		}
-		open(t, ctx, fileURL(t, path))
-		suffix := "-" + strconv.FormatInt(size[0], 10) + "x" + strconv.FormatInt(size[1], 10) + ".png"
-		for _, shot := range []struct{ name, click string }{{"carry-note", ""}, {"carry-box", "#tab-box"}} {
-			if shot.click != "" {
-				click(t, ctx, shot.click)
-				click(t, ctx, "#carry-all")
-			}
-			png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100))
-			if err != nil {
-				t.Fatal(err)
-			}
-			os.WriteFile(filepath.Join(dir, shot.name+suffix), png, 0o644)
-		}
-	}
 }

@@ -12,6 +12,7 @@ import (
 	"testing"
 
 	"saltcast/web"
+	"saltcast/web/policy"
 	"saltcast/web/text91"
 )
 
@@ -55,7 +56,7 @@ func TestPageIsSelfContained(t *testing.T) {
 		t.Fatalf("found %d of the page's two scripts", len(scripts))
 	}
 	for _, m := range scripts {
-		if !strings.Contains(csp, web.ScriptHash(m[2])) {
+		if !strings.Contains(csp, policy.ScriptHash(m[2])) {
 			t.Errorf("CSP lacks the hash of script %s", m[1])
 		}
 	}
@@ -115,10 +116,10 @@ func execOutput(name string, args ...string) (string, error) {
 // (from memory; openssl dgst -sha256 agrees). The HTML parser turns CR LF into LF before the
 // browser hashes (WHATWG HTML, "preprocessing the input stream").
 func TestScriptHashSpecExample(t *testing.T) {
-	if got, want := web.ScriptHash("alert('Hello, world.');"), "'sha256-qznLcsROx4GACP2dm0UCKCzCG+HiZ1guq6ZZDob/Tng='"; got != want {
+	if got, want := policy.ScriptHash("alert('Hello, world.');"), "'sha256-qznLcsROx4GACP2dm0UCKCzCG+HiZ1guq6ZZDob/Tng='"; got != want {
 		t.Errorf("ScriptHash = %s, want %s", got, want)
 	}
-	if web.ScriptHash("a\r\nb") != web.ScriptHash("a\nb") {
+	if policy.ScriptHash("a\r\nb") != policy.ScriptHash("a\nb") {
 		t.Error("CR LF is hashed differently from LF; the browser normalises it first")
 	}
 }

@@ -1,3 +1,5 @@
+//go:build browser
+
 package web_test
 
 import (
@@ -24,7 +26,7 @@ func TestPrepScreen(t *testing.T) {
 	setField(t, ctx, "prep", "solute", "CuSO4·5H2O")
 	setField(t, ctx, "prep", "concentration", "0,1")
 	setField(t, ctx, "prep", "concentration_unit", "mol/L")
-	setField(t, ctx, "prep", "amount", "250")
+	setField(t, ctx, "prep", "final_volume_mL", "250")
 	if got := prepNumber(t, ctx, "form_g"); math.Abs(got-6.242) > shownTol*6.242 {
 		t.Errorf("form_g = %v, want 6.242", got)
 	}
@@ -37,14 +39,14 @@ func TestPrepScreen(t *testing.T) {
 		t.Errorf("water_g = %v, core says %v", got, res.WaterG)
 	}
 	// A wrong entry is marked and the last good figures stay.
-	setField(t, ctx, "prep", "amount", "-5")
-	if !mustEval[bool](t, ctx, `document.querySelector('#prep [name="amount"]').getAttribute("aria-invalid")==="true"`) {
+	setField(t, ctx, "prep", "final_volume_mL", "-5")
+	if !mustEval[bool](t, ctx, `document.querySelector('#prep [name="final_volume_mL"]').getAttribute("aria-invalid")==="true"`) {
 		t.Errorf("a negative volume is not marked")
 	}
 	if got := prepNumber(t, ctx, "form_g"); math.Abs(got-6.242) > shownTol*6.242 {
 		t.Errorf("form_g after a wrong entry = %v, want the last good 6.242", got)
 	}
-	setField(t, ctx, "prep", "amount", "250")
+	setField(t, ctx, "prep", "final_volume_mL", "250")
 	// Handing over to the batch screen keeps the solution.
 	click(t, ctx, "#prep-to-batch")
 	if !mustEval[bool](t, ctx, `!document.getElementById("screen-batch").hidden`) {
@@ -62,7 +64,7 @@ func TestPrepLabelPrinted(t *testing.T) {
 	click(t, ctx, "#tab-prep")
 	setField(t, ctx, "prep", "solute", "KCl")
 	setField(t, ctx, "prep", "concentration", "3.5")
-	setField(t, ctx, "prep", "amount", "1000")
+	setField(t, ctx, "prep", "final_volume_mL", "1000")
 	setField(t, ctx, "prep-outcome", "label_by", "A. Tech")
 	setField(t, ctx, "prep-outcome", "label_date", "2026-03-01")
 	setField(t, ctx, "prep-outcome", "label_copies", "6")

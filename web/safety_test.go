@@ -1,3 +1,5 @@
+//go:build browser
+
 package web_test
 
 // Nothing lost, nothing injected, nothing sent: the page under a full localStorage, a file

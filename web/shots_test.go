@@ -1,3 +1,5 @@
+//go:build browser && shots
+
 package web_test
 
 import (
@@ -7,16 +9,27 @@ import (
 	"testing"
 
 	"github.com/chromedp/chromedp"
+
+	"saltcast/web/carry"
 )
 
-// TestScreenshots writes PNGs of every screen at the tablet sizes the app is designed for,
-// for a person to look at: SALTCAST_SHOTS=/tmp/shots go test -run TestScreenshots ./web.
-// It checks nothing beyond the page starting.
-func TestScreenshots(t *testing.T) {
+// Screenshots for a person to look at, built only with the shots tag:
+// SALTCAST_SHOTS=/tmp/shots go test -tags browser,shots -run Screenshots ./web.
+// They check nothing beyond the page starting.
+
+// shotsDir is where the screenshots go ($SALTCAST_SHOTS, required with the shots tag).
+func shotsDir(t *testing.T) string {
+	t.Helper()
 	dir := os.Getenv("SALTCAST_SHOTS")
 	if dir == "" {
-		t.Skip("set SALTCAST_SHOTS to a directory to write screenshots")
+		t.Fatal("set SALTCAST_SHOTS to a directory to write screenshots")
 	}
+	return dir
+}
+
+// TestScreenshots writes PNGs of every screen at the tablet sizes the app is designed for.
+func TestScreenshots(t *testing.T) {
+	dir := shotsDir(t)
 	if err := os.MkdirAll(dir, 0o755); err != nil {
 		t.Fatal(err)
 	}
@@ -50,6 +63,45 @@ func TestScreenshots(t *testing.T) {
 			if png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100)); err == nil {
 				os.WriteFile(filepath.Join(dir, "print-1280.png"), png, 0o644)
 			}
+		}
+	}
+}
+
+// TestCarryScreenshots writes PNGs of the screens of a received copy.
+func TestCarryScreenshots(t *testing.T) {
+	dir := shotsDir(t)
+	page, err := os.ReadFile(filepath.Join("..", "dist", "saltcast.html"))
+	if err != nil {
+		need(t, "dist/saltcast.html is not built")
+	}
+	ctx := tab(t)
+	open(t, ctx, appURL(t))
+	resetStorage(t, ctx, appURL(t))
+	rs := saveRecipes(t, ctx)
+	copyPage, err := carry.WithCarried(page, carry.Carried{AppVersion: "v-shot", SavedAt: "2026-12-01T09:30:00Z",
+		SentBy: "Ana (bench 3)", Recipes: rs})
+	if err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join(t.TempDir(), "copy.html")
+	os.WriteFile(path, copyPage, 0o644)
+	os.MkdirAll(dir, 0o755)
+	for _, size := range [][2]int64{{768, 1024}, {1280, 800}} {
+		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
+			t.Fatal(err)
+		}
+		open(t, ctx, fileURL(t, path))
+		suffix := "-" + strconv.FormatInt(size[0], 10) + "x" + strconv.FormatInt(size[1], 10) + ".png"
+		for _, shot := range []struct{ name, click string }{{"carry-note", ""}, {"carry-box", "#tab-box"}} {
+			if shot.click != "" {
+				click(t, ctx, shot.click)
+				click(t, ctx, "#carry-all")
+			}
+			png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100))
+			if err != nil {
+				t.Fatal(err)
+			}
+			os.WriteFile(filepath.Join(dir, shot.name+suffix), png, 0o644)
 		}
 	}
 }

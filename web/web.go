@@ -1,6 +1,6 @@
 // Package web writes the bench app as one offline HTML file: the Go program compiled to
-// WebAssembly, gzip-compressed and inlined as ASCII text (saltcast/web/text91), the Go toolchain's wasm_exec.js, and the
-// HTML/CSS shell kept beside this file.
+// WebAssembly, gzip-compressed and inlined as ASCII text (saltcast/web/text91), the Go
+// toolchain's wasm_exec.js, and the HTML/CSS shell kept beside this file.
 //
 // The page needs no network: the module is unpacked in the browser with DecompressionStream
 // and compiled from memory, and a Content-Security-Policy in the page forbids every request
@@ -11,9 +11,7 @@ package web
 import (
 	"bytes"
 	"compress/gzip"
-	"crypto/sha256"
 	_ "embed"
-	"encoding/base64"
 	"errors"
 	"os"
 	"os/exec"
@@ -22,6 +20,7 @@ import (
 	"strings"
 
 	"saltcast/web/pagecopy"
+	"saltcast/web/policy"
 	"saltcast/web/text91"
 	"saltcast/web/wasmpack"
 )
@@ -34,37 +33,6 @@ var appCSS string
 
 //go:embed loader.js
 var loaderJS string
-
-// CSP returns the Content-Security-Policy of a page whose inline scripts are scripts (their
-// texts, byte for byte). Everything is inline; nothing may be fetched, framed, submitted or
-// connected to. Scripts run only if their SHA-256 hash is listed (W3C CSP Level 3,
-// hash-source), so a script or event handler that got into the page some other way would
-// not run; 'wasm-unsafe-eval' lets the page compile the inlined module and allows no other
-// evaluation. Data blocks (the packed module, carried recipes) are not scripts to the
-// browser and need no hash.
-func CSP(scripts ...string) string {
-	var b strings.Builder
-	b.WriteString("default-src 'none'; script-src")
-	for _, sc := range scripts {
-		b.WriteString(" ")
-		b.WriteString(ScriptHash(sc))
-	}
-	b.WriteString(cspAfterScripts)
-	return b.String()
-}
-
-const cspAfterScripts = " 'wasm-unsafe-eval'; " +
-	"style-src 'unsafe-inline'; img-src data:; font-src 'none'; connect-src 'none'; " +
-	"media-src 'none'; object-src 'none'; frame-src 'none'; worker-src 'none'; " +
-	"manifest-src 'none'; form-action 'none'; base-uri 'none'"
-
-// ScriptHash is the CSP hash-source of an inline script's text: 'sha256-…'. The HTML parser
-// turns CR LF and lone CR into LF before the browser hashes, so the text is hashed that way.
-func ScriptHash(text string) string {
-	text = strings.ReplaceAll(strings.ReplaceAll(text, "\r\n", "\n"), "\r", "\n")
-	sum := sha256.Sum256([]byte(text))
-	return "'sha256-" + base64.StdEncoding.EncodeToString(sum[:]) + "'"
-}
 
 // cspMetaOpen starts the page's policy element; PageCSP finds the policy by it.
 const cspMetaOpen = `<meta http-equiv="Content-Security-Policy" content="`
@@ -345,7 +313,7 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 		return nil, errors.New("app.css contains </style and cannot be inlined")
 	}
 	r := strings.NewReplacer(
-		"{{CSP}}", CSP(wasmExec, loaderJS),
+		"{{CSP}}", policy.File(wasmExec, loaderJS),
 		"{{VERSION}}", htmlEscape(version),
 		"{{CSS}}", appCSS,
 		"{{WASM_EXEC}}", wasmExec,

@@ -47,8 +47,9 @@ func near(got, want, tol float64) bool { return math.Abs(got-want) <= tol }
 // Worked crash-out examples, computed by hand from the handbook values in the comments.
 // Solubilities: CRC Handbook of Chemistry and Physics, 98th ed. (2017), "Aqueous
 // Solubility of Inorganic Compounds at Various Temperatures" (mass %, converted to g per
-// 100 g water: r = 100·w/(100 − w)), as listed in the project's reference notes §1a.
-// Molar masses from IUPAC standard atomic weights (reference notes §2).
+// 100 g water: r = 100·w/(100 − w), the table's own definition; open mirror: github
+// chicolucio/solutions, data/aqueous_solubility_inorganic_temperatures.csv).
+// Molar masses from the IUPAC/CIAAW standard atomic weights, abridged values (2021).
 func TestCrashOutByHand(t *testing.T) {
 	t.Run("KNO3 60→20 °C", func(t *testing.T) {
 		// KNO3 saturated at 60 °C holds 109.2 g per 100 g water; at 20 °C 31.93 (CRC 98th).
@@ -128,8 +129,8 @@ func TestCrashOutByHand(t *testing.T) {
 		}
 	})
 	t.Run("Ca(OH)2 heated 20→80 °C (retrograde)", func(t *testing.T) {
-		// Portlandite: 0.173 g per 100 g water at 20 °C, 0.086 at 80 °C (reference notes §1b,
-		// Wikipedia solubility table from CRC/Perry's). Saturated at 20 °C and heated to
+		// Portlandite: 0.173 g per 100 g water at 20 °C, 0.086 at 80 °C (Wikipedia "Solubility
+		// table", from CRC/Perry's; open mirror: github HFerZHY/WikiSolubility-Project, WSdata.py). Saturated at 20 °C and heated to
 		// 80 °C: x = 0.173 − 0.086 = 0.087 g per 100 g water.
 		c, _ := lookup(t, "Ca(OH)2")
 		r := plan(t, Batch{Compound: c, WaterG: 100, DissolveTempC: 20, HasTarget: true, TargetC: 80})
@@ -221,8 +222,9 @@ func TestApparentEnthalpy(t *testing.T) {
 // A sodium acetate hand warmer: 100 g of the trihydrate with 10 g of extra water (a common
 // way to keep the anhydrous salt from forming; the composition is ours), melted at 80 °C,
 // left to cool to 20 °C without crystallizing, then triggered. Published behaviour: the
-// pack peaks near 54 °C and cannot pass the 58 °C incongruent melting point (reference
-// notes §3: ≈54 °C (130 °F), ±4 °C, from consumer descriptions; 58–58.4 °C).
+// pack peaks near 54 °C (130 °F), ±4 °C (consumer product descriptions; open mirror:
+// waterenergynews.com) and cannot pass the 58 °C incongruent melting point (58–58.4 °C,
+// Wikipedia "Sodium acetate"; open mirror).
 //
 // Enthalpy used: the trihydrate's heat of fusion, 264–289 kJ/kg (Lane 1983, from memory),
 // the larger end; heat capacity: the mix of trihydrate melt and free water, no vessel.
@@ -306,7 +308,8 @@ func TestRefusals(t *testing.T) {
 		{"evaporating all the water", Batch{Compound: kno3, WaterG: 100, DissolveTempC: 60, HasTarget: true, TargetC: 20, EvaporatedWaterG: 100}, "evaporated_water_g"},
 		{"dissolve temperature off the curve", Batch{Compound: kno3, WaterG: 100, DissolveTempC: 130}, "dissolve_temp_C"},
 		{"target off the curve", Batch{Compound: kno3, WaterG: 100, DissolveTempC: 60, HasTarget: true, TargetC: -20}, "cool_to_C"},
-		// The trihydrate holds 151.8 g acetate per 100 g of its own water (reference §3);
+		// The trihydrate holds 151.8 g acetate per 100 g of its own water (derived: 82.03 g/mol
+		// over 3 × 18.015 g/mol, IUPAC atomic weights);
 		// saturation at 100 °C (169.5, CRC 98th) cannot be reached by charging it.
 		{"hydrate richer target than itself", Batch{Compound: ac, Form: tri, WaterG: 100, DissolveTempC: 100}, "saturation_pct"},
 		// 97 % of saturation at 95 °C (CRC 98th: ≈164 g/100 g) is richer than the trihydrate

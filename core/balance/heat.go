@@ -94,7 +94,16 @@ func (pl *planner) crystallizationHeat() {
 		pl.warn.add("no estimate of the heat of crystallization of " + phase.Formula + ": it is not included in the cooling duty")
 	}
 	res.SensibleHeatKJ = res.HeatCapacityKJPerK * (b.DissolveTempC - b.TargetC)
-	res.CoolingDutyKJ = res.SensibleHeatKJ + res.CrystallizationHeatKJ
+	// The ice that freezes at the target gives up its heat of fusion, which the cooling must
+	// also take away (the sensible heat above treats it as liquid down to the target).
+	if res.HasIce && res.IceG > 0 {
+		res.IceHeatKJ = iceHeat(res.IceG)
+		pl.srcs.add(iceHeatSource)
+		pl.warn.add("the cooling duty includes " + unit.FormatCompact(res.IceHeatKJ, 3) + " kJ released by " +
+			unit.FormatCompact(res.IceG, 4) + " g of ice freezing (" + unit.FormatCompact(iceFusionKJPerKg, 5) +
+			" kJ/kg, the value at 0 °C, on the safe side below it)")
+	}
+	res.CoolingDutyKJ = res.SensibleHeatKJ + res.CrystallizationHeatKJ + res.IceHeatKJ
 	if pl.heating {
 		pl.warn.add("the batch is heated to the target: a negative cooling duty is heat to supply")
 	}

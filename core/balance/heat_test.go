@@ -3,6 +3,7 @@ package balance
 import (
 	"math"
 	"math/rand/v2"
+	"strings"
 	"testing"
 
 	"saltcast/core/compound"
@@ -178,5 +179,115 @@ func TestAdiabaticBalanceProperty(t *testing.T) {
 	}
 	if n < 1000 {
 		t.Fatalf("only %d of 4000 random batches were seeded and worked out", n)
+	}
+}
+
+// iceFusionCheckKJPerKg is the heat of fusion of ice at 0 °C the cooling duty must carry for
+// every gram of ice: 333.55 kJ/kg (Feistel & Wagner 2006, J. Phys. Chem. Ref. Data 35:1021,
+// IAPWS ice Ih, from memory); tables quote 333.4–333.6, so a value outside that band fails.
+const iceFusionCheckKJPerKg = 333.55
+
+// dutyTol is the relative closure of the cooling balance: heat given up by the batch
+// (sensible, crystals, ice) against the cooling duty reported.
+const dutyTol = 1e-6
+
+// Property: over random batches cooled to a target, warm and cold (salt and ice, and below
+// the eutectic solid), the heat the batch gives up equals the cooling duty. The parts are
+// rebuilt here from the masses: the sensible heat from the batch heat capacity, the heat of
+// the crystals from their mass and the design enthalpy of their phase, and the heat of the
+// ice from the water that is neither liquor, crystal water nor evaporated, at the heat of
+// fusion above.
+func TestCoolingDutyProperty(t *testing.T) {
+	all := compound.All()
+	var cold []*compound.Compound
+	for _, c := range all {
+		if c.Freezing != nil {
+			cold = append(cold, c)
+		}
+	}
+	rng := rand.New(rand.NewPCG(7, 8))
+	planned, withIce, frozen, withCrystals := 0, 0, 0, 0
+	for i := range 6000 {
+		var c *compound.Compound
+		b := Batch{PurityPct: 80 + 20*rng.Float64(), WaterG: math.Pow(10, 3*rng.Float64()), SaturationPct: 5 + 95*rng.Float64(), HasTarget: true}
+		if i%2 == 0 {
+			c = cold[rng.IntN(len(cold))]
+			b.DissolveTempC = 40 * rng.Float64()
+			b.TargetC = (c.Freezing.LowestC() - 3) * rng.Float64()
+		} else {
+			c = all[rng.IntN(len(all))]
+			lo, hi := c.Range()
+			b.DissolveTempC = lo + (hi-lo)*rng.Float64()
+			b.TargetC = lo + (b.DissolveTempC-lo)*rng.Float64()
+		}
+		b.Compound, b.Form = c, c.Forms[rng.IntN(len(c.Forms))]
+		if rng.IntN(3) == 0 {
+			b.EvaporatedWaterG = b.WaterG * 0.3 * rng.Float64()
+		}
+		if rng.IntN(2) == 0 {
+			b.VesselJPerK = 2000 * rng.Float64()
+		}
+		if rng.IntN(5) == 0 {
+			b.LiquorCpKJPerKgK = 2.5 + 1.7*rng.Float64()
+		}
+		r, err := Plan(b)
+		if err != nil {
+			continue
+		}
+		planned++
+		var crystalKJ float64
+		if r.CrystalsG > 0 {
+			withCrystals++
+			phase, err := c.Form(r.CrystalPhase)
+			if err != nil {
+				t.Fatalf("%s: crystal phase %q not in the library: %v", c.ID, r.CrystalPhase, err)
+			}
+			crystalKJ = r.CrystalsG / phase.MolarMassGPerMol * r.CrystalEnthalpyKJPerMol
+		}
+		iceG := r.TotalWaterG - r.EvaporatedWaterG - r.LiquorWaterG - r.CrystalsG*(1-r.CrystalAnhydrousFrac)
+		if math.Abs(iceG) <= 1e-9*r.TotalWaterG {
+			iceG = 0
+		}
+		switch {
+		case r.Frozen:
+			frozen++
+		case iceG > 0:
+			withIce++
+		}
+		released := r.HeatCapacityKJPerK*(b.DissolveTempC-b.TargetC) + crystalKJ + iceG/1000*iceFusionCheckKJPerKg
+		scale := math.Max(math.Abs(released), math.Abs(r.HeatCapacityKJPerK*(b.DissolveTempC-b.TargetC))+math.Abs(crystalKJ))
+		if math.Abs(released-r.CoolingDutyKJ) > dutyTol*scale {
+			t.Fatalf("%s %.4g g water, %.3f → %.3f °C: gives up %.9g kJ (crystals %.6g, ice %.6g g), cooling duty %.9g kJ",
+				c.ID, b.WaterG, b.DissolveTempC, b.TargetC, released, crystalKJ, iceG, r.CoolingDutyKJ)
+		}
+	}
+	if planned < 3000 || withIce < 300 || frozen < 300 || withCrystals < 1000 {
+		t.Errorf("planned %d, with ice %d, frozen %d, with crystals %d: the generator misses cases", planned, withIce, frozen, withCrystals)
+	}
+}
+
+// A compound flagged toxic carries the strong caution of its own kind, first of all, and
+// still points to the SDS; the flag follows the SDS hazard statements (K2Cr2O7: carcinogen,
+// mutagen, reproductive toxicant, GHS H340, H350, H360FD; KNO3 carries none of them; both
+// from the suppliers' SDS, from memory).
+func TestToxicCaution(t *testing.T) {
+	for _, tt := range []struct {
+		id    string
+		toxic bool
+	}{
+		{"K2Cr2O7", true},
+		{"KNO3", false},
+	} {
+		c, _ := lookup(t, tt.id)
+		r := plan(t, Batch{Compound: c, WaterG: 100, DissolveTempC: 40, SaturationPct: 90, HasTarget: true, TargetC: 10})
+		if got := r.HasCaution(CautionToxic); got != tt.toxic {
+			t.Errorf("%s: toxic caution %v, want %v (kinds %q)", tt.id, got, tt.toxic, r.CautionKinds)
+		}
+		if tt.toxic && (r.CautionKinds[0] != CautionToxic || !strings.Contains(r.Cautions[0], "SDS")) {
+			t.Errorf("%s: first caution %q (%s), want the toxic one, pointing to the SDS", tt.id, r.Cautions[0], r.CautionKinds[0])
+		}
+		if !r.PointsToSDS() || len(r.Cautions) != len(r.CautionKinds) {
+			t.Errorf("%s: cautions %q kinds %q", tt.id, r.Cautions, r.CautionKinds)
+		}
 	}
 }

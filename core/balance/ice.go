@@ -27,9 +27,19 @@ import (
 // Which curve the liquor meets first on cooling follows from the same inequalities, so the
 // state at T does not depend on the path (equilibrium, as everywhere in the planner).
 
-// iceFusionKJPerKg is the enthalpy of fusion of ice at 0 °C and 101.325 kPa: 333.55 kJ/kg
-// (Feistel & Wagner 2006, J. Phys. Chem. Ref. Data 35:1021, IAPWS ice Ih; from memory).
+// iceFusionKJPerKg is the enthalpy of fusion of ice Ih at 0 °C and 101.325 kPa: 333.55 kJ/kg
+// (Feistel & Wagner 2006, J. Phys. Chem. Ref. Data 35:1021, the IAPWS equation of state of
+// ice Ih; the calorimetry of Osborne 1939, J. Res. NBS 23:643, gives 333.5; tables quote
+// 333.4–333.6; all from memory). The planner takes it at every temperature below 0 °C: ice
+// that freezes at T releases less, by about (c_p,water − c_p,ice)·(0 °C − T) ≈ 2.1 kJ/kg per K
+// (c_p of water 4.22 and of ice 2.10 kJ/(kg·K) at 0 °C, from memory), about 6 % less at
+// −10 °C, so the cooling duty errs on the safe side.
 const iceFusionKJPerKg = 333.55
+
+// iceHeatSource is cited with a cooling duty that includes the heat of the ice.
+const iceHeatSource = "heat of fusion of ice 333.55 kJ/kg at 0 °C (Feistel & Wagner 2006, J. Phys. Chem. Ref. Data 35:1021, " +
+	"IAPWS ice Ih; tables quote 333.4–333.6; from memory), used at every temperature below 0 °C: ice freezing at −10 °C " +
+	"releases about 6 % less (c_p of water less c_p of ice ≈ 2.1 kJ/(kg·K), from memory), so the duty errs on the safe side"
 
 // coldTol is the relative margin within which a liquor counts as exactly on a curve
 // (last-bit differences of the interpolations, far below anything a balance weighs).
@@ -108,7 +118,6 @@ func coldCrash(res *Result, c *compound.Compound, k Crash, soluteG, waterG float
 	warn.add(fmtC(T) + " is below the freezing point of the liquor: " + unit.FormatCompact(res.IceG, 4) +
 		" g of ice separate and the liquor concentrates to " + unit.FormatCompact(cIce, 4) + " g per 100 g water" +
 		eutecticNote(fz))
-	iceHeatWarning(res.IceG, warn)
 	return k, nil
 }
 
@@ -131,7 +140,6 @@ func solid(res *Result, c *compound.Compound, k Crash, soluteG, waterG float64, 
 	}
 	warn.add(fmtC(k.TempC) + " is " + where + ": the batch freezes solid, " + unit.FormatCompact(x, 4) + " g of " +
 		k.Phase.Formula + " and " + unit.FormatCompact(ice, 4) + " g of ice, with no liquor to filter off")
-	iceHeatWarning(ice, warn)
 	return k, nil
 }
 
@@ -142,14 +150,8 @@ func eutecticNote(fz *compound.Freezing) string {
 	return "; below the eutectic, " + fmtC(fz.EutecticC) + ", " + fz.EutecticForm.Formula + " and ice separate together"
 }
 
-func iceHeatWarning(iceG float64, warn *notes) {
-	if iceG <= 0 {
-		return
-	}
-	warn.add("freezing " + unit.FormatCompact(iceG, 4) + " g of ice releases about " +
-		unit.FormatCompact(iceG/1000*iceFusionKJPerKg, 3) + " kJ (333.55 kJ/kg at 0 °C, Feistel & Wagner 2006, " +
-		"J. Phys. Chem. Ref. Data 35:1021, from memory), which the cooling duty does not include")
-}
+// iceHeat is the heat released by iceG of ice freezing, in kJ (iceFusionKJPerKg).
+func iceHeat(iceG float64) float64 { return iceG / 1000 * iceFusionKJPerKg }
 
 // clearOfIce refuses a storage temperature at which even the richest stock that stays free of
 // crystals (g100) would freeze: a stock with ice in it is not clear. Below the eutectic no

@@ -438,9 +438,13 @@ func (pl *planner) finishPath() {
 	}
 }
 
-// cautionNotes adds the compound's note, the general cautions, and the SDS note last.
+// cautionNotes adds the strong caution of a toxic compound first, then the compound's note,
+// the general cautions, and the SDS note last.
 func (pl *planner) cautionNotes() {
 	b, c, res := pl.b, pl.c, pl.res
+	if c.Toxic {
+		pl.cautions.add(CautionToxic, ToxicCaution(c))
+	}
 	pl.cautions.add(CautionHazard, c.Hazard)
 	hottest := b.DissolveTempC
 	if res.HasAdiabatic {
@@ -472,6 +476,15 @@ func (pl *planner) cautionNotes() {
 			"(paper, wood, cloth, sugar, solvents); residues dried onto organics burn fiercely.")
 	}
 	pl.cautions.add(CautionSDS, safetyNote)
+}
+
+// ToxicCaution is the strong caution carried by every plan (and preparation) of a compound
+// flagged toxic (acutely toxic, carcinogen, mutagen or reproductive toxicant on its SDS).
+func ToxicCaution(c *compound.Compound) string {
+	return "TOXIC: " + c.Name + " (" + c.ID + ") is acutely toxic, a carcinogen, a mutagen or a reproductive toxicant " +
+		"(see its SDS for which). Work with it only where you are trained and allowed to: gloves, eye protection and a " +
+		"fume hood for any dust or spray, nothing eaten or drunk nearby. Crystals, mother liquor, rinses and spills are " +
+		"hazardous waste under your local rules; never pour them down the drain. Read the SDS before you weigh it."
 }
 
 // cautionList collects cautions with their kinds, without repeats.
@@ -604,7 +617,7 @@ func (r *Result) checkFinite() error {
 		r.CoolingDutyKJ, r.CoolingPowerW, r.CoolingTimeMin, r.SeedAtC, r.AdiabaticEndC, r.AdiabaticCrystalsG,
 		r.AdiabaticRiseK, r.AdiabaticG100, r.CrystalEnthalpyLowKJPerMol, r.CrystallizationHeatLowKJ, r.AdiabaticHeatKJ,
 		r.AdiabaticEnthalpyKJPerMol, r.AdiabaticHeatCapacityKJPerK, r.AdiabaticCrystalsLowG, r.AdiabaticEndLowC,
-		r.FreezingPointC, r.IceG, r.EutecticC, r.EutecticG100} {
+		r.FreezingPointC, r.IceG, r.IceHeatKJ, r.EutecticC, r.EutecticG100} {
 		chk(v)
 	}
 	for _, p := range r.PhaseChanges {

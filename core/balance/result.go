@@ -98,7 +98,8 @@ type Result struct {
 	CrystalEnthalpyLowKJPerMol float64   // lowest best estimate; equals the design value when they agree
 	CrystallizationHeatLowKJ   float64   // the crystallization heat with the lowest best estimate
 	SensibleHeatKJ             float64
-	CoolingDutyKJ              float64
+	IceHeatKJ                  float64 // released by the ice that freezes at the target (HasIce)
+	CoolingDutyKJ              float64 // SensibleHeatKJ + CrystallizationHeatKJ + IceHeatKJ
 	HasCoolingPower            bool
 	CoolingPowerW              float64 // mean over the cooling time
 	CoolingTimeMin             float64
@@ -135,6 +136,7 @@ type CautionKind string
 
 // The kinds of caution.
 const (
+	CautionToxic     CautionKind = "toxic"      // the compound is flagged toxic: the strong caution, first of all
 	CautionHazard    CautionKind = "hazard"     // the compound's own hazard note (points to the SDS)
 	CautionHot       CautionKind = "hot-liquid" // the batch gets hot enough to scald
 	CautionExotherm  CautionKind = "exotherm"   // an insulated batch warms strongly

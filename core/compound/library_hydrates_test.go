@@ -548,8 +548,8 @@ func TestHydrateHazardsAndCautions(t *testing.T) {
 	// GHS classifications of the salts (common practice): Ni and Co salts are carcinogens
 	// and sensitisers; borax and boric acid are reproductive toxicants.
 	for _, tt := range []struct{ id, words string }{
-		{"NiSO4", "Carcinogen|sensitiser|hazardous waste"},
-		{"CoCl2", "Carcinogen|sensitiser|hazardous waste"},
+		{"NiSO4", "carcinogen|sensitiser|hazardous waste"},
+		{"CoCl2", "carcinogen|sensitiser|hazardous waste"},
 		{"Na2B4O7", "fertility|unborn"},
 		{"H3BO3", "fertility|unborn"},
 		{"ZnSO4", "aquatic"},

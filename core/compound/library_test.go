@@ -200,13 +200,14 @@ func TestSolubilityAgainstSecondSource(t *testing.T) {
 
 // TestSolubilityCRCMassPercent reads the CRC Handbook 98th ed. mass % (open mirror: github
 // chicolucio/solutions) back through solubility.MassPercent, and checks the conversion to
-// g/100 g water against the values the project's reference derived from the same CSV.
+// g/100 g water against values converted by hand from the same CSV (r = 100·w/(100 − w),
+// derived).
 func TestSolubilityCRCMassPercent(t *testing.T) {
 	tests := []struct {
 		id         string
 		tempC      float64
 		massPct    float64 // CRC 98th ed.
-		gPer100Ref float64 // reference §1a, derived from the CRC CSV; 0 = not listed
+		gPer100Ref float64 // derived by hand from the CRC CSV; 0 = not listed
 	}{
 		{"NaCl", 0, 26.28, 35.65},
 		{"NaCl", 25, 26.45, 35.96},
@@ -227,7 +228,7 @@ func TestSolubilityCRCMassPercent(t *testing.T) {
 	}
 	const (
 		pctTol = 0.005 // mass % points: the rows are stored as printed
-		gTol   = 0.002 // relative: the reference rounds to 4 significant figures
+		gTol   = 0.002 // relative: the hand conversions are rounded to 4 significant figures
 	)
 	for _, tt := range tests {
 		c, _ := mustLookup(t, tt.id)
@@ -239,7 +240,7 @@ func TestSolubilityCRCMassPercent(t *testing.T) {
 			t.Errorf("%s at %v °C: %.3f mass %%, want %v (CRC 98th ed.)", tt.id, tt.tempC, w, tt.massPct)
 		}
 		if tt.gPer100Ref != 0 && math.Abs(g-tt.gPer100Ref) > gTol*tt.gPer100Ref {
-			t.Errorf("%s at %v °C: %.4g g/100 g, want %v (reference §1a, derived from CRC)", tt.id, tt.tempC, g, tt.gPer100Ref)
+			t.Errorf("%s at %v °C: %.4g g/100 g, want %v (derived from CRC 98th ed.)", tt.id, tt.tempC, g, tt.gPer100Ref)
 		}
 	}
 }
@@ -287,19 +288,23 @@ func TestStablePhase(t *testing.T) {
 		tempC float64
 		want  string
 	}{
-		// Na2SO4·10H2O below 32.38 °C, thenardite above (reference §2; 32.38 °C from memory).
+		// Na2SO4·10H2O below 32.38 °C, thenardite above (CRC 98th ed. marks the change between
+		// 30 and 40 °C; 32.38 °C from memory).
 		{"Na2SO4", 20, "Na2SO4·10H2O"},
 		{"Na2SO4", 32, "Na2SO4·10H2O"},
 		{"Na2SO4", 33, "Na2SO4"},
 		{"Na2SO4", 40, "Na2SO4"},
-		// Sodium acetate trihydrate below ≈58 °C (reference §2, CRC jump between 50 and 60 °C).
+		// Sodium acetate trihydrate below ≈58 °C (CRC 98th ed.: 45.1 → 58.3 mass % between 50
+		// and 60 °C).
 		{"CH3COONa", 40, "CH3COONa·3H2O"},
 		{"CH3COONa", 70, "CH3COONa"},
-		// MgSO4: 7H2O < 48 °C, 6H2O 48–68 °C, 1H2O above (sshade.eu, reference §2).
+		// MgSO4: 7H2O < 48 °C, 6H2O 48–68 °C, 1H2O above (open mirror: sshade.eu solid-phase pages).
 		{"MgSO4", 20, "MgSO4·7H2O"},
 		{"MgSO4", 55, "MgSO4·6H2O"},
 		{"MgSO4", 80, "MgSO4·H2O"},
-		// CuSO4·5H2O and alum dodecahydrate across their range (reference §2).
+		// CuSO4·5H2O and alum dodecahydrate across their range (CuSO4·5H2O dehydrates from
+		// 96.5 °C, "Thermal transitions in copper sulphate pentahydrate", abstract, open mirror:
+		// scilit; alum melts at 92–92.5 °C, Merck Index, open mirror: data.cas-msds.com).
 		{"CuSO4", 20, "CuSO4·5H2O"},
 		{"CuSO4", 80, "CuSO4·5H2O"},
 		{"KAl(SO4)2", 50, "KAl(SO4)2·12H2O"},
@@ -347,8 +352,9 @@ func TestRetrograde(t *testing.T) {
 		tempC float64
 		want  bool
 	}{
-		// Reference §1b notes: Ca(OH)2 and Li2CO3 retrograde throughout; Na2SO4 above 32.4 °C;
-		// MgSO4 above about 70 °C.
+		// Retrograde: Ca(OH)2 and Li2CO3 throughout and Na2SO4 above 32.4 °C (CRC 98th ed. and
+		// Wikipedia "Solubility table" rows); MgSO4 above about 70 °C (open mirror:
+		// phasediagram.dk MgSO4 page).
 		{"Ca(OH)2", 20, true},
 		{"Ca(OH)2", 70, true},
 		{"Li2CO3", 20, true},

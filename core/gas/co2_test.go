@@ -5,7 +5,8 @@ import (
 	"testing"
 )
 
-// weissTol: the reference notes give ±0.2 % against the equation.
+// weissTol covers rounding of the check values, which are the Weiss (1974) equation evaluated
+// at 4 significant figures, and the last digit of the coefficients (±0.2 %).
 const weissTol = 2e-3
 
 func TestWeissK0(t *testing.T) {
@@ -15,12 +16,12 @@ func TestWeissK0(t *testing.T) {
 		source         string
 	}{
 		{25, 35, 0.02839, true, "Weiss (1974) table of K0, 2.839e-2 mol kg⁻¹ atm⁻¹ (from memory)"},
-		{0, 35, 0.06287, true, "Weiss (1974) equation, reference notes §5b [derived]"},
-		{0, 0, 0.07758, false, "Weiss (1974) equation, reference notes §5b [derived]"},
-		{10, 0, 0.05366, false, "Weiss (1974) equation, reference notes §5b [derived]"},
-		{20, 0, 0.03910, false, "Weiss (1974) equation, reference notes §5b [derived]"},
-		{25, 0, 0.03397, false, "Weiss (1974) equation, reference notes §5b [derived]"},
-		{30, 0, 0.02983, false, "Weiss (1974) equation, reference notes §5b [derived]"},
+		{0, 35, 0.06287, true, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
+		{0, 0, 0.07758, false, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
+		{10, 0, 0.05366, false, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
+		{20, 0, 0.03910, false, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
+		{25, 0, 0.03397, false, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
+		{30, 0, 0.02983, false, "Weiss (1974), Marine Chemistry 2:203, equation with its printed coefficients (derived)"},
 	}
 	for _, tt := range tests {
 		got := WeissK0MolPerLAtm(tt.tempC, tt.s)
@@ -43,7 +44,7 @@ func TestWeissAgainstSander(t *testing.T) {
 
 func TestCO2Saturation(t *testing.T) {
 	// 420 ppm, 25 °C, fresh water, 1 atm: K0·x·(1 − Pwv) = 0.03397 × 420e-6 × 0.96874 mol/L
-	// (Weiss 1974; reference notes §5b) = 13.82 µmol/L = 0.608 mg/L.
+	// (derived: from Weiss 1974, Marine Chemistry 2:203) = 13.82 µmol/L = 0.608 mg/L.
 	d, err := CO2Saturation(Conditions{TempC: 25, PressureKPa: StdKPa}, 420)
 	if err != nil {
 		t.Fatal(err)

@@ -5,8 +5,8 @@ import (
 	"testing"
 )
 
-// sanderTol is the tolerance the reference notes give for the 2-significant-figure Sander
-// constants (±5 %; ±4 % for CO2).
+// sanderTol covers the 2-significant-figure constants of the Sander (2015) compilation and the
+// spread between its reviewed rows (±5 %; ±4 % for CO2) (common practice).
 const sanderTol = 0.05
 
 func TestHenryAt298AgainstSander(t *testing.T) {

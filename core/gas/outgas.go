@@ -47,6 +47,26 @@ type Outgassing struct {
 	Method, Source  string
 	Warnings, Notes []string
 	Cautions        []string
+	CautionKinds    []CautionKind // CautionKinds[i] is the kind of Cautions[i]
+}
+
+// CautionKind sorts cautions so that code tests the kind, never the wording. The values
+// match those of the planner's cautions (package balance).
+type CautionKind string
+
+// CautionHotWater is HotWaterCaution: hot water, pressure in closed vessels, and the pointer
+// to the SDS, local rules and licensed practice.
+const CautionHotWater CautionKind = "hot-liquid"
+
+// PointsToSDS reports whether the cautions send the reader to the SDS, local rules and
+// licensed practice (HotWaterCaution does).
+func (o *Outgassing) PointsToSDS() bool {
+	for _, k := range o.CautionKinds {
+		if k == CautionHotWater {
+			return true
+		}
+	}
+	return false
 }
 
 // Outgas computes the gas released when air-saturated fresh water is heated. Each gas
@@ -131,6 +151,7 @@ func Outgas(in OutgasInput) (Outgassing, error) {
 	}
 	if in.ToC >= hotC {
 		out.Cautions = append(out.Cautions, HotWaterCaution)
+		out.CautionKinds = append(out.CautionKinds, CautionHotWater)
 	}
 	return out, nil
 }

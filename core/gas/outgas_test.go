@@ -168,3 +168,21 @@ func BenchmarkOutgas(b *testing.B) {
 		sinkOut, _ = Outgas(in)
 	}
 }
+
+// Heating to a scalding temperature brings the hot-water caution, by kind, and it points to
+// the SDS; below 50 °C (common practice, see hotC) there is none.
+func TestOutgasCautionKinds(t *testing.T) {
+	for _, tt := range []struct {
+		toC  float64
+		want bool
+	}{{40, false}, {80, true}} {
+		o, err := Outgas(OutgasInput{FromC: 20, ToC: tt.toC, PressureKPa: StdKPa, CO2PPM: DefaultCO2PPM})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if o.PointsToSDS() != tt.want || len(o.CautionKinds) != len(o.Cautions) {
+			t.Errorf("Outgas(20 → %v °C): kinds %q for %d cautions, points to the SDS %v; want %v",
+				tt.toC, o.CautionKinds, len(o.Cautions), o.PointsToSDS(), tt.want)
+		}
+	}
+}

@@ -32,9 +32,10 @@ func mustO2(t *testing.T, c Conditions, method string) Oxygen {
 }
 
 func TestBensonKrauseFreshWater(t *testing.T) {
-	// Fresh water, 101.325 kPa. Values: the Benson & Krause (1984) equation as printed in USGS
-	// memo 2011.03 / Standard Methods 4500-O, evaluated in /work/shared reference notes §4a;
-	// they match the Standard Methods 4500-O solubility table to 0.001 mg/L (from memory).
+	// Fresh water, 101.325 kPa. Values: the Benson & Krause (1984, Limnol. Oceanogr. 29:620)
+	// equation as printed in USGS OWQ Technical Memorandum 2011.03 / Standard Methods 4500-O,
+	// evaluated (derived); they match the Standard Methods 4500-O solubility table to
+	// 0.001 mg/L (from memory).
 	tests := []struct {
 		tempC, want, tol float64
 		source           string
@@ -61,8 +62,9 @@ func TestBensonKrauseFreshWater(t *testing.T) {
 }
 
 func TestBensonKrauseSeawater(t *testing.T) {
-	// S = 35, 1 atm. Values: B&K equation (reference notes §4a), which agree with
-	// Garcia & Gordon (1992) × 1.42905 to ±0.002.
+	// S = 35, 1 atm. Values: the Benson & Krause (1984) equation with its salinity term,
+	// evaluated (derived), which agree with Garcia & Gordon (1992, Limnol. Oceanogr. 37:1307)
+	// mL/L × 1.42905 to ±0.002.
 	tests := []struct{ tempC, want float64 }{
 		{0, 11.446},
 		{10, 9.024},
@@ -80,10 +82,10 @@ func TestBensonKrauseSeawater(t *testing.T) {
 
 func TestBensonKrauseReducedPressure(t *testing.T) {
 	// Fresh water at reduced barometric pressure: Standard Methods 4500-O pressure correction
-	// with the SM water-vapour equation (reference notes §4a table). Simple proportional
-	// scaling C*·P/P0 is 0.014–0.06 mg/L too high at these points (the notes' "0.1–0.2"
-	// overstates it), which is still outside pressureTol: the second check proves the table
-	// can tell the two apart.
+	// with the SM water-vapour equation, evaluated (derived: from Benson & Krause 1984 and
+	// Standard Methods 4500-O). Simple proportional scaling C*·P/P0 is 0.014–0.06 mg/L too
+	// high at these points, which is still outside pressureTol: the second check proves the
+	// table can tell the two apart.
 	tests := []struct{ kPa, tempC, want float64 }{
 		{90, 10, 10.012}, {90, 20, 8.053}, {90, 25, 7.311},
 		{80, 10, 8.885}, {80, 20, 7.135}, {80, 25, 6.469},
@@ -119,11 +121,12 @@ func TestGarciaGordonCheckValues(t *testing.T) {
 	}
 }
 
-// ggDerivedTol: values derived from the published coefficients in the reference notes §4b.
+// ggDerivedTol: values derived from the published coefficients of Garcia & Gordon (1992), table 1.
 const ggDerivedTol = 0.002 // µmol/kg
 
 func TestGarciaGordonDerived(t *testing.T) {
-	// Garcia & Gordon (1992) B&K-data µmol/kg fit evaluated in the reference notes §4b [derived].
+	// Garcia & Gordon (1992, Limnol. Oceanogr. 37:1307) B&K-data µmol/kg fit, evaluated
+	// (derived: from its coefficients, corrected form of eq. 8).
 	tests := []struct{ tempC, salinity, want float64 }{
 		{0, 0, 457.006},
 		{25, 0, 258.996},

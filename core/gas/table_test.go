@@ -18,7 +18,8 @@ func TestOxygenTableMatchesSingleCalls(t *testing.T) {
 	if len(tab.MgPerL) != len(temps) || len(tab.MgPerL[0]) != len(cols) {
 		t.Fatalf("table is %d×%d, want %d×%d", len(tab.MgPerL), len(tab.MgPerL[0]), len(temps), len(cols))
 	}
-	// Row 20 °C, column 80 kPa: 7.135 mg/L (reduced-pressure table, reference notes §4a).
+	// Row 20 °C, column 80 kPa: 7.135 mg/L (derived: Benson & Krause 1984 with the Standard
+	// Methods 4500-O pressure correction).
 	if v := tab.MgPerL[4][1]; math.Abs(v-7.135) > pressureTol {
 		t.Errorf("table[20 °C][80 kPa] = %.4f, want 7.135", v)
 	}
@@ -30,7 +31,8 @@ func TestOxygenTableMatchesSingleCalls(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	// S 35 column: 11.446, 9.024, 7.396, 6.772, 6.237 (reference notes §4a).
+	// S 35 column: 11.446, 9.024, 7.396, 6.772, 6.237 (derived: Benson & Krause 1984 equation
+	// with its salinity term).
 	for i, want := range []float64{11.446, 9.024, 7.396, 6.772, 6.237} {
 		if v := sal.MgPerL[i][1]; math.Abs(v-want) > seaTol {
 			t.Errorf("salinity table row %d S 35 = %.4f, want %.3f", i, v, want)

@@ -56,9 +56,16 @@
 // stable solid meets g: for an ordinary (prograde) solute, the temperature below which the
 // bottle starts to crystallize, found by balance.Onset; for a solution already stronger than
 // the solubility at T, the temperature it must be warmed to before it dissolves. The bottle is
-// labelled "keep above" the saturation temperature plus StorageMarginK. Saturation is at
-// equilibrium: a clean solution may stay supersaturated below it for a while, but no one
-// should rely on that. Freezing of the water is not checked here.
+// labelled "keep above" the higher of the saturation temperature and the freezing point, plus
+// StorageMarginK. Saturation is at equilibrium: a clean solution may stay supersaturated
+// below it for a while, but no one should rely on that.
+//
+// The freezing point is read from the compound's freezing curve (package compound:
+// freezing-point depressions of the CRC Handbook, 102nd ed., "Concentrative Properties of
+// Aqueous Solutions", interpolated linearly in g per 100 g water, never extrapolated). A
+// storage temperature below it is a warning and the bottle is not clear there; without data,
+// or for a solution richer than the data reach, the freezing point is left out with a
+// warning. A compound flagged toxic carries balance.ToxicCaution first, as a plan does.
 //
 // # Units and ranges
 //

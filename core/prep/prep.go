@@ -3,6 +3,7 @@ package prep
 import (
 	"errors"
 	"math"
+	"slices"
 
 	"saltcast/core/balance"
 	"saltcast/core/compound"
@@ -143,8 +144,10 @@ type Result struct {
 
 	HasSaturationTemp bool
 	SaturationTempC   float64 // see the package doc
+	HasFreezingPoint  bool
+	FreezingPointC    float64 // where ice starts to form from the solution as made
 	HasKeepAbove      bool
-	KeepAboveC        float64 // SaturationTempC + StorageMarginK
+	KeepAboveC        float64 // the higher of SaturationTempC and FreezingPointC, + StorageMarginK
 	ClearDownToC      float64 // with !HasSaturationTemp: clear down to this end of the data
 	HasWarmLimit      bool
 	CrystallizesAbove float64 // retrograde solubility: saturates on warming here
@@ -156,8 +159,9 @@ type Result struct {
 	HasDissolveHeat bool
 	DissolveChangeK float64 // temperature change on dissolving the form (water-equivalent model)
 
-	Cautions []string
-	Warnings []string
+	Cautions     []string
+	CautionKinds []balance.CautionKind // CautionKinds[i] is the kind of Cautions[i], as in a plan
+	Warnings     []string
 	Sources  []string
 }
 
@@ -165,15 +169,24 @@ type Result struct {
 type notes struct{ list []string }
 
 func (n *notes) add(s string) {
-	if s == "" {
+	if s == "" || slices.Contains(n.list, s) {
 		return
 	}
-	for _, x := range n.list {
-		if x == s {
-			return
-		}
-	}
 	n.list = append(n.list, s)
+}
+
+// cautionNotes collects cautions with their kinds, without repeats, in order.
+type cautionNotes struct {
+	notes
+	kinds []balance.CautionKind
+}
+
+func (n *cautionNotes) add(k balance.CautionKind, s string) {
+	before := len(n.list)
+	n.notes.add(s)
+	if len(n.list) > before {
+		n.kinds = append(n.kinds, k)
+	}
 }
 
 // Plan works out a preparation. Errors are *unit.FieldError values naming the recipe key.
@@ -187,7 +200,11 @@ func Plan(s Spec) (Result, error) {
 	if err := s.check(); err != nil {
 		return Result{}, err
 	}
-	var warn, srcs, cautions notes
+	var warn, srcs notes
+	var cautions cautionNotes
+	if c.Toxic {
+		cautions.add(balance.CautionToxic, balance.ToxicCaution(c))
+	}
 	M := c.MolarMassGPerMol
 	T := s.TempC
 	display := unit.FormatCompact(s.Concentration, 6) + " " + string(s.Unit)
@@ -292,6 +309,7 @@ func Plan(s Spec) (Result, error) {
 	}
 
 	res.saturation(s, &warn)
+	res.freezing(&warn, &srcs)
 	if s.HasStoreAt {
 		if err := res.storage(s, &warn); err != nil {
 			return Result{}, err
@@ -299,21 +317,21 @@ func Plan(s Spec) (Result, error) {
 	}
 
 	// Cautions: the compound's note, the general ones, the SDS last.
-	cautions.add(c.Hazard)
+	cautions.add(balance.CautionHazard, c.Hazard)
 	if T > hotLiquidC {
-		cautions.add("Hot liquid: the solution is made up at " + unit.FormatCompact(T, 4) + " °C. A spill scalds; use heat-resistant glassware, " +
+		cautions.add(balance.CautionHot, "Hot liquid: the solution is made up at " + unit.FormatCompact(T, 4) + " °C. A spill scalds; use heat-resistant glassware, " +
 			"gloves and eye protection, and note that volumetric glassware is not made for heating.")
 	}
 	if c.Oxidizer {
-		cautions.add(c.ID + " is an oxidizer: keep the solid, its solutions and any dried residue away from organic material " +
+		cautions.add(balance.CautionOxidizer, c.ID+" is an oxidizer: keep the solid, its solutions and any dried residue away from organic material " +
 			"and fuels; do not let spills dry on paper, wood or cloth.")
 	}
-	cautions.add(safetyNote)
+	cautions.add(balance.CautionSDS, safetyNote)
 	if res.HasDissolveHeat {
 		srcs.add(heatSource)
 	}
 
-	res.Cautions, res.Warnings, res.Sources = cautions.list, warn.list, srcs.list
+	res.Cautions, res.CautionKinds, res.Warnings, res.Sources = cautions.list, cautions.kinds, warn.list, srcs.list
 	if !res.finite() {
 		return Result{}, ErrNotFinite
 	}
@@ -359,7 +377,7 @@ func (s Spec) check() error {
 }
 
 // fromForm works out the weighing of the shelf form.
-func (res *Result) fromForm(s Spec, display string, warn, cautions *notes) error {
+func (res *Result) fromForm(s Spec, display string, warn *notes, cautions *cautionNotes) error {
 	form := s.Form
 	if form == nil {
 		form = res.Compound.Anhydrous()
@@ -398,11 +416,11 @@ func (res *Result) fromForm(s Spec, display string, warn, cautions *notes) error
 				" K: let it return to " + unit.FormatCompact(res.TempC, 4) + " °C before filling to the mark")
 		}
 		if math.Abs(d) >= strongThermalK {
-			kind := "endotherm"
+			kind, ck := "endotherm", balance.CautionEndotherm
 			if d > 0 {
-				kind = "exotherm"
+				kind, ck = "exotherm", balance.CautionExotherm
 			}
-			cautions.add("Strong " + kind + ": dissolving " + form.Formula +
+			cautions.add(ck, "Strong "+kind+": dissolving "+form.Formula+
 				" " + word + " the solution by about " + unit.FormatCompact(math.Abs(d), 2) +
 				" K. Add the solid in portions to most of the water, stirring, in a beaker rather than the flask.")
 		}
@@ -489,8 +507,7 @@ func (res *Result) saturation(s Spec, warn *notes) {
 			res.HasKeepAbove, res.KeepAboveC = true, t+StorageMarginK
 		} else {
 			res.ClearDownToC = lo
-			warn.add("stays unsaturated down to " + unit.FormatCompact(lo, 3) + " °C, the cold end of the solubility data; " +
-				"below that, the freezing of the water sets the limit, which this plan does not check")
+			warn.add("stays unsaturated down to " + unit.FormatCompact(lo, 3) + " °C, the cold end of the solubility data")
 		}
 	} else {
 		res.ClearDownToC = T
@@ -508,7 +525,8 @@ func (res *Result) saturation(s Spec, warn *notes) {
 	}
 }
 
-// storage checks the storage temperature.
+// storage checks the storage temperature against crystallization and freezing; either is
+// a warning and makes ClearAtStore false.
 func (res *Result) storage(s Spec, warn *notes) error {
 	c := res.Compound
 	S := s.StoreAtC
@@ -519,20 +537,61 @@ func (res *Result) storage(s Spec, warn *notes) error {
 	}
 	warn.add(sw)
 	low := lowestSolubility(c, math.Min(S, res.TempC), math.Max(S, res.TempC))
-	res.ClearAtStore = res.GPer100gWater <= low*(1+satTol) && !res.Supersaturated
-	if S <= 0 {
+	crystallizes := res.GPer100gWater > low*(1+satTol) || res.Supersaturated
+	freezes := res.HasFreezingPoint && S < res.FreezingPointC
+	res.ClearAtStore = !crystallizes && !freezes
+	fp := unit.FormatCompact(res.FreezingPointC, 3)
+	switch {
+	case freezes:
+		warn.add("stored at " + unit.FormatCompact(S, 3) + " °C it freezes: ice forms below " + fp +
+			" °C, the freezing point of this solution; store it above " + unit.FormatCompact(res.FreezingPointC+StorageMarginK, 3) +
+			" °C. Ice concentrates what is left, which may then crystallize the salt too, and can crack the bottle")
+	case res.HasFreezingPoint && S < res.FreezingPointC+StorageMarginK:
+		warn.add("stored at " + unit.FormatCompact(S, 3) + " °C it is only " + unit.FormatCompact(S-res.FreezingPointC, 2) +
+			" K above its freezing point (" + fp + " °C): a colder spell freezes it")
+	case !res.HasFreezingPoint && S <= 0:
 		warn.add("stored at " + unit.FormatCompact(S, 3) + " °C, at or below the freezing point of water: the solution may freeze " +
-			"(its freezing point is lowered by the solute, which this plan does not work out)")
+			"(its own freezing point is not known here)")
 	}
 	switch {
-	case !res.ClearAtStore:
+	case crystallizes:
 		warn.add("stored at " + unit.FormatCompact(S, 3) + " °C it crystallizes: make it at most " + res.describe(low, res.TempC) +
 			" (saturated at " + unit.FormatCompact(S, 3) + " °C; leave a margin below that), or store it warmer")
-	case res.HasKeepAbove && S < res.KeepAboveC:
+	case res.HasSaturationTemp && S < res.SaturationTempC+StorageMarginK:
 		warn.add("stored at " + unit.FormatCompact(S, 3) + " °C it is only " + unit.FormatCompact(S-res.SaturationTempC, 2) +
 			" K above its saturation temperature: a colder spell or some evaporation crystallizes it")
 	}
 	return nil
+}
+
+// freezing fills the freezing point of the solution as made, from the compound's freezing
+// curve (package compound: linear between published depressions, never extrapolated), and
+// raises the keep-above temperature to it plus StorageMarginK. Without data it warns.
+func (res *Result) freezing(warn, srcs *notes) {
+	c := res.Compound
+	fz := c.Freezing
+	g := res.GPer100gWater
+	if fz == nil {
+		warn.add("no freezing-point data for " + c.ID + " in the library: the solution freezes below 0 °C, " +
+			"but Saltcast cannot say how far below; do not store it below 0 °C")
+		return
+	}
+	t, ok := fz.TempC(g)
+	if !ok {
+		if fz.HasEutectic {
+			warn.add("richer than the eutectic liquor (" + unit.FormatCompact(fz.EutecticG100, 3) + " g per 100 g water): on cooling, " +
+				fz.EutecticForm.Formula + " crystallizes before any ice forms, down to the eutectic at " + unit.FormatCompact(fz.EutecticC, 3) + " °C")
+			return
+		}
+		warn.add("richer than the freezing-point data of " + c.ID + " reach (" + unit.FormatCompact(fz.MaxG100(), 3) +
+			" g per 100 g water): its freezing point is not known, only that it lies below " + unit.FormatCompact(fz.LowestC(), 3) + " °C")
+		return
+	}
+	res.HasFreezingPoint, res.FreezingPointC = true, t
+	srcs.add(fz.Source)
+	if k := t + StorageMarginK; !res.HasKeepAbove || k > res.KeepAboveC {
+		res.HasKeepAbove, res.KeepAboveC = true, k
+	}
 }
 
 // describe gives the concentration of a solution holding g100 g per 100 g water in the
@@ -612,7 +671,7 @@ func (res *Result) finite() bool {
 		res.ImpurityG, res.StockMassFraction, res.StockG, res.StockML, res.WaterG, res.WaterML, res.DensityKgPerM3,
 		res.DensityErrPct, res.SolutionML, res.MolPerL, res.MmolPerL, res.GPerL, res.MgPerL, res.PctWV, res.PctWW,
 		res.MolPerKg, res.GPer100gWater, res.SolubilityG100, res.SaturationPct, res.SaturationTempC, res.KeepAboveC,
-		res.ClearDownToC, res.CrystallizesAbove, res.DissolveChangeK} {
+		res.ClearDownToC, res.CrystallizesAbove, res.DissolveChangeK, res.FreezingPointC} {
 		if math.IsNaN(v) || math.IsInf(v, 0) {
 			return false
 		}

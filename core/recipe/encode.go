@@ -2,16 +2,19 @@ package recipe
 
 import "saltcast/core/wire"
 
-// sig is the number of significant digits of numbers in the result JSON: finer than any
-// balance can weigh, coarse enough that the last digit is not noise.
-const sig = 6
+// Digits is the number of significant digits of every number in an answer (the plan here;
+// web/api's solubility, gas and compound answers use it too): finer than any balance can
+// weigh, coarse enough that the last digit is not noise.
+const Digits = 6
+
+const sig = Digits
 
 // resultSizeHint is about the size of a plan's JSON with its sources and cautions, so the
 // encoder allocates once.
 const resultSizeHint = 6 << 10
 
 // Encode writes the result as JSON with a fixed set of keys in a fixed order (see the
-// README's command-line section). A key that does not apply to this batch is null (for
+// web/cmd/saltcast/README.md). A key that does not apply to this batch is null (for
 // instance crystals_g without cool_to_C), so scripts can rely on every key being present.
 func (res Result) Encode() []byte {
 	var e wire.Encoder
@@ -147,6 +150,7 @@ func (res Result) encode(e *wire.Encoder) {
 	opt("crystal_enthalpy_low_kJ_per_mol", r.CrystalEnthalpyLowKJPerMol, t && r.HeatBasis != "")
 	opt("crystallization_heat_low_kJ", r.CrystallizationHeatLowKJ, t && r.HeatBasis != "")
 	opt("sensible_heat_kJ", r.SensibleHeatKJ, t)
+	opt("ice_heat_kJ", r.IceHeatKJ, t && r.HasIce)
 	opt("cooling_duty_kJ", r.CoolingDutyKJ, t)
 	opt("cooling_time_min", r.CoolingTimeMin, r.HasCoolingPower)
 	opt("cooling_power_W", r.CoolingPowerW, r.HasCoolingPower)

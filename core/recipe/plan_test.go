@@ -24,7 +24,7 @@ func mustPlan(t *testing.T, js string) Result {
 }
 
 // Water by volume: 500 mL at 20 °C weighs 500 × 0.998204 = 499.102 g (pure water 998.204
-// kg/m³ at 20 °C, Kell 1975, J. Chem. Eng. Data 20:97, as in the reference notes §6a);
+// kg/m³ at 20 °C, Kell 1975, J. Chem. Eng. Data 20:97, derived from its equation);
 // at the default temperature (20 °C) the same.
 func TestWaterByVolume(t *testing.T) {
 	for _, js := range []string{
@@ -41,7 +41,8 @@ func TestWaterByVolume(t *testing.T) {
 	}
 }
 
-// A custom compound built from the CRC 98th ed. KNO3 rows (the reference notes §1a) plans
+// A custom compound built from the CRC 98th ed. KNO3 rows ("Aqueous Solubility of Inorganic
+// Compounds at Various Temperatures", converted to g/100 g water) plans
 // the same crash-out as the library's KNO3: 109.2 − 31.93 = 77.27 g from 100 g water,
 // 60 → 20 °C.
 func TestCustomCompound(t *testing.T) {
@@ -93,7 +94,7 @@ func TestPlanRefusals(t *testing.T) {
 	}
 }
 
-// The CLI contract: these keys are always present in a plan (issue 2, part 5).
+// The CLI contract: these keys are always present in a plan (web/cmd/saltcast/README.md).
 var contractKeys = []string{"charge_g", "water_g", "saturation_temp_C", "crystals_g", "crystal_phase", "yield_pct",
 	"liquor_g", "liquor_g_per_100g_water", "dissolution_heat_kJ", "crystallization_heat_kJ", "cooling_duty_kJ",
 	"adiabatic_end_temp_C", "adiabatic_crystals_g", "cautions", "warnings", "sources"}

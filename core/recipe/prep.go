@@ -39,132 +39,100 @@ type Prep struct {
 	StoreAtC Opt // "store_at_C": storage temperature to check
 }
 
-// prepField describes one key of the preparation recipe: its check and where it goes. The
-// list is the single place the keys are named, in the order Encode writes them.
-type prepField struct {
-	key     string
-	text    int // maximum bytes of a text field; 0 for a number
-	lo, hi  float64
-	loOpen  bool                 // lo excluded
-	allowed string               // what is allowed, in words
-	str     func(*Prep) *string  // a text field
-	num     func(*Prep) *Opt     // an optional number
-	req     func(*Prep) *float64 // a required number
+// PrepFields is the preparation recipe's table: every key of the format, in the order
+// Encode writes them. Decoding, encoding, the key list in errors, the Make up screen's form
+// and the README's key table derive from it (see Table for how to add a key).
+var PrepFields = Table[Prep]{
+	Noun:  "preparation",
+	New:   func() Prep { return Prep{Format: CurrentFormat} },
+	Check: func(p *Prep, prefix string) error { return p.check(prefix) },
+	Fields: []Field[Prep]{
+		{Spec: Spec{Key: "format", Kind: Version, Max: CurrentFormat, Label: "Format",
+			Help: "recipe format version (optional)"},
+			Int: func(p *Prep) *int { return &p.Format }},
+		{Spec: Spec{Key: "kind", Kind: Tag, MaxBytes: 100, Choices: []string{PrepKind},
+			Allowed: `"` + PrepKind + `" (or leave it out)`, Label: "Kind",
+			Help: `"` + PrepKind + `" (optional): tells a preparation from a batch recipe`}},
+		{Spec: Spec{Key: "name", Kind: Text, MaxBytes: maxTextName, Label: "Name",
+			Help: "shown on the screen and in the recipe box"},
+			Text: func(p *Prep) *string { return &p.Name }},
+		{Spec: Spec{Key: "notes", Kind: Text, MaxBytes: maxTextNote, Label: "Notes", Help: "free text"},
+			Text: func(p *Prep) *string { return &p.Notes }},
+		{Spec: Spec{Key: "solute", Kind: Text, MaxBytes: maxTextName, Trim: true, Label: "Solute",
+			Help: "library compound: id, hydrate formula or common name (required)"},
+			Text: func(p *Prep) *string { return &p.Solute }},
+		{Spec: Spec{Key: "charged_form", Kind: Text, MaxBytes: maxTextName, Trim: true, Group: "from", Choice: "solid",
+			Label: "Form on the shelf", Help: "the form weighed, e.g. CuSO4·5H2O; not with a stock"},
+			Text: func(p *Prep) *string { return &p.ChargedForm }},
+		{Spec: Spec{Key: "purity_pct", Kind: Plain, Unit: "%", Min: 0, MinOpen: true, Max: 100, Group: "from", Choice: "solid",
+			Allowed: "a percentage > 0 and ≤ 100", Label: "Purity", Help: "default 100; not with a stock"},
+			Opt: func(p *Prep) *Opt { return &p.PurityPct }},
+		{Spec: Spec{Key: "concentration", Kind: Plain, Min: 0, MinOpen: true, Max: 1e6, Required: true,
+			Allowed: "a concentration > 0 (in concentration_unit)", Label: "Concentration",
+			Help: "the target, in concentration_unit (required)"},
+			Num: func(p *Prep) *float64 { return &p.Concentration }},
+		{Spec: Spec{Key: "concentration_unit", Kind: Text, MaxBytes: 20, Trim: true, Choices: prepUnits, Required: true,
+			Label: "Unit", Help: "mol/L, mmol/L, g/L, mg/L, % w/v (g per 100 mL of solution), % w/w or mol/kg (required)"},
+			Text: func(p *Prep) *string { return &p.ConcentrationUnit }},
+		{Spec: Spec{Key: "final_volume_mL", Kind: Volume, Min: minMassG, Max: maxMassG, Group: "amount", Choice: "volume",
+			Allowed: "a volume from 0.001 to 1e7 mL", Label: "Made up to", Help: "volume of solution, made up to the mark at temp_C"},
+			Opt: func(p *Prep) *Opt { return &p.FinalVolumeML }},
+		{Spec: Spec{Key: "final_mass_g", Kind: Mass, Min: minMassG, Max: maxMassG, Group: "amount", Choice: "mass",
+			Allowed: massAllowed, Label: "Solution mass", Help: "mass of solution"},
+			Opt: func(p *Prep) *Opt { return &p.FinalMassG }},
+		{Spec: Spec{Key: "solvent_g", Kind: Mass, Min: minMassG, Max: maxMassG, Group: "amount", Choice: "water",
+			Allowed: massAllowed, Label: "Water in it", Help: "all the water in the solution, a hydrate's included"},
+			Opt: func(p *Prep) *Opt { return &p.SolventG }},
+		{Spec: Spec{Key: "temp_C", Kind: Temp, Min: 0, Max: 100,
+			Allowed: "a make-up temperature from 0 to 100 °C", Label: "Made up at", Help: "make-up temperature; default 20 °C"},
+			Opt: func(p *Prep) *Opt { return &p.TempC }},
+		{Spec: Spec{Key: "stock_concentration", Kind: Plain, Min: 0, MinOpen: true, Max: 1e6, Group: "from", Choice: "stock",
+			Allowed: "a concentration > 0 (in stock_unit)", Label: "Stock", Help: "dilute a stock of the same solute, in stock_unit"},
+			Opt: func(p *Prep) *Opt { return &p.StockConcentration }},
+		{Spec: Spec{Key: "stock_unit", Kind: Text, MaxBytes: 20, Trim: true, Choices: prepUnits, Group: "from", Choice: "stock",
+			Label: "Stock unit", Help: "the unit of stock_concentration (required with it)"},
+			Text: func(p *Prep) *string { return &p.StockUnit }},
+		{Spec: Spec{Key: "store_at_C", Kind: Temp, Min: minTempC, Max: maxTempC,
+			Allowed: tempAllowed, Label: "Stored at", Help: "storage temperature to check against crystallization and freezing"},
+			Opt: func(p *Prep) *Opt { return &p.StoreAtC }},
+	},
 }
 
-var prepFields = []prepField{
-	{key: "name", text: maxTextName, str: func(p *Prep) *string { return &p.Name }},
-	{key: "notes", text: maxTextNote, str: func(p *Prep) *string { return &p.Notes }},
-	{key: "solute", text: maxTextName, str: func(p *Prep) *string { return &p.Solute }},
-	{key: "charged_form", text: maxTextName, str: func(p *Prep) *string { return &p.ChargedForm }},
-	{key: "purity_pct", lo: 0, loOpen: true, hi: 100, allowed: "a percentage > 0 and ≤ 100",
-		num: func(p *Prep) *Opt { return &p.PurityPct }},
-	{key: "concentration", lo: 0, loOpen: true, hi: 1e6, allowed: "a concentration > 0 (in concentration_unit)",
-		req: func(p *Prep) *float64 { return &p.Concentration }},
-	{key: "concentration_unit", text: 20, str: func(p *Prep) *string { return &p.ConcentrationUnit }},
-	{key: "final_volume_mL", lo: minMassG, hi: maxMassG, allowed: "a volume from 0.001 to 1e7 mL",
-		num: func(p *Prep) *Opt { return &p.FinalVolumeML }},
-	{key: "final_mass_g", lo: minMassG, hi: maxMassG, allowed: massAllowed,
-		num: func(p *Prep) *Opt { return &p.FinalMassG }},
-	{key: "solvent_g", lo: minMassG, hi: maxMassG, allowed: massAllowed,
-		num: func(p *Prep) *Opt { return &p.SolventG }},
-	{key: "temp_C", lo: 0, hi: 100, allowed: "a make-up temperature from 0 to 100 °C",
-		num: func(p *Prep) *Opt { return &p.TempC }},
-	{key: "stock_concentration", lo: 0, loOpen: true, hi: 1e6, allowed: "a concentration > 0 (in stock_unit)",
-		num: func(p *Prep) *Opt { return &p.StockConcentration }},
-	{key: "stock_unit", text: 20, str: func(p *Prep) *string { return &p.StockUnit }},
-	{key: "store_at_C", lo: minTempC, hi: maxTempC, allowed: tempAllowed,
-		num: func(p *Prep) *Opt { return &p.StoreAtC }},
-}
+// PrepSpecs are the keys of PrepFields without their accessors, for forms.
+var PrepSpecs = PrepFields.Specs()
 
-// PrepKeys lists the keys of a preparation recipe, "format" and "kind" first.
-func PrepKeys() []string {
-	keys := []string{"format", "kind"}
-	for _, f := range prepFields {
-		keys = append(keys, f.key)
+// prepUnits are the concentration units as the table's choices.
+var prepUnits = func() []string {
+	s := make([]string, len(prep.Units))
+	for i, u := range prep.Units {
+		s[i] = string(u)
 	}
-	return keys
-}
+	return s
+}()
+
+// PrepKeys lists the keys of a preparation recipe in the order Encode writes them.
+func PrepKeys() []string { return PrepSpecs.Keys("") }
 
 // DecodePrep reads one preparation recipe strictly, as Decode reads a batch recipe: unknown
 // keys, wrong types, non-finite or absurd numbers and contradictory keys are refused with a
 // *unit.FieldError naming the key; malformed JSON is a *wire.SyntaxError.
-func DecodePrep(data []byte) (Prep, error) {
-	v, err := wire.Decode(data)
-	if err != nil {
-		return Prep{}, err
-	}
-	return prepFromValue(v, "")
-}
+func DecodePrep(data []byte) (Prep, error) { return PrepFields.Decode(data) }
 
-func prepFromValue(v wire.Value, prefix string) (Prep, error) {
-	if v.Kind != wire.Object {
-		return Prep{}, &unit.FieldError{Field: strings.TrimSuffix(prefix, ".") + "recipe", Value: v.Kind.String(),
-			Allowed: "a JSON object of preparation keys"}
-	}
-	p := Prep{Format: CurrentFormat}
-	d := reader{prefix: prefix}
-	for _, m := range v.Members {
-		switch m.Key {
-		case "format":
-			p.Format = d.format(m.Value)
-		case "kind":
-			if k := d.text("kind", m.Value, 100); d.err == nil && k != PrepKind {
-				d.fail("kind", k, `"`+PrepKind+`" (or leave it out)`)
-			}
-		default:
-			f := findPrepField(m.Key)
-			if f == nil {
-				d.fail(m.Key, m.Key, "one of the preparation keys: "+strings.Join(PrepKeys(), ", "))
-				break
-			}
-			f.set(&d, &p, m.Value)
-		}
-		if d.err != nil {
-			return Prep{}, d.err
-		}
-	}
-	if err := p.check(v, prefix); err != nil {
-		return Prep{}, err
-	}
-	return p, nil
-}
-
-func findPrepField(key string) *prepField {
-	for i := range prepFields {
-		if prepFields[i].key == key {
-			return &prepFields[i]
-		}
-	}
-	return nil
-}
-
-func (f *prepField) set(d *reader, p *Prep, v wire.Value) {
-	if f.text > 0 {
-		*f.str(p) = d.text(f.key, v, f.text)
-		return
-	}
-	lo := atLeast(f.lo)
-	if f.loOpen {
-		lo = above(f.lo)
-	}
-	o := d.num(f.key, v, lo, atMost(f.hi), f.allowed)
-	if f.req != nil {
-		*f.req(p) = o.Value
-		return
-	}
-	*f.num(p) = o
+// DecodePrepValue checks one preparation object already read as JSON, as DecodePrep does;
+// prefix goes in front of field names ("recipes[2].").
+func DecodePrepValue(v wire.Value, prefix string) (Prep, error) {
+	return PrepFields.FromValue(v, prefix)
 }
 
 // check enforces the rules that involve more than one key or a required key.
-func (p *Prep) check(v wire.Value, prefix string) error {
+func (p *Prep) check(prefix string) error {
 	fe := func(field, value, allowed string) error {
 		return &unit.FieldError{Field: prefix + field, Value: value, Allowed: allowed}
 	}
 	if strings.TrimSpace(p.Solute) == "" {
 		return fe("solute", p.Solute, "a compound id or name, e.g. KCl or \"calcium chloride dihydrate\" (the key is required)")
 	}
-	if _, ok := v.Get("concentration"); !ok {
+	if p.Concentration == 0 { // the table refuses 0: it was left out
 		return fe("concentration", "", "the target concentration (the key is required)")
 	}
 	if _, err := prep.ParseUnit(prefix+"concentration_unit", p.ConcentrationUnit); err != nil {
@@ -198,48 +166,17 @@ func (p *Prep) check(v wire.Value, prefix string) error {
 	case p.StockConcentration.Set && p.PurityPct.Set:
 		return fe("purity_pct", fmtNum(p.PurityPct.Value), "no purity_pct when diluting a stock")
 	}
-	if p.StockConcentration.Set {
-		if _, err := prep.ParseUnit(prefix+"stock_unit", p.StockUnit); err != nil {
-			return err
-		}
-		if p.StockUnit == string(prep.PctWW) && !(p.StockConcentration.Value < 100) {
-			return fe("stock_concentration", fmtNum(p.StockConcentration.Value), "a mass per cent below 100")
-		}
+	if p.StockUnit == string(prep.PctWW) && !(p.StockConcentration.Value < 100) {
+		return fe("stock_concentration", fmtNum(p.StockConcentration.Value), "a mass per cent below 100")
 	}
 	return nil
 }
 
 // Encode writes the preparation as canonical JSON: "format" and "kind" first, then the keys
-// that are set in the order of the field table. DecodePrep(p.Encode()) gives p back.
-func (p Prep) Encode() []byte {
-	var e wire.Encoder
-	p.encode(&e)
-	b, err := e.Bytes()
-	if err != nil {
-		panic("recipe: Prep.Encode of a non-finite number: " + err.Error())
-	}
-	return b
-}
+// that are set in the order of PrepFields. DecodePrep(p.Encode()) gives p back.
+func (p Prep) Encode() []byte { return PrepFields.Encode(&p) }
 
-func (p Prep) encode(e *wire.Encoder) {
-	e.BeginObject()
-	e.Key("format").Int(CurrentFormat)
-	e.Key("kind").String(PrepKind)
-	for _, f := range prepFields {
-		if f.text > 0 {
-			if s := *f.str(&p); s != "" || f.key == "concentration_unit" {
-				e.Key(f.key).String(s)
-			}
-			continue
-		}
-		if f.req != nil {
-			e.Key(f.key).Float(*f.req(&p))
-		} else if o := f.num(&p); o.Set {
-			e.Key(f.key).Float(o.Value)
-		}
-	}
-	e.EndObject()
-}
+func (p Prep) encode(e *wire.Encoder) { PrepFields.encode(e, &p) }
 
 // PrepResult is a worked preparation with the recipe it came from.
 type PrepResult struct {
@@ -384,6 +321,7 @@ func (res PrepResult) encode(e *wire.Encoder) {
 	num("saturation_pct", r.SaturationPct)
 	e.Key("supersaturated").Bool(r.Supersaturated)
 	opt("saturation_temp_C", r.SaturationTempC, r.HasSaturationTemp)
+	opt("freezing_point_C", r.FreezingPointC, r.HasFreezingPoint)
 	opt("keep_above_C", r.KeepAboveC, r.HasKeepAbove)
 	opt("clear_down_to_C", r.ClearDownToC, !r.HasSaturationTemp && !r.Supersaturated)
 	opt("crystallizes_above_C", r.CrystallizesAbove, r.HasWarmLimit)
@@ -395,6 +333,11 @@ func (res PrepResult) encode(e *wire.Encoder) {
 	}
 	opt("dissolve_temp_change_K", r.DissolveChangeK, r.HasDissolveHeat)
 	list("cautions", r.Cautions)
+	e.Key("caution_kinds").BeginArray()
+	for _, k := range r.CautionKinds {
+		e.String(string(k))
+	}
+	e.EndArray()
 	list("warnings", r.Warnings)
 	list("sources", r.Sources)
 	e.EndObject()
@@ -421,7 +364,7 @@ func DecodePrepCollection(data []byte) ([]Prep, error) {
 	for _, m := range v.Members {
 		switch m.Key {
 		case "format":
-			d.format(m.Value)
+			d.format(m.Value, CurrentFormat)
 		case "kind":
 			if k := d.text("kind", m.Value, 100); d.err == nil && k != PrepCollectionKind {
 				d.fail("kind", k, `"`+PrepCollectionKind+`"`)
@@ -448,7 +391,7 @@ func DecodePrepCollection(data []byte) ([]Prep, error) {
 	}
 	out := make([]Prep, 0, len(items))
 	for i, it := range items {
-		p, err := prepFromValue(it, "recipes["+fmtNum(float64(i))+"].")
+		p, err := PrepFields.FromValue(it, "recipes["+fmtNum(float64(i))+"].")
 		if err != nil {
 			return nil, err
 		}

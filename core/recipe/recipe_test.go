@@ -80,7 +80,7 @@ func TestDecodeRefuses(t *testing.T) {
 		wantText  string // part of the message
 	}{
 		// unknown and missing keys
-		{"unknown key", `{"solute":"KNO3","water_g":100,"dissolve_temp_C":60,"colour":"red"}`, "colour", "recipe keys"},
+		{"unknown key", `{"solute":"KNO3","water_g":100,"dissolve_temp_C":60,"colour":"red"}`, "colour", "one of the keys: "},
 		{"missing dissolve", `{"solute":"KNO3","water_g":100}`, "dissolve_temp_C", "required"},
 		{"missing water", `{"solute":"KNO3","dissolve_temp_C":60}`, "water_g", "water_mL"},
 		{"missing solute", `{"water_g":100,"dissolve_temp_C":60}`, "solute", "compound"},
@@ -106,7 +106,7 @@ func TestDecodeRefuses(t *testing.T) {
 		{"zero format", `{"format":0,"solute":"KNO3","water_g":100,"dissolve_temp_C":60}`, "format", "whole number"},
 		{"fractional format", `{"format":1.5,"solute":"KNO3","water_g":100,"dissolve_temp_C":60}`, "format", "whole number"},
 		// custom compound
-		{"custom unknown key", `{"custom":{"name":"x","molar_mass_g_per_mol":100,"points":[[0,1],[10,2],[20,3]],"colour":1},"water_g":100,"dissolve_temp_C":60}`, "custom.colour", "custom keys"},
+		{"custom unknown key", `{"custom":{"name":"x","molar_mass_g_per_mol":100,"points":[[0,1],[10,2],[20,3]],"colour":1},"water_g":100,"dissolve_temp_C":60}`, "custom.colour", "one of the keys: "},
 		{"custom two points", `{"custom":{"name":"x","molar_mass_g_per_mol":100,"points":[[0,1],[10,2]]},"water_g":100,"dissolve_temp_C":60}`, "custom.points", "at least 3"},
 		{"custom bad point", `{"custom":{"name":"x","molar_mass_g_per_mol":100,"points":[[0,1],[10],[20,3]]},"water_g":100,"dissolve_temp_C":60}`, "custom.points[1]", "pair"},
 		{"custom negative g", `{"custom":{"name":"x","molar_mass_g_per_mol":100,"points":[[0,1],[10,-2],[20,3]]},"water_g":100,"dissolve_temp_C":60}`, "custom.points[1]", "> 0"},

@@ -1,6 +1,9 @@
 package unit
 
-import "strconv"
+import (
+	"strconv"
+	"strings"
+)
 
 // FieldError reports a value a user gave that Saltcast cannot use. Field is the key the value
 // arrived under (as in a recipe or a query, e.g. "water_g"), Value the text as typed, and
@@ -23,4 +26,11 @@ func (e *FieldError) Error() string {
 // NumberError is a short way to build a *FieldError for a number the program already holds.
 func NumberError(field string, v float64, allowed string) *FieldError {
 	return &FieldError{Field: field, Value: FormatCompact(v, 6), Allowed: allowed}
+}
+
+// KeysAllowed is the Allowed text of an error about a key (a recipe key, a query parameter, a
+// command-line flag) that is not taken there: "one of the keys: a, b, c". Every format and
+// front end words an unknown key this way.
+func KeysAllowed(keys []string) string {
+	return "one of the keys: " + strings.Join(keys, ", ")
 }

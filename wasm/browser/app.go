@@ -9,6 +9,7 @@ import (
 
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
+	"saltcast/core/recipe/demo"
 	"saltcast/core/unit"
 )
 
@@ -18,17 +19,6 @@ const (
 	keyCurrent = "saltcast.current" // the recipe on screen, so a reload keeps the work
 	keyUnits   = "saltcast.units"   // "C g mL"
 )
-
-// Demo recipes, invented for the examples.
-var demos = map[string]string{
-	"kno3": `{"format":1,"name":"Greenhouse KNO3 stock, tank B (invented)",` +
-		`"notes":"Invented example: a potassium nitrate stock concentrate mixed warm at 35 °C in the nutrient room that must stay clear through a 4 °C night.",` +
-		`"solute":"KNO3","water_mL":20000,"water_temp_C":18,"dissolve_temp_C":35,"clear_down_to_C":4,"clear_margin_K":2,"cool_to_C":4}`,
-	"cuso4": `{"format":1,"name":"Blue vitriol crystal batch (invented)",` +
-		`"notes":"Invented example: copper sulfate pentahydrate recrystallized from hot water for display crystals.",` +
-		`"solute":"CuSO4","charged_form":"CuSO4·5H2O","purity_pct":98,"water_g":1000,"dissolve_temp_C":70,` +
-		`"saturation_pct":95,"cool_to_C":20,"metastable_width_K":8,"cooling_time_min":180,"vessel_heat_capacity_J_per_K":1200}`,
-}
 
 type app struct {
 	u     Units
@@ -81,16 +71,24 @@ func (a *app) start() {
 	a.bindTiles()
 	a.loadUnits()
 
+	shelfRead := true // nothing stored, or read: the box may be written
 	if s, ok := a.store.get(keyShelf); ok {
 		if sh, err := LoadShelf(s); err == nil {
 			a.shelf = sh
 		} else {
+			shelfRead = false
 			a.boxMessage("m-save", "The saved recipes in this browser could not be read ("+err.Error()+"); they are left as they were.")
 		}
 	}
+	if shelfRead {
+		a.adoptOldPreps()
+	}
 
 	// The recipe to start with: a share link, else the last one on screen, else a demo.
-	start, _ := recipe.Decode([]byte(demos["kno3"]))
+	start, err := demo.Recipe(demo.All[0].Key)
+	if err != nil {
+		a.showPlanError(err)
+	}
 	if r, ok, err := FromFragment(win.Location().Hash()); ok {
 		if err == nil {
 			start = r
@@ -113,8 +111,10 @@ func (a *app) start() {
 	for _, b := range qa(doc, "[data-demo]") {
 		b := b
 		on(b, "click", func(js.Value, event) {
-			if r, err := recipe.Decode([]byte(demos[attr(b, "data-demo")])); err == nil {
+			if r, err := demo.Recipe(attr(b, "data-demo")); err == nil {
 				a.load(r)
+			} else {
+				a.showPlanError(err)
 			}
 		})
 	}
@@ -196,15 +196,14 @@ func (a *app) showDraft() {
 	if a.d.Text["custom.model"] == "" {
 		setValue(a.inputs["custom.model"], "table")
 	}
-	setChecked(byID("f-use_custom"), a.d.Custom)
-	if a.d.Custom {
+	setChecked(byID("f-use_custom"), a.d.Custom())
+	if a.d.Custom() {
 		setAttr(byID("custom-box"), "open", "")
 	}
-	for _, el := range qa(a.recipeForm, `[name="water_basis"]`) {
-		setChecked(el, value(el) == a.d.Water)
-	}
-	for _, el := range qa(a.recipeForm, `[name="amount_basis"]`) {
-		setChecked(el, value(el) == a.d.Amount)
+	for _, group := range []string{"water", "amount"} {
+		for _, el := range qa(a.recipeForm, `[name="`+groupInputs[group]+`"]`) {
+			setChecked(el, value(el) == a.d.Pick[group])
+		}
 	}
 	a.showBases()
 	a.updateSolute(false)
@@ -212,24 +211,24 @@ func (a *app) showDraft() {
 
 func (a *app) showBases() {
 	for _, el := range qa(a.recipeForm, "[data-basis]") {
-		setHidden(el, attr(el, "data-basis") != a.d.Water)
+		setHidden(el, attr(el, "data-basis") != a.d.Pick["water"])
 	}
 	for _, el := range qa(a.recipeForm, "[data-amount]") {
-		setHidden(el, attr(el, "data-amount") != a.d.Amount)
+		setHidden(el, attr(el, "data-amount") != a.d.Pick["amount"])
 	}
 }
 
 func (a *app) onRecipeInput(el js.Value, _ event) {
 	name := attr(el, "name")
 	switch name {
-	case "water_basis":
-		a.d.Water = value(el)
+	case groupInputs["water"]:
+		a.d.Pick["water"] = value(el)
 		a.showBases()
-	case "amount_basis":
-		a.d.Amount = value(el)
+	case groupInputs["amount"]:
+		a.d.Pick["amount"] = value(el)
 		a.showBases()
-	case "use_custom":
-		a.d.Custom = checked(el)
+	case groupInputs["solute"]:
+		a.d.SetCustom(checked(el))
 		a.updateSolute(false)
 	default:
 		if !Known(name) {
@@ -370,7 +369,7 @@ func (a *app) updateSolute(typing bool) {
 	sel := a.inputs["charged_form"]
 	clear(matches)
 	a.compound = nil
-	if a.d.Custom {
+	if a.d.Custom() {
 		setText(picked, "Planning with your own compound (below).")
 		clear(sel)
 		opt := add(sel, "option", "", "anhydrous (own compound)")

@@ -15,6 +15,7 @@ import (
 func (a *app) bindBox() {
 	on(byID("save-btn"), "click", func(js.Value, event) { a.save() })
 	on(byID("saved"), "click", a.onSavedClick)
+	on(byID("saved-preps"), "click", a.onSavedPrep)
 	on(byID("export-one"), "click", func(js.Value, event) {
 		if r, err := a.d.Recipe(); err == nil {
 			setValue(byID("transfer"), string(recipe.EncodeCollection([]recipe.Recipe{r})))
@@ -144,6 +145,7 @@ func (a *app) renderShelf() {
 		setAttr(del, "data-delete", itoa(i))
 		setAttr(del, "aria-label", "Delete "+r.Name)
 	}
+	a.renderSavedPreps()
 	// The list to send from and the "in your list" marks of received recipes follow.
 	a.renderCarry()
 	a.renderReceived()

@@ -181,7 +181,8 @@ func (a *app) takeIn(rs []recipe.Recipe) {
 		return
 	}
 	all, added, same := carry.TakeIn(a.shelf.Recipes, rs, localDate(js.Global().Get("Date").New()))
-	next := Shelf{Recipes: all}
+	next := a.shelf
+	next.Recipes = all
 	if !a.store.set(keyShelf, string(next.Encode())) {
 		a.boxMessage("m-received", "Nothing was taken: this browser does not let the page keep data (private window or storage full).")
 		return

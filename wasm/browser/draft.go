@@ -35,75 +35,82 @@ func (u Units) VolumeSymbol() string {
 	return u.Volume
 }
 
-// kind says how a field travels between the screen and the recipe.
-type kind uint8
+// kind says how a value travels between the screen and the recipe: the recipe table's kinds
+// (recipe.Kind), and kDelta for a result that is a temperature difference.
+type kind = recipe.Kind
 
 const (
-	kPlain  kind = iota // a number in the recipe's own unit (%, K, min, J/K, g/mol)
-	kTemp               // °C in the recipe, the user's temperature unit on screen
-	kMass               // g in the recipe
-	kVolume             // mL in the recipe
-	kText               // a string
-	kPoints             // the custom compound's points, one "temp solubility" pair a line
+	kPlain  = recipe.Plain  // a number in the recipe's own unit (%, K, min, J/K, g/mol)
+	kTemp   = recipe.Temp   // °C in the recipe, the user's temperature unit on screen
+	kMass   = recipe.Mass   // g in the recipe
+	kVolume = recipe.Volume // mL in the recipe
+	kText   = recipe.Text   // a string
+	kPoints = recipe.Points // the custom compound's points, one "temp solubility" pair a line
 )
 
-// fieldKinds lists every recipe input of the page by its name (the recipe JSON key; custom
-// compound keys are prefixed "custom.").
-var fieldKinds = map[string]kind{
-	"name": kText, "notes": kText, "solute": kText, "charged_form": kText,
-	"purity_pct": kPlain, "water_g": kMass, "water_mL": kVolume, "water_temp_C": kTemp,
-	"dissolve_temp_C": kTemp, "saturation_pct": kPlain, "charge_g": kMass,
-	"clear_down_to_C": kTemp, "clear_margin_K": kPlain,
-	"cool_to_C": kTemp, "evaporated_water_g": kMass, "seed_at_C": kTemp,
-	"metastable_width_K": kPlain, "cooling_time_min": kPlain,
-	"vessel_heat_capacity_J_per_K": kPlain,
-	"custom.name":                  kText, "custom.molar_mass_g_per_mol": kPlain, "custom.points": kPoints,
-	"custom.model": kText, "custom.source": kText, "custom.solution_enthalpy_kJ_per_mol": kPlain,
-}
+// groupInputs names the control of the page that picks the Choice of each Group of the
+// recipe table: radio buttons whose values are the Choices, or (use_custom) a checkbox.
+var groupInputs = map[string]string{"water": "water_basis", "amount": "amount_basis", "solute": "use_custom"}
 
 // Draft is the recipe as it stands on screen: what each field last parsed to (in recipe
-// units) and the fields that do not parse. The page rebuilds the recipe from a Draft, so a
-// unit switch re-displays numbers without re-reading, and rounding on screen never changes
-// a saved value.
+// units, under its recipe key; custom compound keys are "custom.name" and so on), the
+// choice made in each group of keys (water by mass or volume...) and the fields that do not
+// parse. The page rebuilds the recipe from a Draft, so a unit switch re-displays numbers
+// without re-reading, and rounding on screen never changes a saved value. Every key comes
+// from the recipe table (recipe.Fields), so the draft holds whatever a recipe file can.
 type Draft struct {
-	Text   map[string]string
-	Num    map[string]float64
-	Points []recipe.Point
-	Errs   map[string]error
+	recipe.Form
+	Errs map[string]error
 
-	Water  string // "mass" or "volume"
-	Amount string // "saturation", "charge" or "clear"
-	Custom bool   // the user's own compound instead of a library solute
+	specs recipe.Specs // the keys of the recipe kind on screen
 }
 
-// NewDraft returns an empty draft: water by mass, amount as % of saturation.
-func NewDraft() *Draft {
-	return &Draft{Text: map[string]string{}, Num: map[string]float64{}, Errs: map[string]error{},
-		Water: "mass", Amount: "saturation"}
+// NewDraft returns an empty batch recipe draft: water by mass, amount as % of saturation,
+// a library solute (the first choice of each group in recipe.Fields).
+func NewDraft() *Draft { return newDraft(recipe.FieldSpecs) }
+
+func newDraft(s recipe.Specs) *Draft {
+	return &Draft{Form: s.NewForm(), Errs: map[string]error{}, specs: s}
 }
 
-// Known reports whether name is a recipe input of the page.
-func Known(name string) bool { _, ok := fieldKinds[name]; return ok }
+// Known reports whether name is a recipe input of the page: a key of the recipe table
+// that holds a value.
+func Known(name string) bool {
+	s, ok := recipe.FieldSpecs.Lookup(name)
+	return ok && s.Kind != recipe.Object && !s.Kind.Fixed()
+}
+
+// Custom reports whether the draft plans with the user's own compound.
+func (d *Draft) Custom() bool { return d.Pick["solute"] == "custom" }
+
+// SetCustom picks the user's own compound (true) or a library solute.
+func (d *Draft) SetCustom(on bool) {
+	d.Pick["solute"] = "library"
+	if on {
+		d.Pick["solute"] = "custom"
+	}
+}
 
 // Set reads what the user typed into field name, in units u. An empty optional number
 // clears the field. The error, also kept in d.Errs, is a *unit.FieldError for name.
 func (d *Draft) Set(name, text string, u Units) error {
 	delete(d.Errs, name)
-	k, ok := fieldKinds[name]
-	if !ok {
+	s, ok := d.specs.Lookup(name)
+	if !ok || s.Kind == recipe.Object || s.Kind.Fixed() {
 		return nil
 	}
-	err := d.set(name, k, text, u)
+	err := d.set(s, text, u)
 	if err != nil {
 		d.Errs[name] = err
 	}
 	return err
 }
 
-func (d *Draft) set(name string, k kind, text string, u Units) error {
-	switch k {
+func (d *Draft) set(s *recipe.Spec, text string, u Units) error {
+	name := s.Key
+	switch s.Kind {
 	case kText:
-		if name == "solute" || name == "charged_form" || name == "custom.model" {
+		if s.Trim {
 			text = strings.TrimSpace(text)
 		}
 		if text == "" {
@@ -124,11 +131,15 @@ func (d *Draft) set(name string, k kind, text string, u Units) error {
 		delete(d.Num, name)
 		return nil
 	}
+	if _, ok := d.Num[name]; ok && text == d.Display(name, u) {
+		// The number as shown, typed back: keep the value itself, not its rounding.
+		return nil
+	}
 	v, err := unit.ParseNumber(name, text)
 	if err != nil {
 		return err
 	}
-	switch k {
+	switch s.Kind {
 	case kTemp:
 		v, err = unit.ToCelsius(name, v, u.Temp)
 	case kMass:
@@ -194,70 +205,9 @@ func FormatPoints(pts []recipe.Point) string {
 	return b.String()
 }
 
-// JSON writes the draft as recipe JSON, with only the keys its switches make active, in the
+// JSON writes the draft as recipe JSON, with only the keys its choices make active, in the
 // order of the recipe format. recipe.Decode checks it and names any bad field.
-func (d *Draft) JSON() []byte {
-	var e wire.Encoder
-	e.BeginObject()
-	e.Key("format").Int(recipe.CurrentFormat)
-	str := func(k string) {
-		if v, ok := d.Text[k]; ok {
-			e.Key(strings.TrimPrefix(k, "custom.")).String(v)
-		}
-	}
-	num := func(k string) {
-		if v, ok := d.Num[k]; ok {
-			e.Key(strings.TrimPrefix(k, "custom.")).Float(v)
-		}
-	}
-	str("name")
-	str("notes")
-	if d.Custom {
-		e.Key("custom").BeginObject()
-		e.Key("name").String(d.Text["custom.name"])
-		num("custom.molar_mass_g_per_mol")
-		e.Key("points").BeginArray()
-		for _, p := range d.Points {
-			e.BeginArray().Float(p.TempC).Float(p.GPer100gWater).EndArray()
-		}
-		e.EndArray()
-		str("custom.model")
-		str("custom.source")
-		num("custom.solution_enthalpy_kJ_per_mol")
-		e.EndObject()
-	} else {
-		str("solute")
-		str("charged_form")
-	}
-	num("purity_pct")
-	if d.Water == "volume" {
-		num("water_mL")
-		num("water_temp_C")
-	} else {
-		num("water_g")
-	}
-	num("dissolve_temp_C")
-	switch d.Amount {
-	case "charge":
-		num("charge_g")
-	case "clear":
-		num("clear_down_to_C")
-		num("clear_margin_K")
-	default:
-		num("saturation_pct")
-	}
-	for _, k := range []string{"cool_to_C", "evaporated_water_g", "seed_at_C", "metastable_width_K",
-		"cooling_time_min", "vessel_heat_capacity_J_per_K"} {
-		num(k)
-	}
-	e.EndObject()
-	b, err := e.Bytes()
-	if err != nil {
-		// Every number in a draft came through unit.ParseNumber, which refuses NaN and Inf.
-		panic("draft: " + err.Error())
-	}
-	return b
-}
+func (d *Draft) JSON() []byte { return d.specs.FormJSON(&d.Form) }
 
 // Recipe checks the draft as the CLI would check the same recipe file.
 func (d *Draft) Recipe() (recipe.Recipe, error) { return recipe.Decode(d.JSON()) }
@@ -265,59 +215,17 @@ func (d *Draft) Recipe() (recipe.Recipe, error) { return recipe.Decode(d.JSON())
 // FromRecipe makes the draft that shows r.
 func FromRecipe(r recipe.Recipe) *Draft {
 	d := NewDraft()
-	text := func(k, v string) {
-		if v != "" {
-			d.Text[k] = v
-		}
-	}
-	num := func(k string, o recipe.Opt) {
-		if o.Set {
-			d.Num[k] = o.Value
-		}
-	}
-	text("name", r.Name)
-	text("notes", r.Notes)
-	text("solute", r.Solute)
-	text("charged_form", r.ChargedForm)
-	if c := r.Custom; c != nil {
-		d.Custom = true
-		text("custom.name", c.Name)
-		d.Num["custom.molar_mass_g_per_mol"] = c.MolarMassGPerMol
-		d.Points = append([]recipe.Point(nil), c.Points...)
-		text("custom.model", c.Model)
-		text("custom.source", c.Source)
-		num("custom.solution_enthalpy_kJ_per_mol", c.SolutionEnthalpyKJPerMol)
-	}
-	num("purity_pct", r.PurityPct)
-	num("water_g", r.WaterG)
-	num("water_mL", r.WaterML)
-	num("water_temp_C", r.WaterTempC)
-	if r.WaterML.Set {
-		d.Water = "volume"
-	}
-	d.Num["dissolve_temp_C"] = r.DissolveTempC
-	num("saturation_pct", r.SaturationPct)
-	num("charge_g", r.ChargeG)
-	num("clear_down_to_C", r.ClearDownToC)
-	num("clear_margin_K", r.ClearMarginK)
-	switch {
-	case r.ChargeG.Set:
-		d.Amount = "charge"
-	case r.ClearDownToC.Set:
-		d.Amount = "clear"
-	}
-	num("cool_to_C", r.CoolToC)
-	num("evaporated_water_g", r.EvaporatedWaterG)
-	num("seed_at_C", r.SeedAtC)
-	num("metastable_width_K", r.MetastableWidthK)
-	num("cooling_time_min", r.CoolingTimeMin)
-	num("vessel_heat_capacity_J_per_K", r.VesselHeatCapacityJPerK)
+	recipe.Fields.ToForm(&r, &d.Form)
 	return d
 }
 
 // Display is the text field name shows in units u ("" when the field is empty).
 func (d *Draft) Display(name string, u Units) string {
-	k := fieldKinds[name]
+	s, ok := d.specs.Lookup(name)
+	if !ok {
+		return ""
+	}
+	k := s.Kind
 	switch k {
 	case kText:
 		return d.Text[name]
@@ -337,6 +245,19 @@ func (d *Draft) Display(name string, u Units) string {
 		return editable(VolumeFromML(v, u))
 	}
 	return exact(v)
+}
+
+// unitText is the unit shown beside a recipe key's number in units u.
+func unitText(s *recipe.Spec, u Units) string {
+	switch s.Kind {
+	case kTemp:
+		return u.TempSymbol()
+	case kMass:
+		return u.Mass
+	case kVolume:
+		return u.VolumeSymbol()
+	}
+	return s.Unit
 }
 
 // TempFromC converts °C to the user's temperature unit.

@@ -97,8 +97,14 @@ func TestDraftRoundTrip(t *testing.T) {
 		for _, u := range []Units{DefaultUnits, {"F", "lb", "gal"}, {"K", "kg", "L"}} {
 			shown := FromRecipe(r)
 			back := NewDraft()
-			back.Water, back.Amount, back.Custom = shown.Water, shown.Amount, shown.Custom
-			for name := range fieldKinds {
+			for g, c := range shown.Pick {
+				back.Pick[g] = c
+			}
+			for _, s := range recipe.FieldSpecs {
+				name := s.Key
+				if !Known(name) {
+					continue
+				}
 				if txt := shown.Display(name, u); txt != "" {
 					if err := back.Set(name, txt, u); err != nil {
 						t.Fatalf("Set(%s, %q): %v", name, txt, err)

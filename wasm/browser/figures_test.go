@@ -47,3 +47,30 @@ func TestFigureNonFinite(t *testing.T) {
 
 func nan() float64 { z := 0.0; return z / z }
 func inf() float64 { z := 0.0; return 1 / z }
+
+// The heat figures of a seeded sodium acetate batch: the basis is the trihydrate's heat of
+// fusion, and the insulated batch holds at 58 °C = 136.4 °F (the trihydrate's incongruent
+// melting point, Lane, Solar Heat Storage, 1983, from memory; °F derived).
+func TestHeatFigures(t *testing.T) {
+	res, err := recipe.Plan(recipe.Recipe{Solute: "CH3COONa", WaterG: recipe.Some(100), DissolveTempC: 70,
+		SeedAtC: recipe.Some(20), CoolToC: recipe.Some(20)})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, tt := range []struct {
+		key  string
+		u    Units
+		want string
+	}{
+		{"heat_basis", DefaultUnits, "heat of fusion of the hydrate"},
+		{"adiabatic_held_at_transition", DefaultUnits, "held at 58 °C"},
+		{"adiabatic_held_at_transition", Units{Temp: "F", Mass: "g", Volume: "mL"}, "held at 136.4 °F"},
+		{"adiabatic_phase", DefaultUnits, "CH3COONa·3H2O"},
+	} {
+		f, _ := FigureByKey(tt.key)
+		text, _, ok := f.Show(&res, tt.u)
+		if !ok || !strings.HasPrefix(text, tt.want) {
+			t.Errorf("%s in %s = %q (%v), want it to start %q", tt.key, tt.u.Temp, text, ok, tt.want)
+		}
+	}
+}

@@ -87,15 +87,15 @@ func FuzzImport(f *testing.F) {
 			}
 			return
 		}
-		rs, _ := ReadImport(data)
-		for _, r := range rs {
+		c, _ := ReadImport(data)
+		for _, r := range c.Recipes {
 			if _, ok := s.Get(r.Name); !ok {
 				t.Fatalf("imported recipe %q is not on the shelf", r.Name)
 			}
 		}
-		exported := recipe.EncodeCollection(rs)
+		exported := c.Encode()
 		again, err := ReadImport(exported)
-		if err != nil || string(recipe.EncodeCollection(again)) != string(exported) {
+		if err != nil || string(again.Encode()) != string(exported) {
 			t.Fatalf("export of an import does not import again: %v\n%s", err, exported)
 		}
 	})

@@ -4,7 +4,6 @@ package main
 
 import (
 	"errors"
-	"strings"
 	"syscall/js"
 
 	"saltcast/core/gas"
@@ -170,6 +169,7 @@ func (a *app) gasCompute() error {
 	warnings := append([]string(nil), sat.Warnings...)
 	sources := []string{sat.Source}
 	var cautions []string
+	pointsToSDS := false
 	shown := map[string]string{
 		"saturation_mg_per_L":    unit.FormatNumber(sat.MgPerL, 4),
 		"saturation_umol_per_kg": unit.FormatNumber(sat.UmolPerKg, 4),
@@ -197,6 +197,7 @@ func (a *app) gasCompute() error {
 		warnings = append(warnings, o.Warnings...)
 		warnings = append(warnings, o.Notes...)
 		cautions = append(cautions, o.Cautions...)
+		pointsToSDS = o.PointsToSDS()
 		sources = append(sources, o.Source)
 	}
 
@@ -236,7 +237,7 @@ func (a *app) gasCompute() error {
 	}
 	setHTML(byID("gas-chart"), svg) // SVG from web/chart, text escaped there
 	a.gasTable(tbl)
-	if !mentionsSDS(cautions) {
+	if !pointsToSDS {
 		cautions = append(cautions, gasCaution)
 	}
 	fillList(byID("gas-cautions"), cautions)
@@ -249,15 +250,6 @@ func (a *app) gasCompute() error {
 // batch's.
 const gasCaution = "Saltcast is a planning aid, not a safety assessment: hot water scalds and heated " +
 	"closed vessels build pressure; follow your local rules and licensed practice, and the SDS of anything added to the water."
-
-func mentionsSDS(list []string) bool {
-	for _, c := range list {
-		if strings.Contains(c, "SDS") {
-			return true
-		}
-	}
-	return false
-}
 
 func steps(from, to, step float64) []float64 {
 	var out []float64

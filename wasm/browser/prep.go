@@ -17,7 +17,8 @@ import (
 // its figures, the stock-bottle labels, and the saved preparations. Its inputs are named like
 // the recipe keys (prepform.go) and its results carry the answer's keys as data-key.
 
-// keyPreps holds the saved preparations, as a preparations collection file.
+// keyPreps held the saved preparations before they joined the recipe box (keyShelf); what
+// it still holds is moved there once (adoptOldPreps).
 const keyPreps = "saltcast.preps"
 
 // keyLabelBy remembers who makes the solutions on this device, for the label.
@@ -28,9 +29,8 @@ const maxLabels = 24
 
 type prepScreen struct {
 	started bool
-	form    PrepForm
+	d       *Draft
 	last    *recipe.PrepResult
-	saved   []recipe.Prep
 	shown   map[string]js.Value // result outputs by data-key
 	boxes   map[string]js.Value // their tiles
 	subs    map[string]js.Value // the line under a tile's value
@@ -40,7 +40,7 @@ var ps prepScreen
 
 func (a *app) startPrep() {
 	ps.started = true
-	ps.form = NewPrepForm()
+	ps.d = NewPrepDraft()
 	ps.shown, ps.boxes, ps.subs = map[string]js.Value{}, map[string]js.Value{}, map[string]js.Value{}
 	form := byID("prep")
 	dl := byID("p-solutes")
@@ -59,6 +59,7 @@ func (a *app) startPrep() {
 		{"saturation_pct", "Of saturation"},
 		{"keep_above_C", "Keep above"},
 		{"saturation_temp_C", "Crystallizes below"},
+		{"freezing_point_C", "Freezes at"},
 	} {
 		box := addFigure(figs, t.label)
 		val := add(box, "span", "val", "")
@@ -86,13 +87,6 @@ func (a *app) startPrep() {
 		setAttr(out, "data-key", u.key)
 		ps.shown[u.key] = out
 	}
-	if s, ok := a.store.get(keyPreps); ok {
-		if list, err := recipe.DecodePrepCollection([]byte(s)); err == nil {
-			ps.saved = list
-		} else {
-			setText(byID("m-prep-save"), "The saved preparations in this browser could not be read ("+err.Error()+"); they are left as they were.")
-		}
-	}
 	if s, ok := a.store.get(keyLabelBy); ok {
 		setValue(byID("p-label_by"), s)
 	}
@@ -112,11 +106,11 @@ func (a *app) startPrep() {
 	on(byID("prep-save"), "click", func(js.Value, event) { a.savePrep() })
 	on(byID("prep-saved"), "click", a.onSavedPrep)
 	on(byID("prep-export"), "click", func(js.Value, event) {
-		setValue(byID("prep-transfer"), string(recipe.EncodePrepCollection(ps.saved)))
+		setValue(byID("prep-transfer"), string(recipe.EncodePrepCollection(a.shelf.Preps)))
 		setText(byID("m-prep-import"), "The saved preparations are in the box below: copy them, or download them as a file.")
 	})
 	on(byID("prep-download"), "click", func(js.Value, event) {
-		download("saltcast-preparations.json", "application/json", string(recipe.EncodePrepCollection(ps.saved)))
+		download("saltcast-preparations.json", "application/json", string(recipe.EncodePrepCollection(a.shelf.Preps)))
 	})
 	on(byID("prep-import"), "click", func(js.Value, event) { a.importPreps() })
 	on(byID("prep-share"), "click", func(js.Value, event) { a.sharePrep() })
@@ -130,51 +124,50 @@ func (a *app) loadPrep(p recipe.Prep) {
 	if !ps.started {
 		a.startPrep()
 	}
-	ps.form = FormFromPrep(p, a.u)
+	ps.d = FromPrep(p)
 	setValue(byID("prep-save-name"), p.Name)
 	a.showPrepForm()
 	a.recomputePrep()
 }
 
-// showPrepForm writes the form state into the inputs.
+// prepInputs are the inputs of the preparation form that hold a recipe key, by name.
+func prepInputs() map[string]js.Value {
+	m := map[string]js.Value{}
+	for _, el := range qa(byID("prep"), "[name]") {
+		if name := attr(el, "name"); PrepKnown(name) {
+			m[name] = el
+		}
+	}
+	return m
+}
+
+// showPrepForm writes the draft into the inputs, in the user's units.
 func (a *app) showPrepForm() {
-	form := byID("prep")
-	for _, name := range []string{"solute", "concentration", "concentration_unit", "amount", "temp_C", "purity_pct",
-		"stock_concentration", "stock_unit", "store_at_C", "name", "notes"} {
-		setValue(q(form, `[name="`+name+`"]`), ps.form.Text[name])
+	for name, el := range prepInputs() {
+		setValue(el, ps.d.Display(name, a.u))
 		a.prepFieldError(name, nil)
 	}
-	for _, el := range qa(form, `[name="prep_amount"]`) {
-		setChecked(el, value(el) == ps.form.Amount)
-	}
-	for _, el := range qa(form, `[name="prep_from"]`) {
-		setChecked(el, (value(el) == "stock") == ps.form.FromStock)
+	for group, control := range prepGroupInputs {
+		for _, el := range qa(byID("prep"), `[name="`+control+`"]`) {
+			setChecked(el, value(el) == ps.d.Pick[group])
+		}
 	}
 	a.showPrepParts()
 	a.fillForms()
 }
 
-// showPrepParts shows the inputs of the way the solution is made and names the amount.
+// showPrepParts shows the inputs of the choices picked (the amount, solid or stock).
 func (a *app) showPrepParts() {
-	for _, el := range qa(byID("prep"), "[data-from]") {
-		setHidden(el, (attr(el, "data-from") == "stock") != ps.form.FromStock)
+	for _, el := range qa(byID("prep"), "[data-group]") {
+		setHidden(el, attr(el, "data-choice") != ps.d.Pick[attr(el, "data-group")])
 	}
-	label := map[string]string{"final_volume_mL": "Made up to ", "final_mass_g": "Solution mass ", "solvent_g": "Water in it "}[ps.form.Amount]
-	u := "mL"
-	if ps.form.Amount != "final_volume_mL" {
-		u = "g"
-	}
-	lbl := byID("p-amount-label")
-	clear(lbl)
-	lbl.Call("append", label)
-	add(lbl, "span", "u", u)
 }
 
 // fillForms lists the forms on the shelf of the solute typed.
 func (a *app) fillForms() {
 	sel := byID("p-charged_form")
 	clear(sel)
-	c, f, err := compound.Lookup(ps.form.Text["solute"])
+	c, f, err := compound.Lookup(ps.d.Text["solute"])
 	picked := byID("p-picked")
 	if err != nil {
 		setText(picked, "")
@@ -182,7 +175,7 @@ func (a *app) fillForms() {
 		return
 	}
 	setText(picked, c.Name+" · "+c.ID)
-	want := ps.form.Text["charged_form"]
+	want := ps.d.Text["charged_form"]
 	if fw, err := c.Form(want); err == nil {
 		want = fw.Formula
 	} else {
@@ -199,29 +192,29 @@ func (a *app) fillForms() {
 		setAttr(opt, "value", form.Formula)
 	}
 	setValue(sel, want)
-	ps.form.Text["charged_form"] = want
+	ps.d.Text["charged_form"] = want
 }
 
 func (a *app) onPrepInput(el js.Value, _ event) {
 	name := attr(el, "name")
-	switch name {
-	case "prep_amount":
-		ps.form.Amount = value(el)
-		a.showPrepParts()
-	case "prep_from":
-		ps.form.FromStock = value(el) == "stock"
-		a.showPrepParts()
-	case "":
+	for group, control := range prepGroupInputs {
+		if name == control {
+			ps.d.Pick[group] = value(el)
+			a.showPrepParts()
+			a.recomputePrep()
+			return
+		}
+	}
+	if !PrepKnown(name) {
 		return
-	default:
-		ps.form.Text[name] = value(el)
-		if name == "solute" {
-			delete(ps.form.Text, "charged_form")
-			a.fillForms()
-		}
-		if name == "name" {
-			setValue(byID("prep-save-name"), value(el))
-		}
+	}
+	a.prepFieldError(name, ps.d.Set(name, value(el), a.u))
+	switch name {
+	case "solute":
+		delete(ps.d.Text, "charged_form")
+		a.fillForms()
+	case "name":
+		setValue(byID("prep-save-name"), value(el))
 	}
 	a.recomputePrep()
 }
@@ -251,20 +244,21 @@ func (a *app) recomputePrep() {
 		return
 	}
 	form := byID("prep")
-	for _, name := range prepNumbers {
-		a.prepFieldError(name, nil)
-	}
-	for _, name := range []string{"solute", "charged_form", "concentration_unit", "stock_unit", "name"} {
-		a.prepFieldError(name, nil)
+	for name := range prepInputs() {
+		if ps.d.Errs[name] == nil {
+			a.prepFieldError(name, nil)
+		}
 	}
 	stale := byID("prep-stale")
-	p, errs := ps.form.Prep(a.u)
+	errs := ps.d.Errs
 	var res recipe.PrepResult
-	var err error
 	if len(errs) == 0 {
-		res, err = recipe.PlanPrep(p)
+		p, err := ps.d.Prep()
+		if err == nil {
+			res, err = recipe.PlanPrep(p)
+		}
 		if err != nil {
-			errs = map[string]error{PrepInput(err): err}
+			errs = map[string]error{fieldOf(err): err}
 		}
 	}
 	if len(errs) > 0 {
@@ -287,6 +281,14 @@ func (a *app) recomputePrep() {
 	a.renderPrep()
 }
 
+// fieldOf is the field a *unit.FieldError names, or "".
+func fieldOf(err error) string {
+	if fe, ok := err.(*unit.FieldError); ok {
+		return fe.Field
+	}
+	return ""
+}
+
 func (a *app) renderPrep() {
 	res := ps.last
 	if res == nil {
@@ -307,23 +309,27 @@ func (a *app) renderPrep() {
 	}
 	formSub := ""
 	if r.HasForm {
-		formSub = "g of " + r.Form
+		formSub = "of " + r.Form
 		if r.PurityPct < 100 {
 			formSub += " at " + unit.FormatCompact(r.PurityPct, 4) + " %"
 		}
 	}
-	set("form_g", num(r.FormG), formSub, r.HasForm)
-	set("stock_mL", num(r.StockML), "mL of stock = "+num(r.StockG)+" g", r.HasStock && r.HasStockVolume)
-	waterSub := "g = " + num(r.WaterML) + " mL"
+	u := a.u
+	mass := func(g float64) string { return num(MassFromG(g, u)) }
+	vol := func(ml float64) string { return num(VolumeFromML(ml, u)) }
+	set("form_g", mass(r.FormG), u.Mass+" "+formSub, r.HasForm)
+	set("stock_mL", vol(r.StockML), u.VolumeSymbol()+" of stock = "+mass(r.StockG)+" "+u.Mass, r.HasStock && r.HasStockVolume)
+	waterSub := u.Mass + " = " + vol(r.WaterML) + " " + u.VolumeSymbol()
 	if r.WaterApprox {
 		waterSub += "; fill to the mark"
 	}
-	set("water_g", num(r.WaterG), waterSub, true)
-	set("solution_mL", num(r.SolutionML), "mL = "+num(r.SolutionG)+" g", r.HasDensity || r.Amount == prep.ByVolume)
+	set("water_g", mass(r.WaterG), waterSub, true)
+	set("solution_mL", vol(r.SolutionML), u.VolumeSymbol()+" = "+mass(r.SolutionG)+" "+u.Mass, r.HasDensity || r.Amount == prep.ByVolume)
 	set("density_g_per_mL", unit.FormatNumber(r.DensityKgPerM3/1000, 5), "g/mL ± "+unit.FormatCompact(r.DensityErrPct, 2)+" %", r.HasDensity)
 	set("saturation_pct", unit.FormatNumber(r.SaturationPct, 3), "% at "+TempText(r.TempC, a.u), true)
 	set("keep_above_C", fixed(TempFromC(r.KeepAboveC, a.u), 1), a.u.TempSymbol(), r.HasKeepAbove)
 	set("saturation_temp_C", fixed(TempFromC(r.SaturationTempC, a.u), 1), a.u.TempSymbol(), r.HasSaturationTemp && !r.Supersaturated)
+	set("freezing_point_C", fixed(TempFromC(r.FreezingPointC, a.u), 1), a.u.TempSymbol(), r.HasFreezingPoint)
 	for key, v := range map[string]float64{"mol_per_L": r.MolPerL, "mmol_per_L": r.MmolPerL, "g_per_L": r.GPerL,
 		"mg_per_L": r.MgPerL, "pct_w_v": r.PctWV} {
 		s := "—"
@@ -336,6 +342,7 @@ func (a *app) renderPrep() {
 	setText(ps.shown["mol_per_kg"], num(r.MolPerKg))
 	setText(ps.shown["g_per_100g_water"], num(r.GPer100gWater))
 	fillList(byID("prep-cautions"), r.Cautions)
+	markCautions(byID("prep-cautions"), r.CautionKinds)
 	fillList(byID("prep-warnings"), orNone(r.Warnings))
 	fillList(byID("prep-sources"), r.Sources)
 	a.renderLabels()
@@ -400,113 +407,120 @@ func (a *app) prepToBatch() {
 
 func (a *app) savePrep() {
 	msg := byID("m-prep-save")
-	p, errs := ps.form.Prep(a.u)
-	if len(errs) > 0 {
+	p, err := ps.d.Prep()
+	if err != nil || len(ps.d.Errs) > 0 {
 		setText(msg, "Not saved: correct the marked field first.")
 		return
 	}
 	name := strings.TrimSpace(value(byID("prep-save-name")))
 	if name == "" {
-		name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
+		name = PrepName(p)
 	}
 	p.Name = name
-	list := append([]recipe.Prep(nil), ps.saved...)
-	replaced := false
-	for i := range list {
-		if list[i].Name == name {
-			list[i], replaced = p, true
-		}
-	}
-	if !replaced {
-		list = append(list, p)
-	}
-	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+	next := a.shelf
+	next.PutPrep(p)
+	if !a.store.set(keyShelf, string(next.Encode())) {
 		setText(msg, "Not saved: this browser's storage is full or switched off. Export the saved preparations first.")
 		return
 	}
-	ps.saved = list
-	ps.form.Text["name"] = name
+	a.shelf = next
+	ps.d.Text["name"] = name
 	setValue(q(byID("prep"), `[name="name"]`), name)
-	setText(msg, "Saved “"+name+"”.")
-	a.renderSavedPreps()
+	setText(msg, "Saved “"+name+"”; it is in the recipe box too.")
+	a.renderShelf()
 }
 
+// renderSavedPreps lists the saved preparations on the Make up screen and in the recipe box.
 func (a *app) renderSavedPreps() {
-	list := byID("prep-saved")
-	clear(list)
-	for i, p := range ps.saved {
-		li := add(list, "li", "", "")
-		add(li, "span", "nm", p.Name)
-		b := add(li, "button", "act", "Open")
-		setAttr(b, "type", "button")
-		setAttr(b, "data-open", strconv.Itoa(i))
-		d := add(li, "button", "act danger", "Delete")
-		setAttr(d, "type", "button")
-		setAttr(d, "data-delete", strconv.Itoa(i))
+	for _, id := range []string{"prep-saved", "saved-preps"} {
+		list := byID(id)
+		if !exists(list) {
+			continue
+		}
+		clear(list)
+		for i, p := range a.shelf.Preps {
+			li := add(list, "li", "", "")
+			add(li, "span", "nm", p.Name)
+			b := add(li, "button", "act", "Open")
+			setAttr(b, "type", "button")
+			setAttr(b, "data-open", strconv.Itoa(i))
+			d := add(li, "button", "act danger", "Delete")
+			setAttr(d, "type", "button")
+			setAttr(d, "data-delete", strconv.Itoa(i))
+			setAttr(d, "aria-label", "Delete "+p.Name)
+		}
+	}
+	if el := byID("saved-preps-empty"); exists(el) {
+		setHidden(el, len(a.shelf.Preps) > 0)
 	}
 }
 
 func (a *app) onSavedPrep(t js.Value, _ event) {
 	if b := closest(t, "[data-open]"); exists(b) {
-		if i, err := strconv.Atoi(attr(b, "data-open")); err == nil && i < len(ps.saved) {
-			a.loadPrep(ps.saved[i])
+		if i, err := strconv.Atoi(attr(b, "data-open")); err == nil && i < len(a.shelf.Preps) {
+			a.loadPrep(a.shelf.Preps[i])
+			a.showScreen("prep")
 		}
 		return
 	}
 	if b := closest(t, "[data-delete]"); exists(b) {
 		i, err := strconv.Atoi(attr(b, "data-delete"))
-		if err != nil || i >= len(ps.saved) {
+		if err != nil || i >= len(a.shelf.Preps) || !win.Confirm("Delete the saved preparation “"+a.shelf.Preps[i].Name+"”?") {
 			return
 		}
-		list := append(append([]recipe.Prep(nil), ps.saved[:i]...), ps.saved[i+1:]...)
-		if a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
-			ps.saved = list
-			a.renderSavedPreps()
+		next := a.shelf
+		next.DeletePrep(i)
+		if a.store.set(keyShelf, string(next.Encode())) {
+			a.shelf = next
+			a.renderShelf()
 		}
 	}
 }
 
-// importPreps takes a whole preparations file (or one preparation) or nothing.
+// adoptOldPreps moves preparations saved before they joined the recipe box into it, once.
+func (a *app) adoptOldPreps() {
+	s, ok := a.store.get(keyPreps)
+	if !ok || strings.TrimSpace(s) == "" {
+		return
+	}
+	list, err := recipe.DecodePrepCollection([]byte(s))
+	if err != nil {
+		return // left as it was, for a newer Saltcast to read
+	}
+	next := a.shelf
+	for _, p := range list {
+		p.Name = PrepName(p)
+		next.PutPrep(p)
+	}
+	if a.store.set(keyShelf, string(next.Encode())) {
+		a.shelf = next
+		a.store.set(keyPreps, "")
+	}
+}
+
+// importPreps takes a whole file (preparations, recipes or both, or one preparation) or
+// nothing, into the recipe box.
 func (a *app) importPreps() {
 	msg := byID("m-prep-import")
-	text := strings.TrimSpace(value(byID("prep-transfer")))
-	in, err := recipe.DecodePrepCollection([]byte(text))
-	if err != nil {
-		if one, err1 := recipe.DecodePrep([]byte(text)); err1 == nil {
-			in, err = []recipe.Prep{one}, nil
-		}
-	}
+	next := a.shelf
+	next.Recipes = append([]recipe.Recipe(nil), a.shelf.Recipes...)
+	n, err := next.Import([]byte(strings.TrimSpace(value(byID("prep-transfer")))))
 	if err != nil {
 		setText(msg, "Nothing imported: "+err.Error())
 		return
 	}
-	list := append([]recipe.Prep(nil), ps.saved...)
-	for _, p := range in {
-		if p.Name == "" {
-			p.Name = p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
-		}
-		same := false
-		for i := range list {
-			if list[i].Name == p.Name {
-				list[i], same = p, true
-			}
-		}
-		if !same {
-			list = append(list, p)
-		}
-	}
-	if !a.store.set(keyPreps, string(recipe.EncodePrepCollection(list))) {
+	if !a.store.set(keyShelf, string(next.Encode())) {
 		setText(msg, "Nothing imported: this browser's storage is full or switched off.")
 		return
 	}
-	ps.saved = list
-	a.renderSavedPreps()
-	setText(msg, "Imported "+strconv.Itoa(len(in))+" preparation(s).")
+	a.shelf = next
+	a.renderShelf()
+	setText(msg, "Imported "+strconv.Itoa(n)+" recipe(s) and preparation(s).")
 }
 
 func (a *app) sharePrep() {
-	p, errs := ps.form.Prep(a.u)
-	if len(errs) > 0 {
+	p, err := ps.d.Prep()
+	if err != nil || len(ps.d.Errs) > 0 {
 		setText(byID("m-prep-import"), "No link: correct the marked field first.")
 		return
 	}
@@ -529,17 +543,17 @@ func isoToday() string {
 	return strconv.Itoa(d.Call("getFullYear").Int()) + "-" + two(d.Call("getMonth").Int()+1) + "-" + two(d.Call("getDate").Int())
 }
 
-// prepUnits follows the unit switch: the temperatures on the form are shown in the new unit
-// (a form that does not read keeps its text) and the results are drawn again.
-func (a *app) prepUnits(old Units) {
+// prepUnits follows the unit switch: temperatures, masses and volumes on the form are shown
+// in the new units (an input that does not read keeps its text; the draft keeps the values
+// themselves, so nothing is rounded) and the results are drawn again.
+func (a *app) prepUnits(Units) {
 	if !ps.started {
 		return
 	}
-	if p, errs := ps.form.Prep(old); len(errs) == 0 {
-		from := ps.form.FromStock
-		ps.form = FormFromPrep(p, a.u)
-		ps.form.FromStock = from
-		a.showPrepForm()
+	for name, el := range prepInputs() {
+		if ps.d.Errs[name] == nil && name != "charged_form" {
+			setValue(el, ps.d.Display(name, a.u))
+		}
 	}
 	a.recomputePrep()
 }

@@ -2,7 +2,6 @@ package main
 
 import (
 	"encoding/base64"
-	"errors"
 	"math"
 	"strings"
 
@@ -12,141 +11,43 @@ import (
 	"saltcast/core/wire"
 )
 
-// The preparation screen's form, without the DOM: the text of each input, which amount is
-// given and whether a stock is diluted. Inputs are named like the recipe keys, except the
-// amount, whose one input ("amount") means final_volume_mL, final_mass_g or solvent_g.
-// Volumes and masses are mL and g (volumetric glassware is metric); temperatures follow the
-// unit switch.
+// The preparation screen's form, without the DOM: a Draft over the preparation table
+// (recipe.PrepSpecs), so its inputs are named like the recipe keys, masses and volumes
+// follow the unit switch like the batch screen's, and what the form holds is what a file can
+// hold. The concentrations stay in the chosen concentration unit.
 
-// prepTemps are the inputs holding temperatures.
-var prepTemps = map[string]bool{"temp_C": true, "store_at_C": true}
+// prepGroupInputs names the radio buttons that pick the Choice of each Group of the
+// preparation table; their values are the Choices.
+var prepGroupInputs = map[string]string{"amount": "prep_amount", "from": "prep_from"}
 
-// prepNumbers are the number inputs of the form.
-var prepNumbers = []string{"concentration", "amount", "temp_C", "purity_pct", "stock_concentration", "store_at_C"}
-
-// PrepForm is what the preparation form holds.
-type PrepForm struct {
-	Text      map[string]string // input text by name
-	Amount    string            // "final_volume_mL", "final_mass_g" or "solvent_g"
-	FromStock bool
+// NewPrepDraft is the form of a first visit: 1 L of 0.1 mol/L NaCl at 20 °C (invented).
+func NewPrepDraft() *Draft {
+	d := newDraft(recipe.PrepSpecs)
+	for k, v := range map[string]string{"solute": "NaCl", "concentration_unit": "mol/L", "charged_form": "NaCl", "stock_unit": "mol/L"} {
+		d.Text[k] = v
+	}
+	d.Num["concentration"], d.Num["final_volume_mL"], d.Num["temp_C"] = 0.1, 1000, 20
+	return d
 }
 
-// NewPrepForm is the form of a first visit: 1 L of 0.1 mol/L NaCl at 20 °C (invented).
-func NewPrepForm() PrepForm {
-	return PrepForm{Text: map[string]string{"solute": "NaCl", "concentration": "0.1", "concentration_unit": "mol/L",
-		"amount": "1000", "temp_C": "20", "charged_form": "NaCl", "stock_unit": "mol/L"}, Amount: "final_volume_mL"}
+// FromPrep makes the draft that shows p; a stock unit is kept ready for the stock choice.
+func FromPrep(p recipe.Prep) *Draft {
+	d := newDraft(recipe.PrepSpecs)
+	recipe.PrepFields.ToForm(&p, &d.Form)
+	if d.Text["stock_unit"] == "" {
+		d.Text["stock_unit"] = string(prep.MolPerL)
+	}
+	return d
 }
 
-// Prep reads the form into a checked preparation recipe. Errors name the input they belong
-// to (the amount's key is "amount"); the recipe is only valid when there are none.
-func (f PrepForm) Prep(u Units) (recipe.Prep, map[string]error) {
-	errs := map[string]error{}
-	p := recipe.Prep{Format: recipe.CurrentFormat}
-	nums := map[string]recipe.Opt{}
-	for _, name := range prepNumbers {
-		text := strings.TrimSpace(f.Text[name])
-		if text == "" {
-			continue
-		}
-		v, err := unit.ParseNumber(name, text)
-		if err == nil && prepTemps[name] && u.Temp != "C" {
-			// 12 significant digits drop the binary noise of the conversion (39.2 °F is
-			// 4 °C, not 4.000000000000002), far below any meaningful temperature.
-			v, err = unit.ToCelsius(name, v, u.Temp)
-			v = wire.RoundSig(v, 12)
-		}
-		if err != nil {
-			errs[name] = err
-			continue
-		}
-		nums[name] = recipe.Some(v)
-	}
-	p.Name, p.Notes = f.Text["name"], f.Text["notes"]
-	p.Solute = strings.TrimSpace(f.Text["solute"])
-	p.Concentration = nums["concentration"].Value
-	p.ConcentrationUnit = f.Text["concentration_unit"]
-	p.TempC, p.StoreAtC = nums["temp_C"], nums["store_at_C"]
-	switch f.Amount {
-	case "final_mass_g":
-		p.FinalMassG = nums["amount"]
-	case "solvent_g":
-		p.SolventG = nums["amount"]
-	default:
-		p.FinalVolumeML = nums["amount"]
-	}
-	if f.FromStock {
-		p.StockConcentration, p.StockUnit = nums["stock_concentration"], f.Text["stock_unit"]
-		if !p.StockConcentration.Set && errs["stock_concentration"] == nil {
-			errs["stock_concentration"] = &unit.FieldError{Field: "stock_concentration", Allowed: "the stock's concentration"}
-		}
-	} else {
-		p.ChargedForm, p.PurityPct = f.Text["charged_form"], nums["purity_pct"]
-	}
-	if _, ok := nums["concentration"]; !ok && errs["concentration"] == nil {
-		errs["concentration"] = &unit.FieldError{Field: "concentration", Allowed: "the concentration to make up"}
-	}
-	if _, ok := nums["amount"]; !ok && errs["amount"] == nil {
-		errs["amount"] = &unit.FieldError{Field: "amount", Allowed: "how much to make"}
-	}
-	if len(errs) > 0 {
-		return recipe.Prep{}, errs
-	}
-	// The decoder's checks, with their messages: ranges, units, combinations.
-	checked, err := recipe.DecodePrep(p.Encode())
-	if err != nil {
-		errs[PrepInput(err)] = err
-		return recipe.Prep{}, errs
-	}
-	return checked, nil
-}
+// Prep checks the draft as the CLI would check the same preparation file.
+func (d *Draft) Prep() (recipe.Prep, error) { return recipe.DecodePrep(d.JSON()) }
 
-// PrepInput names the input an error belongs to.
-func PrepInput(err error) string {
-	var fe *unit.FieldError
-	if !errors.As(err, &fe) {
-		return ""
-	}
-	switch fe.Field {
-	case "final_volume_mL", "final_mass_g", "solvent_g":
-		return "amount"
-	}
-	return fe.Field
-}
-
-// FormFromPrep shows a preparation recipe in the form, temperatures in u.
-func FormFromPrep(p recipe.Prep, u Units) PrepForm {
-	f := PrepForm{Text: map[string]string{"solute": p.Solute, "concentration": exact(p.Concentration),
-		"concentration_unit": p.ConcentrationUnit, "name": p.Name, "notes": p.Notes, "charged_form": p.ChargedForm,
-		"stock_unit": string(prep.MolPerL)}, Amount: "final_volume_mL"}
-	opt := func(name string, o recipe.Opt) {
-		if !o.Set {
-			return
-		}
-		if prepTemps[name] {
-			f.Text[name] = editable(TempFromC(o.Value, u))
-			return
-		}
-		f.Text[name] = exact(o.Value)
-	}
-	switch {
-	case p.FinalMassG.Set:
-		f.Amount = "final_mass_g"
-		opt("amount", p.FinalMassG)
-	case p.SolventG.Set:
-		f.Amount = "solvent_g"
-		opt("amount", p.SolventG)
-	default:
-		opt("amount", p.FinalVolumeML)
-	}
-	opt("temp_C", p.TempC)
-	opt("store_at_C", p.StoreAtC)
-	opt("purity_pct", p.PurityPct)
-	if p.StockConcentration.Set {
-		f.FromStock = true
-		opt("stock_concentration", p.StockConcentration)
-		f.Text["stock_unit"] = p.StockUnit
-	}
-	return f
+// PrepKnown reports whether name is an input of the preparation form: a key of the
+// preparation table that holds a value.
+func PrepKnown(name string) bool {
+	s, ok := recipe.PrepSpecs.Lookup(name)
+	return ok && s.Kind != recipe.Object && !s.Kind.Fixed()
 }
 
 // prepShareKey starts the URL fragment that carries a preparation.
@@ -204,14 +105,16 @@ func LabelFor(res recipe.PrepResult, by, date string, u Units) Label {
 		}
 	}
 	l.Also = strings.Join(also, " · ")
-	amount := unit.FormatCompact(r.AmountValue, 6)
+	mass := func(g float64) string { return unit.FormatNumber(MassFromG(g, u), 4) + " " + u.Mass }
+	var amount string
 	switch r.Amount {
 	case prep.ByVolume:
-		amount = "made up to " + amount + " mL at " + TempText(r.TempC, u)
+		amount = "made up to " + unit.FormatCompact(wire.RoundSig(VolumeFromML(r.AmountValue, u), 6), 6) + " " + u.VolumeSymbol() +
+			" at " + TempText(r.TempC, u)
 	case prep.ByMass:
-		amount = amount + " g of solution"
+		amount = mass(r.AmountValue) + " of solution"
 	default:
-		amount = "in " + amount + " g of water"
+		amount = "in " + mass(r.AmountValue) + " of water"
 	}
 	if r.HasStock {
 		l.Made = "Diluted from " + unit.FormatCompact(res.Recipe.StockConcentration.Value, 6) + " " + res.Recipe.StockUnit + " stock, " + amount
@@ -220,11 +123,14 @@ func LabelFor(res recipe.PrepResult, by, date string, u Units) Label {
 		if r.PurityPct < 100 {
 			form += " (" + unit.FormatCompact(r.PurityPct, 4) + " %)"
 		}
-		l.Made = unit.FormatNumber(r.FormG, 4) + " g " + form + ", " + amount
+		l.Made = mass(r.FormG) + " " + form + ", " + amount
 	}
 	switch {
 	case r.HasKeepAbove:
 		l.Keep = "Keep above " + unit.FormatCompact(math.Ceil(TempFromC(r.KeepAboveC, u)), 4) + " " + u.TempSymbol()
+		if r.HasFreezingPoint && r.FreezingPointC+prep.StorageMarginK >= r.KeepAboveC {
+			l.Keep += " (freezes at " + TempText(r.FreezingPointC, u) + ")"
+		}
 	case r.HasWarmLimit:
 		l.Keep = "Keep below " + unit.FormatCompact(math.Floor(TempFromC(r.CrystallizesAbove, u)), 4) + " " + u.TempSymbol()
 	default:

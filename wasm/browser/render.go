@@ -6,6 +6,7 @@ import (
 	"strings"
 	"syscall/js"
 
+	"saltcast/core/balance"
 	"saltcast/core/compound"
 	"saltcast/core/recipe"
 	"saltcast/core/solubility"
@@ -80,6 +81,7 @@ func (a *app) render() {
 	setText(byID("charge-form"), cf)
 
 	a.fillListOnce("cautions", r.Cautions)
+	markCautions(byID("cautions"), r.CautionKinds)
 	a.fillListOnce("warnings", orNone(r.Warnings))
 	a.fillListOnce("sources", r.Sources)
 	if ct := a.curveText(r); a.changed("curve-range", ct) {
@@ -129,6 +131,19 @@ func (a *app) fillListOnce(id string, items []string) {
 	}
 }
 
+// markCautions marks each caution item with its kind (data-kind) and sets the toxic one
+// apart (class strong): the page tests the kind, never the wording.
+func markCautions(list js.Value, kinds []balance.CautionKind) {
+	for i, li := range qa(list, "li") {
+		k := balance.CautionKind("")
+		if i < len(kinds) {
+			k = kinds[i]
+		}
+		setAttr(li, "data-kind", string(k))
+		classSet(li, "strong", k == balance.CautionToxic)
+	}
+}
+
 func orNone(s []string) []string {
 	if len(s) == 0 {
 		return []string{"None."}
@@ -140,7 +155,7 @@ func orNone(s []string) []string {
 func (a *app) curveText(r *recipe.Result) string {
 	c := a.compound
 	if c == nil {
-		if a.d.Custom && len(a.d.Points) > 0 {
+		if a.d.Custom() && len(a.d.Points) > 0 {
 			lo, hi := pointRange(a.d.Points)
 			return "Your own points for " + a.d.Text["custom.name"] + ", valid from " + TempText(lo, a.u) + " to " + TempText(hi, a.u) + "."
 		}
@@ -169,14 +184,14 @@ func pointRange(pts []recipe.Point) (lo, hi float64) {
 // chartKey names everything the batch chart is drawn from.
 func (a *app) chartKey(r *recipe.Result) string {
 	k := a.u.Temp + "|" + r.SoluteID + "|" + r.Recipe.Solute
-	if a.d.Custom {
+	if a.d.Custom() {
 		k += "|" + string(a.d.JSON())
 	}
 	if r.HasMetastable {
 		k += "|m" + exact(r.MetastableWidthK)
 	}
 	for _, p := range r.Path {
-		k += "|" + p.Label + "," + exact(p.TempC) + "," + exact(p.G100)
+		k += "|" + string(p.Kind) + "," + exact(p.TempC) + "," + exact(p.G100)
 	}
 	return k
 }
@@ -198,7 +213,7 @@ const chartPoints = 60
 // chartSVG draws the compound's curves and the batch's path; any problem becomes a
 // placeholder SVG that says what is missing, never a broken chart.
 func (a *app) chartSVG(r *recipe.Result) string {
-	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: batchPath(r)}
+	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: chart.BatchFromPlan(&r.Result)}
 	if r.HasMetastable {
 		view.MetastableK = r.MetastableWidthK
 	}
@@ -207,7 +222,7 @@ func (a *app) chartSVG(r *recipe.Result) string {
 	case a.compound != nil:
 		view.Title = a.compound.Name + ", " + a.compound.ID
 		view.Phases, err = phases(a.compound)
-	case a.d.Custom:
+	case a.d.Custom():
 		view.Title = a.d.Text["custom.name"] + " (own data)"
 		var fit solubility.FitResult
 		fit, err = a.fit()
@@ -244,50 +259,11 @@ func phases(c *compound.Compound) ([]chart.Phase, error) {
 	if p, ok := phaseCache[c.ID]; ok && !c.Custom {
 		return p, nil
 	}
-	var out []chart.Phase
-	for _, seg := range c.Segments {
-		pts, err := chart.Sample(seg.MinC, seg.MaxC, chartPoints, curveAt(seg.Curve))
-		if err != nil {
-			return nil, err
-		}
-		out = append(out, chart.Phase{Form: seg.Form.Formula, Points: pts})
-	}
-	if !c.Custom {
+	out, err := chart.Phases(c, chartPoints)
+	if err == nil && !c.Custom {
 		phaseCache[c.ID] = out
 	}
-	return out, nil
-}
-
-// batchPath turns the plan's labelled path points into the chart's batch route.
-func batchPath(r *recipe.Result) *chart.Batch {
-	var b chart.Batch
-	found := map[string]*chart.Point{}
-	for _, p := range r.Path {
-		pt := chart.Point{X: p.TempC, Y: p.G100}
-		found[p.Label] = &pt
-	}
-	d, ok := found["dissolve"]
-	if !ok {
-		return nil
-	}
-	b.Dissolve = *d
-	b.Saturation = found["onset"]
-	b.Seed = found["seed"]
-	b.Settled = found["adiabatic end"]
-	switch {
-	case b.Seed != nil:
-		b.Onset = b.Seed
-	case found["nucleation"] != nil:
-		b.Onset = found["nucleation"]
-	case r.HasTarget && r.CrystalsG > 0:
-		b.Onset = b.Saturation
-	}
-	if e, ok := found["end"]; ok {
-		b.End = *e
-	} else {
-		b.End = b.Dissolve
-	}
-	return &b
+	return out, err
 }
 
 // fit fits the user's points with the chosen model, as the planner does.
@@ -370,6 +346,7 @@ func (a *app) renderSheet() {
 	setText(byID("s-name"), name)
 	setText(byID("s-date"), today())
 	fillList(byID("s-cautions"), r.Cautions)
+	markCautions(byID("s-cautions"), r.CautionKinds)
 	fillList(byID("s-warnings"), orNone(r.Warnings))
 	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
 	setText(byID("s-notes"), r.Recipe.Notes)
@@ -392,17 +369,9 @@ func (a *app) renderSheet() {
 	row(in, "Solute", solute)
 	row(in, "Form on the shelf", r.ChargedForm)
 	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" %")
-	d := FromRecipe(r.Recipe)
-	for _, k := range []struct{ key, label string }{
-		{"water_g", "Water"}, {"water_mL", "Water (volume)"}, {"water_temp_C", "measured at"},
-		{"evaporated_water_g", "Water boiled off"}, {"dissolve_temp_C", "Process temperature"},
-		{"saturation_pct", "Saturation"}, {"charge_g", "Charge"}, {"clear_down_to_C", "Stays clear down to"},
-		{"clear_margin_K", "Safety margin"}, {"cool_to_C", "Target temperature"}, {"seed_at_C", "Seed at"},
-		{"metastable_width_K", "Metastable band width"}, {"cooling_time_min", "Cooling time"},
-		{"vessel_heat_capacity_J_per_K", "Vessel heat capacity"},
-	} {
-		if txt := d.Display(k.key, a.u); txt != "" {
-			row(in, k.label, txt+" "+a.unitOf(k.key))
+	for _, k := range InputRows(r.Recipe, a.u) {
+		if k.Key != "purity_pct" { // shown above from the plan, with its default
+			row(in, k.Label, k.Text+" "+k.Unit)
 		}
 	}
 
@@ -427,27 +396,4 @@ func (a *app) renderSheet() {
 		fillProgramme(body, r, a.u, false, true)
 	}
 	setHidden(pt.Get("parentElement"), len(r.Programme) == 0)
-}
-
-// unitOf is the unit shown beside a recipe field on the sheet.
-func (a *app) unitOf(key string) string {
-	switch fieldKinds[key] {
-	case kTemp:
-		return a.u.TempSymbol()
-	case kMass:
-		return a.u.Mass
-	case kVolume:
-		return a.u.VolumeSymbol()
-	}
-	switch key {
-	case "saturation_pct":
-		return "%"
-	case "clear_margin_K", "metastable_width_K":
-		return "K"
-	case "cooling_time_min":
-		return "min"
-	case "vessel_heat_capacity_J_per_K":
-		return "J/K"
-	}
-	return ""
 }

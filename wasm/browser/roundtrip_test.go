@@ -196,14 +196,22 @@ func exactRecipe(t *testing.T, what string, got, want recipe.Recipe) {
 
 // Export → import gives back exactly the recipes saved, for 1000 random recipes: one at a
 // time (the "export this recipe" file), all at once ("export all", which is also what the
-// browser stores), through the stored shelf, and through a share link.
+// browser stores), through the stored shelf, and through a share link. Each recipe is saved
+// from the form and opened in it again as the page does (throughForm).
 func TestRoundTripRandomRecipes(t *testing.T) {
 	rs := randRecipes(t, roundTripRecipes)
+	inputs := shellInputs(t)
 
-	// Saved one by one, as the Save button does.
+	// Saved one by one, as the Save button does: the recipe on screen (shown in the form
+	// and read back from it) is what is saved.
 	var shelf Shelf
-	for _, r := range rs {
-		shelf.Put(r)
+	for i, r := range rs {
+		got, err := throughForm(inputs, r, DefaultUnits)
+		if err != nil {
+			t.Fatalf("recipe %d: through the form: %v", i, err)
+		}
+		exactRecipe(t, "shown in the form and saved", got, r)
+		shelf.Put(got)
 	}
 	if len(shelf.Recipes) != len(rs) {
 		t.Fatalf("shelf holds %d recipes after saving %d with distinct names", len(shelf.Recipes), len(rs))
@@ -226,6 +234,11 @@ func TestRoundTripRandomRecipes(t *testing.T) {
 	for i, r := range rs {
 		exactRecipe(t, "stored and reloaded", loaded.Recipes[i], r)
 		exactRecipe(t, "export all, import", imported.Recipes[i], r)
+		if opened, err := throughForm(inputs, imported.Recipes[i], DefaultUnits); err != nil {
+			t.Errorf("recipe %d: imported and opened in the form: %v", i, err)
+		} else {
+			exactRecipe(t, "imported and opened in the form", opened, r)
+		}
 	}
 	if again := imported.Encode(); string(again) != string(stored) {
 		t.Errorf("export after import differs from the first export (%d vs %d bytes)", len(again), len(stored))
@@ -240,10 +253,10 @@ func TestRoundTripRandomRecipes(t *testing.T) {
 			exactRecipe(t, "export one, import", one.Recipes[0], r)
 		}
 		// A single recipe file (not a collection) is read too.
-		if got, err := ReadImport(r.Encode()); err != nil || len(got) != 1 {
-			t.Errorf("recipe %d: ReadImport(single recipe) = %d recipes, %v", i, len(got), err)
+		if got, err := ReadImport(r.Encode()); err != nil || len(got.Recipes) != 1 {
+			t.Errorf("recipe %d: ReadImport(single recipe) = %d recipes, %v", i, len(got.Recipes), err)
 		} else {
-			exactRecipe(t, "single recipe file", got[0], r)
+			exactRecipe(t, "single recipe file", got.Recipes[0], r)
 		}
 		// The share link.
 		frag := ShareFragment(r)
@@ -256,6 +269,12 @@ func TestRoundTripRandomRecipes(t *testing.T) {
 			continue
 		}
 		exactRecipe(t, "share link", got, r)
+		// Opened from the link, the page shows it in the form and plans what it reads back.
+		if opened, err := throughForm(inputs, got, DefaultUnits); err != nil {
+			t.Errorf("recipe %d: share link opened in the form: %v", i, err)
+		} else {
+			exactRecipe(t, "share link opened in the form", opened, r)
+		}
 	}
 }
 

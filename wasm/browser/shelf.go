@@ -9,21 +9,25 @@ import (
 	"saltcast/core/wire"
 )
 
-// Shelf is the list of recipes kept in the browser, by name. It is stored as one recipe
-// collection file (recipe.EncodeCollection), the same format Export writes and Import reads.
-type Shelf struct{ Recipes []recipe.Recipe }
+// Shelf is the list of recipes kept in the browser, by name: batch recipes and, apart,
+// preparations. It is stored as one recipe collection file (recipe.Collection), the same
+// format Export writes and Import reads.
+type Shelf struct {
+	Recipes []recipe.Recipe
+	Preps   []recipe.Prep
+}
 
 // LoadShelf reads what the browser stored; "" is an empty shelf.
 func LoadShelf(stored string) (Shelf, error) {
 	if strings.TrimSpace(stored) == "" {
 		return Shelf{}, nil
 	}
-	rs, err := recipe.DecodeCollection([]byte(stored))
-	return Shelf{Recipes: rs}, err
+	c, err := recipe.DecodeAll([]byte(stored))
+	return Shelf{Recipes: c.Recipes, Preps: c.Preps}, err
 }
 
 // Encode is what the browser stores, and what "export all" writes.
-func (s Shelf) Encode() []byte { return recipe.EncodeCollection(s.Recipes) }
+func (s Shelf) Encode() []byte { return recipe.Collection{Recipes: s.Recipes, Preps: s.Preps}.Encode() }
 
 // Put keeps r under its name, replacing a recipe of the same name.
 func (s *Shelf) Put(r recipe.Recipe) {
@@ -34,6 +38,24 @@ func (s *Shelf) Put(r recipe.Recipe) {
 		}
 	}
 	s.Recipes = append(s.Recipes, r)
+}
+
+// PutPrep keeps p under its name, replacing a preparation of the same name. The list is
+// copied first, so a Shelf copied before still holds the old one.
+func (s *Shelf) PutPrep(p recipe.Prep) {
+	s.Preps = append([]recipe.Prep(nil), s.Preps...)
+	for i := range s.Preps {
+		if s.Preps[i].Name == p.Name {
+			s.Preps[i] = p
+			return
+		}
+	}
+	s.Preps = append(s.Preps, p)
+}
+
+// DeletePrep removes the preparation at i (the list is copied first).
+func (s *Shelf) DeletePrep(i int) {
+	s.Preps = append(append([]recipe.Prep(nil), s.Preps[:i]...), s.Preps[i+1:]...)
 }
 
 // Get returns the recipe saved under name.
@@ -56,45 +78,71 @@ func (s *Shelf) Delete(name string) {
 	}
 }
 
-// ReadImport reads an import file: a recipe collection or a single recipe. It is all or
-// nothing: any error refuses the whole file, and nothing is returned. Every recipe needs a
-// name, since the shelf keeps recipes by name.
-func ReadImport(data []byte) ([]recipe.Recipe, error) {
+// PrepName is the name a preparation is kept under: its own, else what it makes.
+func PrepName(p recipe.Prep) string {
+	if n := strings.TrimSpace(p.Name); n != "" {
+		return p.Name
+	}
+	return p.Solute + " " + exact(p.Concentration) + " " + p.ConcentrationUnit
+}
+
+// ReadImport reads an import file: a recipe collection (with or without preparations), a
+// preparations file of the Make up screen, a single recipe or a single preparation. It is
+// all or nothing: any error refuses the whole file, and nothing is returned. Every batch
+// recipe needs a name, since the shelf keeps recipes by name; a preparation without one is
+// named after what it makes.
+func ReadImport(data []byte) (recipe.Collection, error) {
 	v, err := wire.DecodeLimits(data, wire.Limits{MaxBytes: recipe.MaxCollectionBytes, MaxDepth: 32})
 	if err != nil {
-		return nil, err
+		return recipe.Collection{}, err
 	}
-	var rs []recipe.Recipe
-	if _, ok := v.Get("kind"); ok {
-		if rs, err = recipe.DecodeCollection(data); err != nil {
-			return nil, err
+	var c recipe.Collection
+	kind, hasKind := v.Get("kind")
+	switch {
+	case hasKind && kind.Kind == wire.String && kind.Text == recipe.PrepCollectionKind:
+		c.Preps, err = recipe.DecodePrepCollection(data)
+	case hasKind && kind.Kind == wire.String && kind.Text == recipe.PrepKind:
+		var p recipe.Prep
+		if p, err = recipe.DecodePrepValue(v, ""); err == nil {
+			c.Preps = []recipe.Prep{p}
 		}
-	} else {
-		r, err := recipe.Decode(data)
-		if err != nil {
-			return nil, err
+	case hasKind:
+		c, err = recipe.CollectionFromValue(v)
+	default:
+		var r recipe.Recipe
+		if r, err = recipe.DecodeValue(v); err == nil {
+			c.Recipes = []recipe.Recipe{r}
 		}
-		rs = []recipe.Recipe{r}
 	}
-	for i, r := range rs {
+	if err != nil {
+		return recipe.Collection{}, err
+	}
+	for i, r := range c.Recipes {
 		if strings.TrimSpace(r.Name) == "" {
-			return nil, &unit.FieldError{Field: "recipes[" + itoa(i) + "].name", Value: "",
+			return recipe.Collection{}, &unit.FieldError{Field: "recipes[" + itoa(i) + "].name", Value: "",
 				Allowed: "a name for every recipe (recipes are kept by name)"}
 		}
 	}
-	return rs, nil
+	for i := range c.Preps {
+		c.Preps[i].Name = PrepName(c.Preps[i])
+	}
+	return c, nil
 }
 
-// Import puts every recipe of an import file on the shelf, or none (see ReadImport).
+// Import puts every recipe and preparation of an import file on the shelf, or none (see
+// ReadImport); n counts both.
 func (s *Shelf) Import(data []byte) (int, error) {
-	rs, err := ReadImport(data)
+	c, err := ReadImport(data)
 	if err != nil {
 		return 0, err
 	}
-	for _, r := range rs {
+	for _, r := range c.Recipes {
 		s.Put(r)
 	}
-	return len(rs), nil
+	for _, p := range c.Preps {
+		s.PutPrep(p)
+	}
+	return len(c.Recipes) + len(c.Preps), nil
 }
 
 // shareKey starts the URL fragment that carries a recipe.

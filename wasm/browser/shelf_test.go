@@ -1,6 +1,9 @@
 package main
 
 import (
+	"math/rand/v2"
+	"reflect"
+	"strings"
 	"testing"
 
 	"saltcast/core/recipe"
@@ -74,5 +77,50 @@ func TestShareFragment(t *testing.T) {
 	}
 	if _, ok, err := FromFragment(frag[:len(frag)-7]); !ok || err == nil {
 		t.Error("a cut-short link was accepted")
+	}
+}
+
+// Preparations travel with the batch recipes: a shelf holding both exports one file that
+// imports again to the same shelf, byte for byte; a preparations file of the Make up screen
+// and a single preparation import too; a shelf without preparations is written as before.
+func TestShelfCarriesPreparations(t *testing.T) {
+	rng := rand.New(rand.NewPCG(20261203, 2))
+	var s Shelf
+	s.Put(recipe.Recipe{Format: 1, Name: "KNO3 batch (invented)", Solute: "KNO3", WaterG: recipe.Some(100), DissolveTempC: 40})
+	before := string(s.Encode())
+	if before != string(recipe.EncodeCollection(s.Recipes)) {
+		t.Fatalf("a shelf without preparations is not the plain collection: %s", before)
+	}
+	var preps []recipe.Prep
+	for i := range 20 {
+		p := tablePrep(rng, i%2 == 0)
+		p.Name = PrepName(p) + " #" + itoa(i)
+		preps = append(preps, p)
+		s.PutPrep(p)
+	}
+	exported := s.Encode()
+	var back Shelf
+	n, err := back.Import(exported)
+	if err != nil || n != 21 {
+		t.Fatalf("Import(export) = %d, %v", n, err)
+	}
+	if !reflect.DeepEqual(back.Preps, preps) || string(back.Encode()) != string(exported) {
+		t.Fatalf("preparations changed through export and import:\n%s\n%s", exported, back.Encode())
+	}
+	var fromScreen Shelf
+	if n, err := fromScreen.Import(recipe.EncodePrepCollection(preps)); err != nil || n != len(preps) {
+		t.Fatalf("Import(preparations file) = %d, %v", n, err)
+	}
+	var one Shelf
+	p := preps[0]
+	p.Name = ""
+	if n, err := one.Import(p.Encode()); err != nil || n != 1 || one.Preps[0].Name != PrepName(p) {
+		t.Fatalf("Import(single preparation) = %d, %v, %+v", n, err, one.Preps)
+	}
+	// All or nothing: one bad preparation refuses the file and leaves the shelf as it was.
+	bad := strings.Replace(string(exported), `"kind":"preparation"`, `"kind":"batch"`, 1)
+	keep := string(back.Encode())
+	if _, err := back.Import([]byte(bad)); err == nil || string(back.Encode()) != keep {
+		t.Errorf("a bad preparation was imported or changed the shelf: %v", err)
 	}
 }

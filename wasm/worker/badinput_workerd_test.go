@@ -1,7 +1,10 @@
+//go:build workerd
+
 package main
 
 import (
 	"bytes"
+	"fmt"
 	"io"
 	"net/http"
 	"os"
@@ -11,69 +14,7 @@ import (
 	"sync"
 	"testing"
 	"time"
-
-	"saltcast/web/api"
-	"saltcast/web/badinput"
 )
-
-// catalogueCases turns the shared bad-input catalogue (testdata/bad-inputs.txt) into API
-// cases: a refusal is a 4xx answer whose body is web/api's error JSON naming the field
-// (413 for a body over the limit, which the glue answers itself); a warning or an accepted
-// input is a 200 with web/api's answer. Rows for typed text (parse) have no route.
-func catalogueCases(t testing.TB) []apiCase {
-	t.Helper()
-	rows, err := badinput.Load()
-	if err != nil {
-		t.Fatal(err)
-	}
-	var out []apiCase
-	for _, r := range rows {
-		if r.Route == badinput.RouteParse {
-			continue
-		}
-		c := apiCase{name: r.ID, method: "GET", path: r.Path(), status: http.StatusOK}
-		switch r.Route {
-		case badinput.RoutePlan:
-			c.method, c.contentType, c.body = "POST", "application/json", []byte(r.Input)
-			c.want = plan(c.body)
-		default:
-			p, err := r.Params()
-			if err != nil {
-				t.Fatalf("line %d: %v", r.Line, err)
-			}
-			c.path += "?" + r.Input
-			call := map[string]func(api.Params) ([]byte, error){
-				badinput.RouteSolubility: api.Solubility,
-				badinput.RouteGas:        api.Gas,
-				badinput.RouteOutgas:     api.Outgas,
-			}[r.Route]
-			c.want = params(call, p)
-		}
-		if r.Kind == badinput.Refuse {
-			c.status = http.StatusBadRequest
-			if r.Field != badinput.JSONField {
-				c.field = r.Field
-			}
-			if len(c.body) > MaxBodyBytes {
-				c.status, c.want, c.field = http.StatusRequestEntityTooLarge, nil, ""
-			}
-		}
-		out = append(out, c)
-	}
-	return out
-}
-
-// TestBadInputsInProcess sends the catalogue to the handler in-process.
-func TestBadInputsInProcess(t *testing.T) {
-	do := inProcess(NewHandler(Options{Page: []byte("<!doctype html><title>t</title>")}))
-	cases := catalogueCases(t)
-	if len(cases) < 40 {
-		t.Fatalf("only %d catalogue cases reach the API", len(cases))
-	}
-	for _, c := range cases {
-		t.Run(c.name, func(t *testing.T) { c.check(t, "http://saltcast.test", do) })
-	}
-}
 
 // TestBadInputsWorkerd sends the catalogue to the built worker under workerd: the same
 // statuses and byte-identical bodies as in-process, and never a 5xx.
@@ -84,7 +25,7 @@ func TestBadInputsWorkerd(t *testing.T) {
 	}
 }
 
-// Load test bounds. The request count is what the issue asks for. Memory is judged as
+// Load test bounds. 10 000 requests is the load the service is asked to take. Memory is judged as
 // leak_test.go judges it, by the Go program's own memory and its live JS references (read
 // through the probe module), with the same bounds per request; workerd's resident memory is
 // sampled from /proc and reported, and only a gross rise fails, because workerd's RSS grows by
@@ -102,7 +43,7 @@ const (
 // TestWorkerdLoad sends a bounded mixed load (the catalogue and the demo recipes, good and
 // bad) to a fresh workerd on loopback from a few goroutines: no transport errors, no 5xx,
 // every status as expected, the Go program's memory and live JS references do not grow, and
-// workerd's resident memory is sampled across the run. The figures are logged for the README.
+// workerd's resident memory is sampled across the run. The figures are logged for web/PERFORMANCE.md.
 func TestWorkerdLoad(t *testing.T) {
 	s := startProbed(t)
 	cases := catalogueCases(t)
@@ -164,7 +105,22 @@ func TestWorkerdLoad(t *testing.T) {
 	}
 	samples := max(5, total/5000)
 	before := getStats(t, s)
-	rss := []int64{rssBytes(t, pid)}
+	// workerd's RSS is sampled where /proc has it; the request checks below run either way.
+	var rss []int64
+	var rssErr error
+	sample := func() {
+		if rssErr != nil {
+			return
+		}
+		v, err := rssBytes(pid)
+		if err != nil {
+			rssErr, rss = err, nil
+			t.Logf("workerd's resident memory is not sampled (%v); the status, 5xx and Go memory checks still run", err)
+			return
+		}
+		rss = append(rss, v)
+	}
+	sample()
 	var failures []string
 	fiveXX := 0
 	start := time.Now()
@@ -175,13 +131,16 @@ func TestWorkerdLoad(t *testing.T) {
 		}
 		f, f5 := send(n)
 		failures, fiveXX = append(failures, f...), fiveXX+f5
-		rss = append(rss, rssBytes(t, pid))
+		sample()
 	}
 	elapsed := time.Since(start)
 	after := getStats(t, s)
-	mib := make([]string, len(rss))
-	for i, v := range rss {
-		mib[i] = strconv.FormatFloat(float64(v)/(1<<20), 'f', 1, 64)
+	mib := []string{"not sampled"}
+	if len(rss) > 0 {
+		mib = make([]string, len(rss))
+		for i, v := range rss {
+			mib[i] = strconv.FormatFloat(float64(v)/(1<<20), 'f', 1, 64)
+		}
 	}
 	t.Logf("%d requests (%d kinds, %d at a time) in %v (%.0f per second); 5xx %d; failures %d; "+
 		"Go memory %d → %d bytes; live JS references %d → %d; workerd RSS every %d requests: %s MiB",
@@ -204,7 +163,8 @@ func TestWorkerdLoad(t *testing.T) {
 	if d := after.MemoryBytes - before.MemoryBytes; d > leakMaxMemory {
 		t.Errorf("Go memory grew by %d bytes over %d requests (allowed %d)", d, total, leakMaxMemory)
 	}
-	if top := slices.Max(rss); top > loadMaxRSS {
+	if len(rss) > 0 && slices.Max(rss) > loadMaxRSS {
+		top := slices.Max(rss)
 		t.Errorf("workerd's resident memory reached %.0f MiB (limit %.0f MiB)", float64(top)/(1<<20), float64(loadMaxRSS)/(1<<20))
 	}
 }
@@ -216,22 +176,21 @@ func errText(err error) string {
 	return " (" + err.Error() + ")"
 }
 
-// rssBytes reads the resident set size of process pid from /proc (Linux).
-func rssBytes(t *testing.T, pid int) int64 {
-	t.Helper()
+// rssBytes reads the resident set size of process pid from /proc (Linux). Where there is no
+// /proc it returns an error and the load test runs without RSS samples.
+func rssBytes(pid int) (int64, error) {
 	b, err := os.ReadFile("/proc/" + strconv.Itoa(pid) + "/status")
 	if err != nil {
-		t.Skip("no /proc to read workerd's memory from: " + err.Error())
+		return 0, err
 	}
 	for line := range strings.SplitSeq(string(b), "\n") {
 		if rest, ok := strings.CutPrefix(line, "VmRSS:"); ok {
 			kb, err := strconv.ParseInt(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(rest), "kB")), 10, 64)
 			if err != nil {
-				t.Fatalf("VmRSS line %q: %v", line, err)
+				return 0, fmt.Errorf("VmRSS line %q: %v", line, err)
 			}
-			return kb << 10
+			return kb << 10, nil
 		}
 	}
-	t.Fatalf("no VmRSS in /proc/%d/status", pid)
-	return 0
+	return 0, fmt.Errorf("no VmRSS in /proc/%d/status", pid)
 }

@@ -1,3 +1,5 @@
+//go:build workerd && browser
+
 package main
 
 import (
@@ -13,16 +15,13 @@ import (
 
 // The page the worker serves must still start under the Content-Security-Policy the worker
 // adds: headless Debian chromium opens GET / from workerd, and the app must show its first
-// result with no violation reported. Skips without chromium unless
-// SALTCAST_REQUIRE_BROWSER=1 (set by `make test`).
+// result with no violation reported. Built with the workerd and browser tags; without
+// chromium it fails.
 func TestWorkerdPageStartsUnderCSP(t *testing.T) {
 	s := sharedWorkerd(t)
 	exe, err := exec.LookPath("chromium")
 	if err != nil {
-		if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-			t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh")
-		}
-		t.Skip("chromium is not installed; run `make test`")
+		t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh (or `make test`)")
 	}
 	profile := t.TempDir()
 	opts := append(chromedp.DefaultExecAllocatorOptions[:],

@@ -5,11 +5,10 @@ import (
 	"encoding/json"
 	"io"
 	"net/http"
-	"os"
-	"path/filepath"
 	"strings"
 	"testing"
 
+	"saltcast/core/recipe/demo"
 	"saltcast/web/api"
 )
 
@@ -34,14 +33,14 @@ type apiCase struct {
 	allow string // the Allow header of a 405 or OPTIONS answer
 }
 
-// testdataFile reads a file of the repository's shared testdata (invented demo recipes).
+// testdataFile returns one of the invented demo recipes of core/recipe/demo by file name.
 func testdataFile(t testing.TB, name string) []byte {
 	t.Helper()
-	b, err := os.ReadFile(filepath.Join("..", "..", "testdata", name))
-	if err != nil {
-		t.Fatal(err)
+	d, ok := demo.Lookup(name)
+	if !ok {
+		t.Fatalf("no demo recipe %s in core/recipe/demo", name)
 	}
-	return b
+	return d.JSON
 }
 
 func plan(body []byte) func() ([]byte, error) {

@@ -1,6 +1,9 @@
+//go:build workerd && bench
+
 package main
 
-// Performance figures of the worker under workerd, printed by `make bench` (SALTCAST_BENCH=1).
+// Performance figures of the worker under workerd, printed by `make bench` (built
+// only with the workerd and bench tags).
 // They are measurements, not pass/fail timings: the aims (cold start ≤ 400 ms, p50 ≤ 3 ms)
 // are printed beside them. The only limit that fails is the paid plan's size limit, since
 // over it the worker cannot be deployed at all.
@@ -30,9 +33,6 @@ const (
 )
 
 func TestFigures(t *testing.T) {
-	if os.Getenv("SALTCAST_BENCH") != "1" {
-		t.Skip("set SALTCAST_BENCH=1 (make bench) to measure")
-	}
 	bin := needBuild(t)
 	recipe := testdataFile(t, "demo-kno3-stock.json")
 	post := func(base string) (int, error) {

@@ -1,3 +1,5 @@
+//go:build workerd
+
 package main
 
 import (

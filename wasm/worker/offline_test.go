@@ -1,3 +1,5 @@
+//go:build workerd && browser
+
 package main
 
 import (
@@ -19,7 +21,7 @@ import (
 	"github.com/chromedp/chromedp"
 )
 
-// The installable copy (issue 7): the worker serves a service worker, a manifest and icons;
+// The installable copy: the worker serves a service worker, a manifest and icons;
 // a browser that visited once opens the app with no network and computes; a new version
 // waits until the user agrees, and the recipes survive it.
 
@@ -82,16 +84,12 @@ func TestWorkerdServesInstallFiles(t *testing.T) {
 	}
 }
 
-// offlineBrowser starts headless chromium with a profile of its own; skips (or fails when
-// required) without chromium.
+// offlineBrowser starts headless chromium with a profile of its own; fails without chromium.
 func offlineBrowser(t *testing.T) context.Context {
 	t.Helper()
 	exe, err := exec.LookPath("chromium")
 	if err != nil {
-		if os.Getenv("SALTCAST_REQUIRE_BROWSER") == "1" {
-			t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh")
-		}
-		t.Skip("chromium is not installed; run `make test`")
+		t.Fatal("chromium is not installed; run bash web/scripts/deps-chromium.sh (or `make test`)")
 	}
 	opts := append(chromedp.DefaultExecAllocatorOptions[:],
 		chromedp.ExecPath(exe),

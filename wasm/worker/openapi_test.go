@@ -170,3 +170,37 @@ func resultKeys(t *testing.T, call func([]byte) ([]byte, error), body string) []
 	slices.Sort(keys)
 	return keys
 }
+
+// The Compound schema lists exactly the keys of every compound in /api/v1/compounds, so a
+// key added to the library's JSON (such as toxic) must be described.
+func TestOpenAPICompoundKeys(t *testing.T) {
+	doc := readOpenAPI(t)
+	var described []string
+	for k := range doc.Components.Schemas["Compound"].Properties {
+		described = append(described, k)
+	}
+	slices.Sort(described)
+	var list struct {
+		Compounds []map[string]any `json:"compounds"`
+	}
+	if err := json.Unmarshal(api.Compounds(), &list); err != nil || len(list.Compounds) == 0 {
+		t.Fatalf("api.Compounds(): %d compounds, %v", len(list.Compounds), err)
+	}
+	toxic := 0
+	for _, c := range list.Compounds {
+		var keys []string
+		for k := range c {
+			keys = append(keys, k)
+		}
+		slices.Sort(keys)
+		if !slices.Equal(keys, described) {
+			t.Fatalf("compound %v has keys %v, openapi.json's Compound lists %v", c["id"], keys, described)
+		}
+		if c["toxic"] == true {
+			toxic++
+		}
+	}
+	if toxic == 0 {
+		t.Errorf("no compound of the library is flagged toxic in the JSON (K2Cr2O7 is, on its SDS)")
+	}
+}

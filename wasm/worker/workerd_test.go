@@ -1,3 +1,5 @@
+//go:build workerd
+
 package main
 
 import (
@@ -18,12 +20,13 @@ import (
 	"time"
 
 	"saltcast/web/api"
+	"saltcast/web/policy"
 )
 
 // These tests run the built worker (build/worker, from `make worker`) under workerd (from
 // `make test-deps`, the pinned npm package) on a loopback port, and talk to it over HTTP.
-// Without those two they skip, unless SALTCAST_REQUIRE_WORKERD=1 (set by `make test`),
-// when a missing piece is a failure.
+// They are built only with the workerd tag (`make test` sets it); with the tag, a missing
+// build or workerd is a failure, never a skip.
 
 // labOrigin is the origin the shared test server allows for CORS (invented).
 const labOrigin = "https://records.lab.example"
@@ -37,17 +40,12 @@ func repoPath(parts ...string) string {
 	return filepath.Join(append([]string{"..", ".."}, parts...)...)
 }
 
-// needBuild returns the workerd binary, or skips (fails when required) if it or the built
-// worker is missing.
+// needBuild returns the workerd binary, or fails if it or the built worker is missing.
 func needBuild(t testing.TB) string {
 	t.Helper()
 	missing := func(what string) {
 		t.Helper()
-		msg := what + "; run `make test-deps worker` (or `make test`) first"
-		if os.Getenv("SALTCAST_REQUIRE_WORKERD") == "1" {
-			t.Fatal(msg)
-		}
-		t.Skip(msg)
+		t.Fatal(what + "; run `make test-deps worker` (or `make test`) first")
 	}
 	for _, f := range bundleFiles {
 		if _, err := os.Stat(repoPath("build", "worker", f)); err != nil {
@@ -196,7 +194,7 @@ var (
 	shared     *workerdServer
 )
 
-// sharedWorkerd returns the package's workerd server (CORS allowed for labOrigin), or skips.
+// sharedWorkerd returns the package's workerd server (CORS allowed for labOrigin).
 func sharedWorkerd(t testing.TB) *workerdServer {
 	t.Helper()
 	bin := needBuild(t)
@@ -260,7 +258,7 @@ func TestWorkerdPage(t *testing.T) {
 	if csp, want := h.Get("Content-Security-Policy"), pageCSP(page); csp != want {
 		t.Errorf("GET / Content-Security-Policy\n got %q\nwant %q", csp, want)
 	}
-	if n := len(inlineScripts(page)); bytes.Contains(page, []byte("saltcast-wasm")) && n < 2 {
+	if n := len(policy.InlineScripts(string(page))); bytes.Contains(page, []byte("saltcast-wasm")) && n < 2 {
 		t.Errorf("the built page has %d inline scripts; the CSP would block the app", n)
 	}
 }

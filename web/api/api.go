@@ -51,8 +51,8 @@ func Prep(body []byte) ([]byte, error) {
 	return res.Encode(), nil
 }
 
-// sig is the number of significant digits of the numbers in answers.
-const sig = 6
+// sig is the number of significant digits of every number in an answer, the plan's rule.
+const sig = recipe.Digits
 
 // Solubility answers the solubility of a library compound at one temperature.
 //
@@ -175,6 +175,7 @@ func encodeCompounds() []byte {
 		e.Key("valid_from_C").Round(lo, sig)
 		e.Key("valid_to_C").Round(hi, sig)
 		e.Key("oxidizer").Bool(c.Oxidizer)
+		e.Key("toxic").Bool(c.Toxic)
 		e.Key("organic").Bool(c.Organic)
 		e.Key("hazard").String(c.Hazard)
 		strList(&e, "notes", c.Notes)
@@ -201,7 +202,7 @@ func strList(e *wire.Encoder, key string, l []string) {
 func knownKeys(p Params, keys ...string) error {
 	for _, k := range slices.Sorted(maps.Keys(p)) {
 		if !slices.Contains(keys, k) {
-			return &unit.FieldError{Field: k, Value: p[k], Allowed: "one of the keys " + strings.Join(keys, ", ")}
+			return &unit.FieldError{Field: k, Value: p[k], Allowed: unit.KeysAllowed(keys)}
 		}
 	}
 	return nil

@@ -21,7 +21,7 @@ func decode(t *testing.T, b []byte) wire.Value {
 
 // Solubility against published values. g/100 g water from the CRC Handbook, 98th ed.
 // (2017), "Aqueous Solubility of Inorganic Compounds at Various Temperatures", mass %
-// converted (reference notes §1a); mass % is the CRC figure itself.
+// converted by r = 100·w/(100 − w) (derived); mass % is the CRC figure itself.
 func TestSolubility(t *testing.T) {
 	tests := []struct {
 		solute, temp string
@@ -56,7 +56,8 @@ func TestSolubility(t *testing.T) {
 
 // Molality of saturated NaCl at 20 °C: 35.89 g/100 g (CRC 98th) → 358.9/58.44 = 6.141
 // mol/kg. Molarity: CRC 102nd ed. "Concentrative Properties" gives 5.326 mol/L at 26 mass %
-// (ρ 1.1972 g/cm³, reference notes §6b); saturated (26.41 %) is a little more, ≈5.42.
+// (ρ 1.1972 g/cm³; data of Wolf 1966 and Söhnel & Novotný 1985); saturated (26.41 %) is a
+// little more, ≈5.42.
 func TestSolubilityUnits(t *testing.T) {
 	v := decode(t, must(Solubility(Params{"solute": "NaCl", "temp_C": "20"})))
 	m, _ := v.Get("molality_mol_per_kg")

@@ -52,8 +52,11 @@ func TestBadInputs(t *testing.T) {
 // call sends the case to web/api the way the worker does.
 func call(t *testing.T, c badinput.Case) ([]byte, error) {
 	t.Helper()
-	if c.Route == badinput.RoutePlan {
+	switch c.Route {
+	case badinput.RoutePlan:
 		return api.Plan([]byte(c.Input))
+	case badinput.RoutePrep:
+		return api.Prep([]byte(c.Input))
 	}
 	p, err := c.Params()
 	if err != nil {

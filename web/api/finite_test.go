@@ -202,13 +202,17 @@ func checkNotes(t *testing.T, i int, r recipe.Recipe, res recipe.Result) {
 	if hottest > 100 && !has(res.Warnings, "boil") {
 		fail("the batch goes to %v °C but no warning mentions boiling: %q", hottest, res.Warnings)
 	}
-	if hottest > 50 && !has(res.Cautions, "Hot liquid") {
-		fail("the batch reaches %v °C but no hot-liquid caution: %q", hottest, res.Cautions)
+	if hottest > 50 && !res.HasCaution(balance.CautionHot) {
+		fail("the batch reaches %v °C but no hot-liquid caution: %q", hottest, res.CautionKinds)
 	}
-	if res.Compound.Oxidizer && !has(res.Cautions, "oxidizer") {
-		fail("%s is an oxidizer but no caution says so: %q", res.SoluteID, res.Cautions)
+	if res.Compound.Oxidizer && !res.HasCaution(balance.CautionOxidizer) {
+		fail("%s is an oxidizer but no caution says so: %q", res.SoluteID, res.CautionKinds)
 	}
-	if !has(res.Cautions, "SDS") {
+	if res.Compound.Toxic != res.HasCaution(balance.CautionToxic) || res.Compound.Toxic && res.CautionKinds[0] != balance.CautionToxic {
+		fail("%s toxic %v, caution kinds %q: a toxic compound's plan opens with the toxic caution, no other has one",
+			res.SoluteID, res.Compound.Toxic, res.CautionKinds)
+	}
+	if !res.PointsToSDS() || !has(res.Cautions, "SDS") {
 		fail("no caution points to the SDS: %q", res.Cautions)
 	}
 	if res.HasTarget {

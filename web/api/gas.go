@@ -2,7 +2,6 @@ package api
 
 import (
 	"errors"
-	"math"
 	"strconv"
 	"strings"
 
@@ -29,7 +28,7 @@ func Gas(p Params) ([]byte, error) {
 }
 
 func gasQuery(p Params) ([]byte, error) {
-	if err := gasKnownKeys(p, "gas", "temp_C", "salinity", "pressure_kPa", "pressure", "pressure_unit",
+	if err := knownKeys(p, "gas", "temp_C", "salinity", "pressure_kPa", "pressure", "pressure_unit",
 		"altitude_m", "method", "co2_ppm", "measured_mg_per_L"); err != nil {
 		return nil, err
 	}
@@ -111,11 +110,11 @@ func gasQuery(p Params) ([]byte, error) {
 	var e wire.Encoder
 	e.BeginObject()
 	e.Key("gas").String(g.ID)
-	e.Key("temp_C").Float(tempC)
-	e.Key("salinity").Float(salinity)
-	e.Key("pressure_kPa").Float(gasRound(kPa, 4))
-	e.Key("saturation_mg_per_L").Float(gasRound(mgPerL, 3))
-	e.Key("saturation_umol_per_kg").Float(gasRound(umolPerKg, 3))
+	e.Key("temp_C").Round(tempC, sig)
+	e.Key("salinity").Round(salinity, sig)
+	e.Key("pressure_kPa").Round(kPa, sig)
+	e.Key("saturation_mg_per_L").Round(mgPerL, sig)
+	e.Key("saturation_umol_per_kg").Round(umolPerKg, sig)
 	e.Key("method").String(method)
 	e.Key("source").String(source)
 	gasStrings(&e, "warnings", warnings)
@@ -127,17 +126,17 @@ func gasQuery(p Params) ([]byte, error) {
 		if measured < 0 || measured > gas.MeasuredMaxMgPerL {
 			return nil, unit.NumberError("measured_mg_per_L", measured, "a measured concentration from 0 to 100 mg/L")
 		}
-		e.Key("measured_mg_per_L").Float(measured)
-		e.Key("percent_saturation").Float(gasRound(100*measured/mgPerL, 1))
+		e.Key("measured_mg_per_L").Round(measured, sig)
+		e.Key("percent_saturation").Round(100*measured/mgPerL, sig)
 	}
 	if second != nil {
 		e.Key("second_method").String(second.Method)
-		e.Key("second_saturation_mg_per_L").Float(gasRound(second.MgPerL, 3))
-		e.Key("second_saturation_umol_per_kg").Float(gasRound(second.UmolPerKg, 3))
-		e.Key("difference_mg_per_L").Float(gasRound(second.MgPerL-mgPerL, 3))
+		e.Key("second_saturation_mg_per_L").Round(second.MgPerL, sig)
+		e.Key("second_saturation_umol_per_kg").Round(second.UmolPerKg, sig)
+		e.Key("difference_mg_per_L").Round(second.MgPerL-mgPerL, sig)
 	}
 	if g.ID == "CO2" {
-		e.Key("co2_ppm").Float(co2PPM)
+		e.Key("co2_ppm").Round(co2PPM, sig)
 	}
 	e.Key("pressure_from").String(pressureFrom)
 	if tempC >= 50 {
@@ -165,7 +164,7 @@ func gasOutgasQuery(p Params) ([]byte, error) {
 				"(no sourced salting-out coefficients here); for a salt solution the fresh-water result is an upper estimate"}
 		}
 	}
-	if err := gasKnownKeys(p, "from_C", "to_C", "pressure_kPa", "pressure", "pressure_unit", "altitude_m",
+	if err := knownKeys(p, "from_C", "to_C", "pressure_kPa", "pressure", "pressure_unit", "altitude_m",
 		"heat_pressure_kPa", "co2_ppm"); err != nil {
 		return nil, err
 	}
@@ -202,27 +201,27 @@ func gasOutgasQuery(p Params) ([]byte, error) {
 
 	var e wire.Encoder
 	e.BeginObject()
-	e.Key("from_C").Float(fromC)
-	e.Key("to_C").Float(toC)
-	e.Key("pressure_kPa").Float(gasRound(kPa, 4))
-	e.Key("heat_pressure_kPa").Float(gasRound(heatKPa, 4))
-	e.Key("co2_ppm").Float(co2PPM)
+	e.Key("from_C").Round(fromC, sig)
+	e.Key("to_C").Round(toC, sig)
+	e.Key("pressure_kPa").Round(kPa, sig)
+	e.Key("heat_pressure_kPa").Round(heatKPa, sig)
+	e.Key("co2_ppm").Round(co2PPM, sig)
 	e.Key("gases").BeginArray()
 	for _, r := range o.Gases {
 		e.BeginObject()
 		e.Key("gas").String(r.Gas.ID)
-		e.Key("dissolved_umol_per_L").Float(gasRound(r.DissolvedUmolPerL, 4))
-		e.Key("remaining_umol_per_L").Float(gasRound(r.RemainingUmolPerL, 4))
-		e.Key("released_umol_per_L").Float(gasRound(r.ReleasedUmolPerL, 4))
-		e.Key("released_mL_per_L").Float(gasRound(r.ReleasedMLPerL, 4))
-		e.Key("released_mL_STP_per_L").Float(gasRound(r.ReleasedMLSTPPerL, 4))
+		e.Key("dissolved_umol_per_L").Round(r.DissolvedUmolPerL, sig)
+		e.Key("remaining_umol_per_L").Round(r.RemainingUmolPerL, sig)
+		e.Key("released_umol_per_L").Round(r.ReleasedUmolPerL, sig)
+		e.Key("released_mL_per_L").Round(r.ReleasedMLPerL, sig)
+		e.Key("released_mL_STP_per_L").Round(r.ReleasedMLSTPPerL, sig)
 		e.EndObject()
 	}
 	e.EndArray()
-	e.Key("total_released_mL_per_L").Float(gasRound(o.TotalMLPerL, 4))
-	e.Key("total_released_mL_STP_per_L").Float(gasRound(o.TotalMLSTPPerL, 4))
+	e.Key("total_released_mL_per_L").Round(o.TotalMLPerL, sig)
+	e.Key("total_released_mL_STP_per_L").Round(o.TotalMLSTPPerL, sig)
 	if o.BubbleFound {
-		e.Key("bubble_temp_C").Float(gasRound(o.BubbleTempC, 2))
+		e.Key("bubble_temp_C").Round(o.BubbleTempC, sig)
 	} else {
 		e.Key("bubble_temp_C").Null()
 	}
@@ -252,7 +251,7 @@ func GasTable(p Params) ([]byte, error) {
 }
 
 func gasTableQuery(p Params) ([]byte, error) {
-	if err := gasKnownKeys(p, "temp_from_C", "temp_to_C", "temp_step_C", "columns", "values",
+	if err := knownKeys(p, "temp_from_C", "temp_to_C", "temp_step_C", "columns", "values",
 		"salinity", "pressure_kPa", "method"); err != nil {
 		return nil, err
 	}
@@ -316,21 +315,21 @@ func gasTableQuery(p Params) ([]byte, error) {
 	e.Key("column_kind").String(kind)
 	e.Key("columns").BeginArray()
 	for _, c := range cols {
-		e.Float(c)
+		e.Round(c, sig)
 	}
 	e.EndArray()
 	if kind == gas.ColumnsPressure {
-		e.Key("salinity").Float(fixed)
+		e.Key("salinity").Round(fixed, sig)
 	} else {
-		e.Key("pressure_kPa").Float(fixed)
+		e.Key("pressure_kPa").Round(fixed, sig)
 	}
 	e.Key("rows").BeginArray()
 	for i, tc := range t.TempsC {
 		e.BeginObject()
-		e.Key("temp_C").Float(tc)
+		e.Key("temp_C").Round(tc, sig)
 		e.Key("saturation_mg_per_L").BeginArray()
 		for _, v := range t.MgPerL[i] {
-			e.Float(gasRound(v, 2))
+			e.Round(v, sig)
 		}
 		e.EndArray()
 		e.EndObject()
@@ -341,28 +340,6 @@ func gasTableQuery(p Params) ([]byte, error) {
 	gasStrings(&e, "warnings", t.Warnings)
 	e.EndObject()
 	return e.Bytes()
-}
-
-// gasKnownKeys refuses any key not in allowed, naming it (the first in sorted order, so the
-// message does not depend on map order).
-func gasKnownKeys(p Params, allowed ...string) error {
-	first, found := "", false
-	for k := range p {
-		known := false
-		for _, a := range allowed {
-			if k == a {
-				known = true
-				break
-			}
-		}
-		if !known && (!found || k < first) {
-			first, found = k, true
-		}
-	}
-	if !found {
-		return nil
-	}
-	return &unit.FieldError{Field: first, Value: p[first], Allowed: "no such key; known keys: " + strings.Join(allowed, ", ")}
 }
 
 func gasString(p Params, key, def string) string {
@@ -470,16 +447,6 @@ func gasList(field, s string) ([]float64, error) {
 		out = append(out, v)
 	}
 	return out, nil
-}
-
-// gasRound rounds to dec decimals for display; non-finite values pass through so the encoder
-// refuses them.
-func gasRound(v float64, dec int) float64 {
-	if math.IsNaN(v) || math.IsInf(v, 0) {
-		return v
-	}
-	p := math.Pow(10, float64(dec))
-	return math.Round(v*p) / p
 }
 
 func gasStrings(e *wire.Encoder, key string, list []string) {

@@ -44,7 +44,8 @@ func TestGasKeysInOrder(t *testing.T) {
 			t.Errorf("key %d = %q, want %q (%s)", i, v.Members[i].Key, k, b)
 		}
 	}
-	// Benson & Krause at 20 °C, S 0, 1 atm: 9.092 mg/L (SM 4500-O table; reference notes §4a).
+	// Benson & Krause at 20 °C, S 0, 1 atm: 9.092 mg/L (Benson & Krause 1984 equation, derived;
+	// the Standard Methods 4500-O table prints the same, from memory).
 	if got := num(t, v, "saturation_mg_per_L"); math.Abs(got-9.092) > 0.0015 {
 		t.Errorf("saturation_mg_per_L = %v, want 9.092", got)
 	}
@@ -85,7 +86,8 @@ func TestGasPressureForms(t *testing.T) {
 	} {
 		b, err := Gas(p)
 		v := decodeGas(t, b, err)
-		// 8.263 mg/L at 25 °C (SM 4500-O table; reference notes §4a).
+		// 8.263 mg/L at 25 °C (Benson & Krause 1984 equation, derived; Standard Methods 4500-O
+		// table, from memory).
 		if got := num(t, v, "saturation_mg_per_L"); math.Abs(got-8.263) > 0.0015 {
 			t.Errorf("%v: saturation_mg_per_L = %v, want 8.263", p, got)
 		}
@@ -208,7 +210,8 @@ func TestGasTableService(t *testing.T) {
 	if len(rows.Items) != 4 {
 		t.Fatalf("rows: %s", b)
 	}
-	// 20 °C row, 80 kPa column: 7.135 mg/L (reference notes §4a reduced-pressure table), 2 decimals.
+	// 20 °C row, 80 kPa column: 7.135 mg/L (derived: Benson & Krause 1984 with the Standard
+	// Methods 4500-O pressure correction), 2 decimals.
 	cells, _ := rows.Items[2].Get("saturation_mg_per_L")
 	if got := cells.Items[2].Num; math.Abs(got-7.135) > 0.006 {
 		t.Errorf("table[20 °C][80 kPa] = %v, want 7.14", got)

@@ -25,6 +25,7 @@ const (
 // Routes: where a case's input goes.
 const (
 	RoutePlan       = "plan"
+	RoutePrep       = "prep"
 	RouteSolubility = "solubility"
 	RouteGas        = "gas"
 	RouteOutgas     = "outgas"
@@ -51,6 +52,8 @@ func (c Case) Path() string {
 	switch c.Route {
 	case RoutePlan:
 		return "/api/v1/plan"
+	case RoutePrep:
+		return "/api/v1/prep"
 	case RouteSolubility:
 		return "/api/v1/solubility"
 	case RouteGas:
@@ -164,6 +167,11 @@ func expand(route, in string) (string, error) {
 	case RouteParse:
 		if strings.HasPrefix(in, `"`) {
 			return strconv.Unquote(in)
+		}
+		return in, nil
+	case RoutePrep:
+		if in == "@empty" {
+			return "", nil
 		}
 		return in, nil
 	case RoutePlan:

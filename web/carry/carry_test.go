@@ -5,8 +5,8 @@ import (
 	"errors"
 	hashcrc "hash/crc32"
 	"math/rand/v2"
-	"os"
 	"saltcast/core/recipe"
+	"saltcast/core/recipe/demo"
 	"strconv"
 	"strings"
 	"testing"
@@ -37,19 +37,15 @@ const testPage = `<!doctype html>
 var pageNoBlock = strings.Replace(testPage,
 	"<script type=\"application/x-saltcast-recipes\" id=\"saltcast-carried\"></script>\n", "", 1)
 
-// demoRecipes reads the invented demo recipes kept in testdata/ and adds one whose name is
+// demoRecipes reads the invented demo recipes (core/recipe/demo) and adds one whose name is
 // markup, as a hostile or careless sender might type it.
 func demoRecipes(t testing.TB) []recipe.Recipe {
 	t.Helper()
 	var rs []recipe.Recipe
-	for _, f := range []string{"../../testdata/demo-kno3-stock.json", "../../testdata/demo-cuso4-crystals.json"} {
-		b, err := os.ReadFile(f)
+	for _, d := range demo.All {
+		r, err := demo.Recipe(d.Key)
 		if err != nil {
-			t.Fatal(err)
-		}
-		r, err := recipe.Decode(b)
-		if err != nil {
-			t.Fatalf("%s: %v", f, err)
+			t.Fatalf("%s: %v", d.File, err)
 		}
 		rs = append(rs, r)
 	}

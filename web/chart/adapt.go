@@ -99,12 +99,30 @@ func PlanView(r *balance.Result, o Options) (SolubilityView, error) {
 	return v, nil
 }
 
-// BatchFromPlan reads the batch's route from the planner's labelled path
-// points ("dissolve", "onset", "nucleation", "seed", "adiabatic end",
-// "end"), or from the result's fields when the path is empty. Crystals
-// start at the seed point if there is one, else at the expected nucleation,
-// else at saturation; with no onset at all the path runs straight to the
-// end.
+// PathPoint returns the point of kind k on r's path (the last one, if the path had two),
+// or nil. Every reader of the planner's path matches points here, by kind, never by label.
+func PathPoint(r *balance.Result, k balance.PathKind) *Point {
+	var out *Point
+	for _, p := range r.Path {
+		if p.Kind == k {
+			out = &Point{p.TempC, p.G100}
+		}
+	}
+	return out
+}
+
+// BatchFromPlan reads the batch's route from the planner's path points, or from the
+// result's fields when the path is empty. It is the one adapter from a plan to the chart's
+// route: the app's batch screen and its printed sheet draw through it. Path points are
+// matched by kind (PathPoint), never by label.
+//
+// Where crystals start (Onset) follows the physics of a cooled (or, for a retrograde solute,
+// heated) batch: at the seed point for a seeded batch, since seed crystals give the solid
+// something to grow on at once; otherwise at the expected nucleation temperature, when a
+// metastable width is known and the path reaches it; otherwise at the saturation (onset)
+// temperature, where the solution first becomes supersaturated. A batch that ends with no
+// crystals (no target, or a target short of saturation) has no Onset: its path runs straight
+// from Dissolve to End, with the saturation point still marked if there is one.
 func BatchFromPlan(r *balance.Result) *Batch {
 	b := &Batch{
 		Dissolve: Point{r.DissolveTempC, r.ConcentrationG100},
@@ -113,46 +131,41 @@ func BatchFromPlan(r *balance.Result) *Batch {
 	hasEnd := false
 	var nucleation *Point
 	if len(r.Path) > 0 {
-		for _, p := range r.Path {
-			q := &Point{p.TempC, p.G100}
-			switch p.Label {
-			case "dissolve":
-				b.Dissolve = *q
-			case "onset":
-				b.Saturation = q
-			case "nucleation":
-				nucleation = q
-			case "seed":
-				b.Seed = q
-			case "adiabatic end":
-				b.Settled = q
-			case "end":
-				b.End, hasEnd = *q, true
-			}
+		if p := PathPoint(r, balance.PathDissolve); p != nil {
+			b.Dissolve = *p
+		}
+		b.Saturation = PathPoint(r, balance.PathOnset)
+		nucleation = PathPoint(r, balance.PathNucleation)
+		b.Seed = PathPoint(r, balance.PathSeed)
+		b.Settled = PathPoint(r, balance.PathAdiabaticEnd)
+		if p := PathPoint(r, balance.PathEnd); p != nil {
+			b.End, hasEnd = *p, true
 		}
 	} else {
 		c := r.ConcentrationG100
 		if r.HasOnset {
 			b.Saturation = &Point{r.SaturationTempC, c}
-			if r.HasMetastable {
+			if r.HasMetastable && (!r.HasTarget || r.NucleationC >= r.TargetC) {
 				nucleation = &Point{r.NucleationC, c}
 			}
 		}
 		if r.HasAdiabatic {
 			b.Seed = &Point{r.SeedAtC, c}
+			b.Settled = &Point{r.AdiabaticEndC, r.AdiabaticG100}
 		}
 	}
 	if !hasEnd && r.HasTarget {
 		b.End = Point{r.TargetC, r.LiquorG100}
 	}
-	switch {
-	case !r.HasOnset:
+	if !r.HasOnset {
 		b.Saturation = nil
+	}
+	switch {
 	case b.Seed != nil:
 		b.Onset = b.Seed
-	case nucleation != nil:
+	case nucleation != nil && r.HasTarget && r.CrystalsG > 0:
 		b.Onset = nucleation
-	default:
+	case b.Saturation != nil && r.HasTarget && r.CrystalsG > 0:
 		b.Onset = b.Saturation
 	}
 	if b.Onset == nil {

@@ -23,8 +23,9 @@ func lookup(t *testing.T, name string) *compound.Compound {
 }
 
 // crcTol covers the library's table interpolation and the spread between
-// sources at the tabulated temperatures (3 %, as the reference notes give
-// for KNO3 and Na2SO4).
+// sources at the tabulated temperatures: CRC 98th ed. and the Perry's/Seidell
+// values of Wikipedia's "Solubility table" differ by up to 3 % for KNO3 and
+// Na2SO4 away from the transition (derived: from the two tables).
 const crcTol = 0.03
 
 func TestPhasesFromCompound(t *testing.T) {
@@ -80,6 +81,7 @@ func plan(t *testing.T) *balance.Result {
 		DissolveTempC: 35, ConcentrationG100: 50,
 		HasOnset: true, SaturationTempC: 32.6,
 		HasTarget: true, TargetC: 4, LiquorG100: 16.3,
+		CrystalsG:     33.7, // (derived: 50 − 16.3 g per 100 g water, anhydrous solid)
 		HasMetastable: true, MetastableWidthK: 5, NucleationC: 27.6,
 	}
 }
@@ -92,18 +94,20 @@ func TestBatchFromPlan(t *testing.T) {
 		b.End != (Point{4, 16.3}) || b.Seed != nil || b.Settled != nil {
 		t.Errorf("BatchFromPlan(fields) = %+v", b)
 	}
-	// From labelled path points, seeded: crystals start at the seed.
+	// From path points, seeded: crystals start at the seed. Points are matched by kind;
+	// the labels are for readers and may say anything.
 	r.Path = []balance.PathPoint{
-		{Label: "dissolve", TempC: 35, G100: 50},
-		{Label: "onset", TempC: 32.6, G100: 50},
-		{Label: "seed", TempC: 31, G100: 50},
-		{Label: "adiabatic end", TempC: 31.8, G100: 48.6},
-		{Label: "nucleation", TempC: 27.6, G100: 50},
-		{Label: "end", TempC: 4, G100: 16.3},
-		{Label: "something new", TempC: 99, G100: 99}, // ignored
+		{Kind: balance.PathDissolve, Label: "end", TempC: 35, G100: 50},
+		{Kind: balance.PathOnset, Label: "seed", TempC: 32.6, G100: 50},
+		{Kind: balance.PathSeed, Label: "onset", TempC: 31, G100: 50},
+		{Kind: balance.PathAdiabaticEnd, Label: "insulated, reworded", TempC: 31.8, G100: 48.6},
+		{Kind: balance.PathNucleation, Label: "nucleation", TempC: 27.6, G100: 50},
+		{Kind: balance.PathEnd, Label: "dissolve", TempC: 4, G100: 16.3},
+		{Kind: "something new", Label: "end", TempC: 99, G100: 99}, // ignored
 	}
 	b = BatchFromPlan(r)
-	if *b.Onset != (Point{31, 50}) || *b.Seed != (Point{31, 50}) || *b.Settled != (Point{31.8, 48.6}) {
+	if b.Dissolve != (Point{35, 50}) || b.End != (Point{4, 16.3}) || *b.Saturation != (Point{32.6, 50}) ||
+		*b.Onset != (Point{31, 50}) || *b.Seed != (Point{31, 50}) || *b.Settled != (Point{31.8, 48.6}) {
 		t.Errorf("BatchFromPlan(seeded path) = %+v", b)
 	}
 	// No onset: the batch stays clear, the path runs straight.
@@ -113,6 +117,33 @@ func TestBatchFromPlan(t *testing.T) {
 	if b.Onset != nil || b.Saturation != nil || b.End != (Point{33, 50}) {
 		t.Errorf("BatchFromPlan(no onset) = %+v", b)
 	}
+	// Stored at 33 °C, above its saturation at 32.6 °C: no crystals, so none start, though
+	// the saturation point is still marked.
+	r = plan(t)
+	r.TargetC, r.LiquorG100, r.CrystalsG = 33, 50, 0
+	r.Path = []balance.PathPoint{
+		{Kind: balance.PathDissolve, Label: "dissolve", TempC: 35, G100: 50},
+		{Kind: balance.PathOnset, Label: "onset", TempC: 32.6, G100: 50},
+		{Kind: balance.PathEnd, Label: "end", TempC: 33, G100: 50},
+	}
+	if b = BatchFromPlan(r); b.Onset != nil || b.Saturation == nil || b.End != (Point{33, 50}) {
+		t.Errorf("BatchFromPlan(target above saturation) = %+v, want no onset", b)
+	}
+	// Unseeded, with a metastable zone the path does not reach (target 30 °C, nucleation
+	// expected at 27.6 °C): at equilibrium the crystals start at saturation.
+	r.TargetC, r.LiquorG100, r.CrystalsG = 30, 45.6, 4.4 // (invented)
+	r.Path[2] = balance.PathPoint{Kind: balance.PathEnd, Label: "end", TempC: 30, G100: 45.6}
+	if b = BatchFromPlan(r); b.Onset == nil || *b.Onset != (Point{32.6, 50}) {
+		t.Errorf("BatchFromPlan(short of nucleation) onset = %v, want saturation at 32.6 °C", b.Onset)
+	}
+	// No target: dissolved only, nothing crystallizes.
+	r = plan(t)
+	r.HasTarget, r.CrystalsG = false, 0
+	if b = BatchFromPlan(r); b.Onset != nil || b.End != b.Dissolve {
+		t.Errorf("BatchFromPlan(no target) = %+v, want no onset and the end at the dissolve point", b)
+	}
+	r = plan(t)
+	r.HasOnset, r.TargetC, r.LiquorG100 = false, 33, 50
 	v, err := PlanView(r, Options{})
 	if err != nil {
 		t.Fatal(err)

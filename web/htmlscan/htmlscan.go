@@ -1,6 +1,7 @@
 // Package htmlscan reads the start tags of an HTML page byte by byte, without a parser, to
-// find Saltcast's own elements in a page: the carried-recipes block (web/carry) and the
-// script and style parts the page rebuilds itself from (web/pagecopy).
+// find Saltcast's own elements in a page: the carried-recipes block (web/carry), the
+// script and style parts the page rebuilds itself from (web/pagecopy) and the inline scripts
+// its Content-Security-Policy lists (web/policy).
 //
 // It follows the HTML tokenizer only as far as those callers need: tag names are ASCII
 // letters then digits, attributes are name, optional '=' and a quoted or bare value, and
@@ -28,12 +29,19 @@ func TagName(page string, p int) (string, int) {
 // it, and returns the value of the attribute called name (the first one, as in HTML; "" if
 // absent) and the index after the '>'; -1 if the tag never ends.
 func Attr(page string, p int, name string) (value string, end int) {
+	value, _, end = Lookup(page, p, name)
+	return value, end
+}
+
+// Lookup is Attr that also reports whether the tag has the attribute at all (an empty
+// attribute and a missing one both have the value "").
+func Lookup(page string, p int, name string) (value string, found bool, end int) {
 	seen := false
 	for p < len(page) {
 		c := page[p]
 		switch {
 		case c == '>':
-			return value, p + 1
+			return value, seen, p + 1
 		case IsSpace(c) || c == '/':
 			p++
 			continue
@@ -57,7 +65,7 @@ func Attr(page string, p int, name string) (value string, end int) {
 				q := page[p]
 				end := strings.IndexByte(page[p+1:], q)
 				if end < 0 {
-					return "", -1
+					return "", false, -1
 				}
 				val = page[p+1 : p+1+end]
 				p += end + 2
@@ -73,7 +81,7 @@ func Attr(page string, p int, name string) (value string, end int) {
 			value, seen = val, true
 		}
 	}
-	return "", -1
+	return "", false, -1
 }
 
 // IndexFold finds sub (ASCII, e.g. "</script") in page from p on, ignoring ASCII case;

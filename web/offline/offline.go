@@ -37,6 +37,7 @@ import (
 
 	"saltcast/web"
 	"saltcast/web/icons"
+	"saltcast/web/policy"
 )
 
 //go:embed sw.js
@@ -62,24 +63,15 @@ const headExtra = `<link rel="manifest" href="/manifest.webmanifest">
 <style id="saltcast-install-css">` + installCSS + `</style>
 `
 
-// ServedCSP is the page's Content-Security-Policy when the worker serves it: the file's
-// policy fileCSP with the install script's hash added, and the service worker, the
-// manifest, same-origin requests and same-origin images allowed.
-func ServedCSP(fileCSP string) (string, error) {
-	csp := fileCSP
-	for _, r := range [][2]string{
-		{"script-src ", "script-src " + web.ScriptHash(installJS) + " "},
-		{"connect-src 'none'", "connect-src 'self'"},
-		{"worker-src 'none'", "worker-src 'self'"},
-		{"manifest-src 'none'", "manifest-src 'self'"},
-		{"img-src data:", "img-src 'self' data:"},
-	} {
-		if strings.Count(csp, r[0]) != 1 {
-			return "", errors.New("the file's policy has no " + r[0] + "; update web/offline to the new policy")
-		}
-		csp = strings.Replace(csp, r[0], r[1], 1)
+// ServedCSP is the page's Content-Security-Policy when the worker serves it: policy.Served
+// over the page's own inline scripts and the install script. fileCSP, the policy the page
+// carries, must be policy.File over the same scripts (a page web.Page built).
+func ServedCSP(page []byte, fileCSP string) (string, error) {
+	scripts := policy.InlineScripts(string(page))
+	if policy.File(scripts...) != fileCSP {
+		return "", errors.New("the page's policy is not the file policy of its own scripts; build it with web.Page")
 	}
-	return csp, nil
+	return policy.Served(append(scripts, installJS)...), nil
 }
 
 // Served returns the page as the worker serves it (see the package comment). page must be
@@ -93,7 +85,7 @@ func Served(page []byte) ([]byte, error) {
 	if strings.Contains(fileCSP, "worker-src 'self'") {
 		return nil, errors.New("the page is already the served page")
 	}
-	served, err := ServedCSP(fileCSP)
+	served, err := ServedCSP(page, fileCSP)
 	if err != nil {
 		return nil, err
 	}

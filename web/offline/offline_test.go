@@ -10,6 +10,7 @@ import (
 
 	"saltcast/web"
 	"saltcast/web/icons"
+	"saltcast/web/policy"
 )
 
 // benchPage is the bench app's page around a stand-in module (the module does not matter
@@ -18,11 +19,11 @@ func benchPage(t *testing.T) []byte {
 	t.Helper()
 	out, err := exec.Command("go", "env", "GOROOT").Output()
 	if err != nil {
-		t.Skip("go env GOROOT: ", err)
+		t.Fatal("go env GOROOT: ", err)
 	}
 	wasmExec, err := os.ReadFile(filepath.Join(strings.TrimSpace(string(out)), "lib", "wasm", "wasm_exec.js"))
 	if err != nil {
-		t.Skip(err)
+		t.Fatal(err)
 	}
 	p, err := web.Page([]byte("stand-in module"), string(wasmExec), "v1.2-3-gabc")
 	if err != nil {
@@ -41,12 +42,20 @@ func TestServed(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	csp, err := ServedCSP(fileCSP)
+	csp, err := ServedCSP(page, fileCSP)
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !strings.Contains(csp, web.ScriptHash(installJS)) {
+	if !strings.Contains(csp, policy.ScriptHash(installJS)) {
 		t.Error("served CSP lacks the install script's hash")
+	}
+	// Both policies come from web/policy, over the scripts each page holds; the worker's
+	// header is the served page's policy plus policy.HeaderOnly (wasm/worker pageCSP).
+	if want := policy.File(policy.InlineScripts(string(page))...); fileCSP != want {
+		t.Errorf("file CSP %q is not policy.File of its scripts %q", fileCSP, want)
+	}
+	if want := policy.Served(policy.InlineScripts(string(served))...); csp != want {
+		t.Errorf("served CSP %q is not policy.Served of the served page's scripts %q", csp, want)
 	}
 	s := string(served)
 	for _, want := range []string{

@@ -119,7 +119,7 @@ func TestBenchPage(t *testing.T) {
 	root := strings.TrimSpace(run(t, "go", "env", "GOROOT"))
 	wasmExec, err := os.ReadFile(filepath.Join(root, "lib", "wasm", "wasm_exec.js"))
 	if err != nil {
-		t.Skip("no wasm_exec.js: ", err)
+		t.Fatal("no wasm_exec.js: ", err)
 	}
 	p, err := web.Page([]byte("stand-in module"), string(wasmExec), "v-test")
 	if err != nil {
@@ -148,7 +148,7 @@ func TestBenchPage(t *testing.T) {
 func run(t *testing.T, name string, args ...string) string {
 	out, err := exec.Command(name, args...).Output()
 	if err != nil {
-		t.Skip(name, err)
+		t.Fatal(name, err)
 	}
 	return string(out)
 }

@@ -2,11 +2,13 @@
 # Runs every fuzz target in the repository for a short, bounded time (called by `make test`).
 # Targets are found by grep, so a new `func FuzzX(f *testing.F)` in any *_test.go is included
 # without editing this script. Files fenced to js/wasm are skipped (they do not run on the
-# host). FUZZTIME sets the time per target (default 10s), e.g. FUZZTIME=1m bash web/scripts/fuzz-short.sh.
+# host); the browser and workerd tags are set, so a target in a file fenced by them is found
+# and built too (-run '^$' runs no browser or worker test). FUZZTIME sets the time per target (default 10s), e.g. FUZZTIME=1m bash web/scripts/fuzz-short.sh.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 export PATH=/usr/local/go/bin:$PATH
 fuzztime="${FUZZTIME:-10s}"
+tags=browser,workerd
 failed=0
 log="$(mktemp)"
 trap 'rm -f "$log"' EXIT
@@ -22,7 +24,7 @@ while IFS= read -r file; do
 		before=$( (ls "$dir/testdata/fuzz/$target" 2>/dev/null || true) | wc -l)
 		ok=0
 		for try in 1 2; do
-			if go test -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" -fuzzminimizetime 0 "$dir" >"$log" 2>&1; then
+			if go test -tags "$tags" -run '^$' -fuzz "^${target}\$" -fuzztime "$fuzztime" -fuzzminimizetime 0 "$dir" >"$log" 2>&1; then
 				ok=1
 				break
 			fi

@@ -6,15 +6,27 @@ import (
 	"unicode/utf8"
 
 	"saltcast/core/recipe"
+	demos "saltcast/core/recipe/demo"
 	"saltcast/core/unit"
 	"saltcast/web/api"
 )
 
-// demo plans each recipe file and prints it as a plain-text batch sheet. It stops at the
-// first file that fails, with the file named.
+// demo plans each recipe file (without files, the demo recipes of core/recipe/demo) and
+// prints it as a plain-text batch sheet. It stops at the first file that fails, with the
+// file named.
 func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	read := func(name string) ([]byte, error) { return readRecipe(name, stdin) }
+	if len(files) == 0 {
+		for _, d := range demos.All {
+			files = append(files, d.File)
+		}
+		read = func(name string) ([]byte, error) {
+			d, _ := demos.Lookup(name)
+			return d.JSON, nil
+		}
+	}
 	for i, name := range files {
-		data, err := readRecipe(name, stdin)
+		data, err := read(name)
 		if err == nil {
 			var r recipe.Recipe
 			if r, err = recipe.Decode(data); err == nil {
@@ -130,6 +142,9 @@ func Sheet(res recipe.Result) string {
 		}
 		if r.HasIce {
 			s.row("ice", g(r.IceG))
+			if r.HasEutectic {
+				s.row("eutectic", tc(r.EutecticC)+": below it "+r.EutecticPhase+" and ice freeze out together")
+			}
 		}
 		if r.Frozen {
 			s.row("mother liquor", "none: below the eutectic the batch freezes solid")
@@ -165,12 +180,30 @@ func Sheet(res recipe.Result) string {
 	}
 
 	s.section("Heat")
-	s.row("batch heat capacity", n(r.HeatCapacityKJPerK)+" kJ/K ("+r.HeatCapacityModel+")")
+	s.row("batch heat capacity", n(r.HeatCapacityKJPerK)+" kJ/K")
+	s.row("heat-capacity model", r.HeatCapacityModel)
 	if r.HasDissolutionHeat {
-		s.row("dissolving absorbs", n(r.DissolutionHeatKJ)+" kJ (insulated: "+signed(r.DissolutionTempChangeK)+" K)")
+		verb, q := "dissolving absorbs", r.DissolutionHeatKJ
+		if q < 0 {
+			verb, q = "dissolving releases", -q
+		}
+		s.row(verb, n(q)+" kJ (insulated: "+signed(r.DissolutionTempChangeK)+" K; ΔsolH at infinite dilution)")
 	}
 	if r.HasTarget {
-		s.row("crystallization releases", n(r.CrystallizationHeatKJ)+" kJ")
+		if r.HeatBasis != "" && r.CrystalsG > 0 {
+			s.row("heat basis", string(r.HeatBasis))
+			design := n(r.CrystalEnthalpyKJPerMol) + " kJ/mol of " + r.CrystalPhase
+			if r.CrystalEnthalpyLowKJPerMol < r.CrystalEnthalpyKJPerMol {
+				design += " (estimates " + n(r.CrystalEnthalpyLowKJPerMol) + " to " + n(r.CrystalEnthalpyKJPerMol) +
+					" kJ/mol; sized on the safe side, the larger)"
+			}
+			s.row("design value", design)
+		}
+		released := n(r.CrystallizationHeatKJ) + " kJ"
+		if r.HeatBasis != "" && r.CrystalsG > 0 && r.CrystallizationHeatLowKJ < r.CrystallizationHeatKJ {
+			released += " (" + n(r.CrystallizationHeatLowKJ) + " with the lowest estimate)"
+		}
+		s.row("crystallization releases", released)
 		if r.EnthalpyBasis != "" && r.CrystalsG > 0 {
 			s.row("enthalpy used", r.EnthalpyBasis)
 			if r.HasApparent {
@@ -178,6 +211,9 @@ func Sheet(res recipe.Result) string {
 			}
 		}
 		s.row("sensible heat to remove", n(r.SensibleHeatKJ)+" kJ")
+		if r.HasIce && r.IceG > 0 {
+			s.row("ice freezing releases", n(r.IceHeatKJ)+" kJ ("+g(r.IceG)+" of ice)")
+		}
 		duty := n(r.CoolingDutyKJ) + " kJ"
 		if r.HasCoolingPower {
 			duty += ", " + n(r.CoolingPowerW) + " W mean over " + n(r.CoolingTimeMin) + " min"
@@ -186,8 +222,16 @@ func Sheet(res recipe.Result) string {
 	}
 	if r.HasAdiabatic {
 		s.section("Seeded at " + tc(r.SeedAtC) + " in an insulated vessel")
-		s.row("end temperature", tc(r.AdiabaticEndC)+" ("+signed(r.AdiabaticRiseK)+" K)")
-		s.row("crystals at once", g(r.AdiabaticCrystalsG)+" of "+r.AdiabaticPhase)
+		end := tc(r.AdiabaticEndC) + " (" + signed(r.AdiabaticRiseK) + " K)"
+		if r.AdiabaticHeld {
+			end = "held at " + tc(r.AdiabaticEndC) + ", the end of " + r.AdiabaticPhase + "'s range (" + signed(r.AdiabaticRiseK) + " K)"
+		}
+		s.row("end temperature", end)
+		s.row("crystals at once", g(r.AdiabaticCrystalsG)+" of "+r.AdiabaticPhase+" (design heat, "+n(r.AdiabaticEnthalpyKJPerMol)+" kJ/mol)")
+		if r.AdiabaticCrystalsLowG != r.AdiabaticCrystalsG || r.AdiabaticEndLowC != r.AdiabaticEndC {
+			s.row("with the lowest estimate", g(r.AdiabaticCrystalsLowG)+", ends at "+tc(r.AdiabaticEndLowC))
+		}
+		s.row("energy balance", n(r.AdiabaticHeatKJ)+" kJ released = "+n(r.AdiabaticHeatCapacityKJPerK)+" kJ/K × "+n(r.AdiabaticRiseK)+" K")
 	}
 
 	s.section("Cautions")

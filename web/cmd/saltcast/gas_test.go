@@ -65,13 +65,14 @@ func TestGasTableText(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errs)
 	}
-	// 0 °C, 1 atm: 14.621 → 14.62 mg/L (reference notes §4a).
+	// 0 °C, 1 atm: 14.621 → 14.62 mg/L (derived: Benson & Krause 1984 equation).
 	for _, want := range []string{"14.62", "Benson & Krause"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("text table lacks %q:\n%s", want, out)
 		}
 	}
-	// 10 °C, 80 kPa: 8.885 ± 0.01 (reference notes §4a), printed to 2 decimals.
+	// 10 °C, 80 kPa: 8.885 ± 0.01 (derived: Benson & Krause 1984 with the Standard Methods
+	// 4500-O pressure correction), printed to 2 decimals.
 	if !strings.Contains(out, "8.88") && !strings.Contains(out, "8.89") {
 		t.Errorf("text table lacks 8.88 or 8.89 at 10 °C, 80 kPa:\n%s", out)
 	}

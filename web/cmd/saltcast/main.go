@@ -6,7 +6,8 @@
 //	saltcast prep preparation.json     (or -: a solution made up to the mark)
 //	saltcast compounds
 //	saltcast gas --temp-C 20           (see saltcast gas --help)
-//	saltcast demo recipe.json ...      (plans printed as a readable batch sheet)
+//	saltcast demo [recipe.json ...]    (plans printed as a readable batch sheet; the
+//	                                    built-in invented demos without files)
 //
 // Errors go to standard error; the exit status is 2 for a usage or input error and 1 when
 // Saltcast itself fails.
@@ -38,8 +39,9 @@ const usage = `saltcast: crystallization and solubility planning
       the compound library, as JSON
   saltcast gas ...
       dissolved gases (saltcast gas --help)
-  saltcast demo recipe.json ...
-      plans of one or more recipes printed as readable batch sheets
+  saltcast demo [recipe.json ...]
+      plans of one or more recipes printed as readable batch sheets (without files: the
+      invented demo recipes built in)
 
 Numbers accept a decimal comma (12,5). Errors go to standard error with exit status 2.
 Saltcast is a planning aid, not a safety assessment: read the SDS and follow local rules.
@@ -106,9 +108,6 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	case "gas":
 		return runGas(rest, stdout, stderr)
 	case "demo":
-		if len(rest) == 0 {
-			return fail(&unit.FieldError{Field: "arguments", Value: "", Allowed: "one or more recipe files"})
-		}
 		return demo(rest, stdin, stdout, stderr)
 	default:
 		return fail(&unit.FieldError{Field: "command", Value: cmd, Allowed: "solubility, plan, prep, compounds, gas, demo or help"})

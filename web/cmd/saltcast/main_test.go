@@ -41,6 +41,40 @@ func golden(t *testing.T, name, got string) {
 	}
 }
 
+// Batches whose sheets show the heat basis, the insulated batch, ice and the toxic caution.
+const (
+	acetateSeeded = `{"solute":"CH3COONa","water_g":100,"dissolve_temp_C":70,"seed_at_C":20,"cool_to_C":20}`
+	kno3Ice       = `{"solute":"KNO3","water_g":100,"charge_g":5,"dissolve_temp_C":20,"cool_to_C":-2}`
+	dichromate    = `{"solute":"K2Cr2O7","water_g":100,"dissolve_temp_C":60,"saturation_pct":90,"cool_to_C":20}`
+)
+
+// The readable sheet shows what a chemist checks before the batch: the seeded sodium acetate
+// batch holds at 58 °C (the trihydrate's incongruent melting point, 58 °C, Lane, Solar Heat
+// Storage, 1983, from memory) on the heat-of-fusion basis; 5 g KNO3 in 100 g water
+// (4.76 mass %) freezes at −1.43 °C (derived: between the CRC 102nd ed. "Concentrative
+// Properties of Aqueous Solutions" rows 4 % (1.22 K) and 5 % (1.50 K)), so at −2 °C ice forms
+// and its heat is in the duty; K2Cr2O7 opens with the toxic caution.
+func TestSheetHeatAndCold(t *testing.T) {
+	for _, tt := range []struct {
+		stdin string
+		want  []string
+	}{
+		{acetateSeeded, []string{"heat basis                    heat of fusion of the hydrate", "held at 58 °C", "with the lowest estimate", "heat-capacity model"}},
+		{kno3Ice, []string{"freezing point                -1.43 °C", "  ice  ", "ice freezing releases", "eutectic"}},
+		{dichromate, []string{"Cautions\n  - TOXIC: "}},
+	} {
+		out, errOut, code := run(t, tt.stdin, "demo", "-")
+		if code != 0 {
+			t.Fatalf("saltcast demo - <<< %s: exit %d, %s", tt.stdin, code, errOut)
+		}
+		for _, w := range tt.want {
+			if !strings.Contains(out, w) {
+				t.Errorf("saltcast demo - <<< %s: no %q in\n%s", tt.stdin, w, out)
+			}
+		}
+	}
+}
+
 func TestGoldens(t *testing.T) {
 	tests := []struct {
 		golden string
@@ -49,11 +83,15 @@ func TestGoldens(t *testing.T) {
 	}{
 		{"solubility-kno3-20.json", "", []string{"solubility", "--solute", "KNO3", "--temp-C", "20"}},
 		{"solubility-glauber-25.json", "", []string{"solubility", "--solute=Glauber's salt", "--temp-C=25,0"}},
-		{"plan-cuso4.json", "", []string{"plan", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"plan-cuso4.json", "", []string{"plan", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
 		{"plan-stdin.json", `{"solute":"Na2SO4","water_g":100,"dissolve_temp_C":40,"cool_to_C":20}`, []string{"plan", "-"}},
-		{"prep-kcl.json", "", []string{"prep", "../../../testdata/demo-prep-kcl-coldroom.json"}},
+		{"prep-kcl.json", "", []string{"prep", "../../../core/recipe/demo/demo-prep-kcl-coldroom.json"}},
 		{"prep-stdin.json", `{"solute":"CuSO4·5H2O","concentration":0.1,"concentration_unit":"mol/L","final_volume_mL":250}`, []string{"prep", "-"}},
-		{"demo.txt", "", []string{"demo", "../../../testdata/demo-kno3-stock.json", "../../../testdata/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo", "../../../core/recipe/demo/demo-kno3-stock.json", "../../../core/recipe/demo/demo-cuso4-crystals.json"}},
+		{"demo.txt", "", []string{"demo"}}, // the built-in demos are the same files
+		{"demo-acetate-seeded.txt", acetateSeeded, []string{"demo", "-"}},
+		{"demo-kno3-ice.txt", kno3Ice, []string{"demo", "-"}},
+		{"demo-dichromate.txt", dichromate, []string{"demo", "-"}},
 	}
 	for _, tt := range tests {
 		out, errOut, code := run(t, tt.stdin, tt.args...)
@@ -66,7 +104,8 @@ func TestGoldens(t *testing.T) {
 }
 
 // The solubility answer keeps the contract keys and values: KNO3 at 20 °C is 31.93 g per
-// 100 g water (CRC 98th ed., 24.2 mass %, reference notes §1a).
+// 100 g water (CRC 98th ed., "Aqueous Solubility of Inorganic Compounds at Various
+// Temperatures", 24.2 mass %; r = 100·w/(100 − w), derived).
 func TestSolubilityContract(t *testing.T) {
 	out, _, code := run(t, "", "solubility", "--solute", "KNO3", "--temp-C", "20")
 	if code != 0 {
@@ -121,7 +160,6 @@ func TestErrors(t *testing.T) {
 		{[]string{"prep", "-"}, `{"solute":"KCl","concentration":1,"concentration_unit":"mol/L","final_volume_mL":-1}`, 2, "final_volume_mL"},
 		{[]string{"prep", "-"}, `{"solute":"KCl","concentration":1,"concentration_unit":"M","final_volume_mL":100}`, 2, "concentration_unit"},
 		{[]string{"prep", "-"}, `{"solute":"KH2PO4","concentration":1,"concentration_unit":"mol/L","final_mass_g":100}`, 2, "concentration_unit"},
-		{[]string{"demo"}, "", 2, "recipe files"},
 		{[]string{"demo", "-"}, `{"solute":"KNO3","water_g":100,"dissolve_temp_C":20,"cool_to_C":40}`, 2, "cool_to_C"},
 	}
 	for _, tt := range tests {
@@ -149,5 +187,22 @@ func TestHelpAndCompounds(t *testing.T) {
 	list, _ := v.Get("compounds")
 	if len(list.Items) < 60 {
 		t.Errorf("compounds lists %d, want at least the 60 of the library", len(list.Items))
+	}
+}
+
+// An unknown flag is refused in the same words by every subcommand: exit status 2 and
+// `saltcast <command>: bogus: "1" is not allowed; allowed: one of the keys: …`.
+func TestUnknownFlagOneWording(t *testing.T) {
+	for _, args := range [][]string{
+		{"solubility", "--solute", "KNO3", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "--temp-C", "20", "--bogus", "1"},
+		{"gas", "outgas", "--from-C", "20", "--to-C", "80", "--bogus=1"},
+		{"gas", "table", "--bogus", "1"},
+	} {
+		_, errs, code := run(t, "", args...)
+		want := "saltcast " + args[0] + `: bogus: "1" is not allowed; allowed: one of the keys: `
+		if code != 2 || !strings.HasPrefix(errs, want) {
+			t.Errorf("saltcast %s: exit %d, stderr %q; want 2 and %q…", strings.Join(args, " "), code, errs, want)
+		}
 	}
 }
