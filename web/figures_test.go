@@ -51,11 +51,12 @@ func TestFigures(t *testing.T) {
 		{"-s -w, no inlining", web.Config{Package: pkg, KeepSegments: true, Gzip: "go"}},
 		{"-s -w, no inlining, zopfli", web.Config{Package: pkg, KeepSegments: true, Gzip: "zopfli"}},
 		{"-s -w, no inlining, segments merged, zopfli", web.Config{Package: pkg, Gzip: "zopfli"}},
+		{"-s -w, no inlining, segments merged, xz (the build)", web.Config{Package: pkg, Gzip: "xz"}},
 		// Not merged: wasm-opt writes a data count section, which wasmpack refuses.
 		{"-s -w, no inlining, wasm-opt " + web.DefaultWasmOpt + ", zopfli", web.Config{Package: pkg, WasmOpt: web.DefaultWasmOpt, KeepSegments: true, Gzip: "zopfli"}},
 	} {
 		v.cfg.Dir = ".."
-		if (v.cfg.WasmOpt != "" && !have("wasm-opt")) || (v.cfg.Gzip == "zopfli" && !have("zopfli")) {
+		if (v.cfg.WasmOpt != "" && !have("wasm-opt")) || (v.cfg.Gzip == "zopfli" && !have("zopfli")) || (v.cfg.Gzip == "xz" && !have("xz")) {
 			t.Logf("size %-52s tool not installed", v.name)
 			continue
 		}
@@ -92,29 +93,13 @@ func TestFigures(t *testing.T) {
 	ctx := tab(t)
 	open(t, ctx, app)
 
-	// Gunzip of the packed module in the page, fed two ways (web/loader.js uses the first).
-	gunzip := mustEval[[]float64](t, ctx, `(async function(){
-		const text = document.getElementById("saltcast-wasm").textContent.trim();
-		const val = new Int16Array(128).fill(-1); let k = 0;
-		for (let c = 33; c < 127; c++) if (c !== 60 && c !== 62 && c !== 38) val[c] = k++;
-		const t0 = performance.now();
-		const n = text.length, out = new Uint8Array(Math.floor(((n >> 1) * 13 + (n & 1) * 6) / 8));
-		let acc = 0, bits = 0, o = 0, i = 0;
-		for (; i + 1 < n; i += 2) {
-			acc |= (val[text.charCodeAt(i)] + 91 * val[text.charCodeAt(i + 1)]) << bits; bits += 13;
-			while (bits >= 8) { out[o++] = acc & 255; acc >>>= 8; bits -= 8; }
-		}
-		if (i < n) { acc |= val[text.charCodeAt(i)] << bits; if (bits + 6 >= 8) out[o++] = acc & 255; }
-		const decode = performance.now() - t0;
-		const chunk = () => new ReadableStream({start(c) { c.enqueue(out); c.close(); }});
-		const blob = () => new Blob([out]).stream();
-		const time = async (src) => { const t = performance.now(); await new Response(src().pipeThrough(new DecompressionStream("gzip"))).arrayBuffer(); return performance.now() - t; };
-		const a = [], b = [];
-		for (let r = 0; r < 5; r++) { a.push(await time(chunk)); b.push(await time(blob)); }
-		a.sort((x, y) => x - y); b.sort((x, y) => x - y);
-		return [decode, a[2], b[2]];
+	// The loader's own marks: module text decoded and unpacked (lzma, web/loader.js),
+	// compiled, first result on screen, each in ms after the loader started.
+	marks := mustEval[[]float64](t, ctx, `(function(){
+		const m = window.saltcastMarks;
+		return [m.unpacked === undefined ? -1 : m.unpacked - m.start, m.compiled - m.start, m.ready - m.start];
 	})()`)
-	t.Logf("in the page: text91 decode %.1f ms; gunzip median of 5: one-chunk stream %.1f ms, Blob stream %.1f ms", gunzip[0], gunzip[1], gunzip[2])
+	t.Logf("in the page: text decoded and unpacked at %.1f ms, compiled at %.1f ms, first result at %.1f ms after the loader started", marks[0], marks[1], marks[2])
 
 	click(t, ctx, `[data-demo="cuso4"]`)
 	// Each run changes one input, as a technician does: the water (results change, the

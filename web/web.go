@@ -76,8 +76,9 @@ type Config struct {
 	// KeepSegments leaves the linker's data segments as they are instead of merging them
 	// (saltcast/web/wasmpack; only to measure what merging buys).
 	KeepSegments bool
-	// Gzip is the compressor: "zopfli" (the zopfli program, zopfliIterations), "go" (compress/gzip
-	// at best compression) or "" for zopfli when it is installed, else go.
+	// Gzip is the compressor: "xz" (LZMA from the xz program, unpacked by the loader),
+	// "zopfli" (gzip from the zopfli program, zopfliIterations), "go" (compress/gzip at best
+	// compression) or "" for xz when it is installed, else zopfli, else go.
 	Gzip string
 }
 
@@ -264,16 +265,31 @@ func jsonString(s string) string {
 // 883 786 B; 5 gave 880 710) for 9 s more build time (measured 2 Dec 2026 on the build machine).
 const zopfliIterations = 15
 
-// compress gzips the module with zopfli when asked or installed (about 5 % smaller than
-// compress/gzip, measured), else with compress/gzip at its best level.
+// compress packs the module: with xz's LZMA when asked or installed ("xz"; the loader's own
+// decoder unpacks it: about a quarter smaller than the best gzip, 736 639 against 970 887 B on
+// 2 Dec 2026), else gzip from zopfli when installed (about 5 % smaller than compress/gzip,
+// measured), else compress/gzip at its best level.
 func compress(wasm []byte, how, tmp string) ([]byte, string, error) {
 	if how == "" {
 		how = "go"
 		if _, err := exec.LookPath("zopfli"); err == nil {
 			how = "zopfli"
 		}
+		if _, err := exec.LookPath("xz"); err == nil {
+			how = "xz"
+		}
 	}
 	switch how {
+	case "xz":
+		in := filepath.Join(tmp, "x.wasm")
+		if err := os.WriteFile(in, wasm, 0o644); err != nil {
+			return nil, how, err
+		}
+		out, err := exec.Command("xz", "--format=lzma", "-9e", "--stdout", in).Output()
+		if err != nil {
+			return nil, how, errors.New("xz: " + err.Error())
+		}
+		return withSize(out, len(wasm))
 	case "zopfli":
 		in := filepath.Join(tmp, "z.wasm")
 		if err := os.WriteFile(in, wasm, 0o644); err != nil {
@@ -298,7 +314,20 @@ func compress(wasm []byte, how, tmp string) ([]byte, string, error) {
 		}
 		return gz.Bytes(), how, nil
 	}
-	return nil, how, errors.New("unknown compressor " + strconv.Quote(how) + `; use "zopfli" or "go"`)
+	return nil, how, errors.New("unknown compressor " + strconv.Quote(how) + `; use "xz", "zopfli" or "go"`)
+}
+
+// withSize writes the unpacked size into an "lzma alone" header (bytes 5 to 12, little
+// endian), which xz leaves as "unknown" when it ends the stream with a marker instead: the
+// loader allocates the module once and stops at that size, before the marker.
+func withSize(lz []byte, size int) ([]byte, string, error) {
+	if len(lz) < 13 || lz[0] >= 225 {
+		return nil, "xz", errors.New("xz: not an lzma alone stream")
+	}
+	for i := 0; i < 8; i++ {
+		lz[5+i] = byte(uint64(size) >> (8 * i))
+	}
+	return lz, "xz", nil
 }
 
 // Page assembles the HTML file from the gzip-compressed module, the toolchain's

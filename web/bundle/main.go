@@ -23,7 +23,7 @@ func main() {
 	out := flag.String("out", "dist/saltcast.html", "where to write the page")
 	pkg := flag.String("pkg", "./wasm/browser", "Go package to compile to WebAssembly")
 	opt := flag.String("wasm-opt", "off", `wasm-opt level such as -Oz, "auto" (use `+web.DefaultWasmOpt+` when wasm-opt is installed) or "off"`)
-	gz := flag.String("gzip", "", `compressor: "zopfli", "go", or "" for zopfli when installed`)
+	gz := flag.String("gzip", "", `compressor: "xz", "zopfli", "go", or "" for the best one installed`)
 	version := flag.String("version", "", "version text for the page (default: git describe, then VERSION)")
 	flag.Parse()
 
