@@ -162,7 +162,7 @@ type Result struct {
 	Cautions     []string
 	CautionKinds []balance.CautionKind // CautionKinds[i] is the kind of Cautions[i], as in a plan
 	Warnings     []string
-	Sources  []string
+	Sources      []string
 }
 
 // notes collects text without repeats, in order.
@@ -319,11 +319,11 @@ func Plan(s Spec) (Result, error) {
 	// Cautions: the compound's note, the general ones, the SDS last.
 	cautions.add(balance.CautionHazard, c.Hazard)
 	if T > hotLiquidC {
-		cautions.add(balance.CautionHot, "Hot liquid: the solution is made up at " + unit.FormatCompact(T, 4) + " °C. A spill scalds; use heat-resistant glassware, " +
+		cautions.add(balance.CautionHot, "Hot liquid: the solution is made up at "+unit.FormatCompact(T, 4)+" °C. A spill scalds; use heat-resistant glassware, "+
 			"gloves and eye protection, and note that volumetric glassware is not made for heating.")
 	}
 	if c.Oxidizer {
-		cautions.add(balance.CautionOxidizer, c.ID+" is an oxidizer: keep the solid, its solutions and any dried residue away from organic material " +
+		cautions.add(balance.CautionOxidizer, c.ID+" is an oxidizer: keep the solid, its solutions and any dried residue away from organic material "+
 			"and fuels; do not let spills dry on paper, wood or cloth.")
 	}
 	cautions.add(balance.CautionSDS, safetyNote)
@@ -421,7 +421,7 @@ func (res *Result) fromForm(s Spec, display string, warn *notes, cautions *cauti
 				kind, ck = "exotherm", balance.CautionExotherm
 			}
 			cautions.add(ck, "Strong "+kind+": dissolving "+form.Formula+
-				" " + word + " the solution by about " + unit.FormatCompact(math.Abs(d), 2) +
+				" "+word+" the solution by about "+unit.FormatCompact(math.Abs(d), 2)+
 				" K. Add the solid in portions to most of the water, stirring, in a beaker rather than the flask.")
 		}
 	}

@@ -29,28 +29,8 @@ func (res Result) Encode() []byte {
 }
 
 func (res Result) encode(e *wire.Encoder) {
-	num := func(k string, v float64) { e.Key(k).Round(v, sig) }
-	opt := func(k string, v float64, ok bool) {
-		if ok {
-			e.Key(k).Round(v, sig)
-		} else {
-			e.Key(k).Null()
-		}
-	}
-	optStr := func(k, v string, ok bool) {
-		if ok {
-			e.Key(k).String(v)
-		} else {
-			e.Key(k).Null()
-		}
-	}
-	list := func(k string, l []string) {
-		e.Key(k).BeginArray()
-		for _, s := range l {
-			e.String(s)
-		}
-		e.EndArray()
-	}
+	w := answer{e}
+	num, opt, optStr, list := w.num, w.opt, w.optStr, w.list
 	r := res.Result
 	e.BeginObject()
 	e.Key("format").Int(CurrentFormat)
@@ -193,4 +173,35 @@ func (res Result) encode(e *wire.Encoder) {
 	list("warnings", r.Warnings)
 	list("sources", r.Sources)
 	e.EndObject()
+}
+
+// answer writes the keys of a result object: numbers rounded to sig significant digits, and
+// null for a key that does not apply, so every key is always present. The plan and the
+// preparation answers write through it.
+type answer struct{ e *wire.Encoder }
+
+func (w answer) num(k string, v float64) { w.e.Key(k).Round(v, sig) }
+
+func (w answer) opt(k string, v float64, ok bool) {
+	if ok {
+		w.e.Key(k).Round(v, sig)
+	} else {
+		w.e.Key(k).Null()
+	}
+}
+
+func (w answer) optStr(k, v string, ok bool) {
+	if ok {
+		w.e.Key(k).String(v)
+	} else {
+		w.e.Key(k).Null()
+	}
+}
+
+func (w answer) list(k string, l []string) {
+	w.e.Key(k).BeginArray()
+	for _, s := range l {
+		w.e.String(s)
+	}
+	w.e.EndArray()
 }

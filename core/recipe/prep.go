@@ -246,21 +246,8 @@ func (res PrepResult) Encode() []byte {
 }
 
 func (res PrepResult) encode(e *wire.Encoder) {
-	num := func(k string, v float64) { e.Key(k).Round(v, sig) }
-	opt := func(k string, v float64, ok bool) {
-		if ok {
-			e.Key(k).Round(v, sig)
-		} else {
-			e.Key(k).Null()
-		}
-	}
-	list := func(k string, l []string) {
-		e.Key(k).BeginArray()
-		for _, s := range l {
-			e.String(s)
-		}
-		e.EndArray()
-	}
+	w := answer{e}
+	num, opt, list := w.num, w.opt, w.list
 	r := res.Result
 	e.BeginObject()
 	e.Key("format").Int(CurrentFormat)
