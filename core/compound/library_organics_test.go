@@ -30,6 +30,11 @@ const (
 	// scienceaq.com: 109 g per 100 g water at 25 °C.
 	sciencingUrea = "sciencing.com urea properties"
 	scienceaqUrea = "scienceaq.com urea page"
+	// Khimicheskaya entsiklopediya, article "Mochevina" (open copy: pora.ru/encyclopedia/5935):
+	// water 51.8 (20 °C) and 71.7 (60 °C), printed as "g per 100 g solvent" but only possible as
+	// mass % (51.8 g/100 g would be half of every other source); converted here as mass % to
+	// 107.5 and 253.4 g/100 g water (derived).
+	chemEncUrea = "Khimicheskaya entsiklopediya, urea (pora.ru), mass % converted"
 	// chemister.ru mirror (new-nark.dev.digital-lab.ru), salicylic acid: water 0.18 g/100 g at
 	// 20 °C and 1.76 at 75 °C (citing J. Phys. Chem. Ref. Data 2013); de.411answers.com: about
 	// 2 g per litre at 20 °C.
@@ -38,6 +43,8 @@ const (
 	// wizedu.com reagent table: acetanilide 0.54 g/100 mL in cold and 5.0 g/100 mL in boiling
 	// water.
 	wizeduAcetanilide = "wizedu.com reagent table"
+	// Ukrainian Wikipedia "Ацетанілід" infobox: 6.1 g/L at 25 °C, read as 0.61 g/100 g water.
+	wpUkAcetanilide = "Ukrainian Wikipedia Acetanilide infobox"
 	// biologyinsights.com "Is dextrose soluble in water": about 54 g anhydrous dextrose per
 	// 100 g water at 0 °C, about 120 at 30 °C.
 	insightsGlucose = "biologyinsights.com dextrose page"
@@ -49,8 +56,9 @@ const (
 	oxalicTol     = 0.10 // the Wikipedia infobox and table differ by up to 9.6 % (40 °C)
 	tartaricTol   = 0.18 // open sources scatter from −18 % (JECFA, temperature unstated) to +14 %
 	ureaTol       = 0.12 // the two 25 °C figures differ by 9 %
+	ureaEncTol    = 0.03 // two compilations of older data: 0.5 % at 20 °C, 1 % at 60 °C
 	salicylicTol  = 0.20 // 0.18–0.22 g/100 g quoted at 20 °C
-	acetanilTol   = 0.10 // 0.53 vs 0.54 cold, 5.5 vs 5.0 boiling
+	acetanilTol   = 0.10 // 0.53 vs 0.54 cold, 5.5 vs 5.0 boiling, 0.56 vs 0.61 at 25 °C (9 %)
 	glucoseTol    = 0.03 // recalled rows against read values
 	phosphateTol  = 0.05 // Wikipedia table vs CRC, 4 % at 10 °C
 	fluorideTol   = 0.02 // Wikipedia table vs CRC
@@ -82,12 +90,15 @@ var organicSecondSource = []struct {
 	// urea (library: Wikipedia Solubility table)
 	{"CO(NH2)2", 25, 119, ureaTol, sciencingUrea},
 	{"CO(NH2)2", 25, 109, ureaTol, scienceaqUrea},
+	{"CO(NH2)2", 20, 107.5, ureaEncTol, chemEncUrea},
+	{"CO(NH2)2", 60, 253.4, ureaEncTol, chemEncUrea},
 	// salicylic acid (library: Wikipedia infobox, from memory)
 	{"HOC6H4COOH", 20, 0.18, salicylicTol, chemisterSalicylic},
 	{"HOC6H4COOH", 20, 0.20, salicylicTol, answersSalicylic},
 	{"HOC6H4COOH", 75, 1.76, salicylicTol, chemisterSalicylic},
 	// acetanilide (library: textbook 0 and 100 °C figures)
 	{"C6H5NHCOCH3", 0, 0.54, acetanilTol, wizeduAcetanilide},
+	{"C6H5NHCOCH3", 25, 0.61, acetanilTol, wpUkAcetanilide},
 	{"C6H5NHCOCH3", 100, 5.0, acetanilTol, wizeduAcetanilide},
 	// D-glucose, monohydrate branch (library: Jackson & Silsbee, from memory)
 	{"C6H12O6", 0, 54, glucoseTol, insightsGlucose},
