@@ -178,6 +178,10 @@ func (p Prep) Encode() []byte { return PrepFields.Encode(&p) }
 
 func (p Prep) encode(e *wire.Encoder) { PrepFields.encode(e, &p) }
 
+// Encodable reports what would make Encode panic or DecodePrep refuse the text of p, as
+// Recipe.Encodable does. A Prep from DecodePrep is always fine.
+func (p Prep) Encodable() error { return encodable(&PrepFields, &p) }
+
 // PrepResult is a worked preparation with the recipe it came from.
 type PrepResult struct {
 	Recipe Prep

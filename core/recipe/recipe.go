@@ -241,9 +241,12 @@ func (r Recipe) encode(e *wire.Encoder) { Fields.encode(e, &r) }
 // checksum differ once read back: texts longer than Decode reads, and text that is not
 // UTF-8 (the encoder writes U+FFFD for it, which reads back as other bytes). A Recipe from
 // Decode is always fine.
-func (r Recipe) Encodable() error {
+func (r Recipe) Encodable() error { return encodable(&Fields, &r) }
+
+// encodable is Encodable for a recipe of any table.
+func encodable[R any](t *Table[R], r *R) error {
 	var bad error
-	Fields.texts(&r, func(s string, max int) {
+	t.texts(r, func(s string, max int) {
 		if bad == nil && (len(s) > max || !utf8.ValidString(s)) {
 			bad = errors.New("UTF-8 texts of at most " + strconv.Itoa(max) + " bytes")
 		}
@@ -252,7 +255,7 @@ func (r Recipe) Encodable() error {
 		return bad
 	}
 	var e wire.Encoder
-	r.encode(&e)
+	t.encode(&e, r)
 	if _, err := e.Bytes(); err != nil {
 		return errors.New("finite numbers only")
 	}

@@ -33,7 +33,7 @@ func (a *app) bindCarry() {
 	})
 	on(byID("carry-pick"), "change", func(js.Value, event) { a.syncCarryAll() })
 	on(byID("received"), "click", a.onReceivedClick)
-	on(byID("take-all"), "click", func(js.Value, event) { a.takeIn(a.got.from.Recipes) })
+	on(byID("take-all"), "click", func(js.Value, event) { a.takeIn(a.got.from.Recipes, a.got.from.Preps) })
 	on(byID("carry-file"), "change", func(t js.Value, _ event) {
 		files := t.Get("files")
 		if files.Length() > 0 {
@@ -106,7 +106,7 @@ func (a *app) readFile(file js.Value) {
 		}
 		a.got = &received{from: c, source: name}
 		a.renderReceived()
-		a.boxMessage("m-received", "“"+name+"” holds "+plural(len(c.Recipes), "recipe")+": they are listed above, apart from yours.")
+		a.boxMessage("m-received", "“"+name+"” holds "+carriedCount(c)+": they are listed above, apart from yours.")
 		return nil
 	})
 	failed = js.FuncOf(func(_ js.Value, args []js.Value) any {
@@ -120,15 +120,22 @@ func (a *app) readFile(file js.Value) {
 // saveCopy downloads this page with the ticked recipes in it.
 func (a *app) saveCopy() {
 	var pick []recipe.Recipe
+	var picks []recipe.Prep
 	for _, el := range qa(byID("carry-pick"), "input[type=checkbox]") {
-		if checked(el) {
-			i := atoi(attr(el, "data-i"))
-			if i >= 0 && i < len(a.shelf.Recipes) {
-				pick = append(pick, a.shelf.Recipes[i])
+		if !checked(el) {
+			continue
+		}
+		if hasAttr(el, "data-p") {
+			if i := atoi(attr(el, "data-p")); i >= 0 && i < len(a.shelf.Preps) {
+				picks = append(picks, a.shelf.Preps[i])
 			}
+			continue
+		}
+		if i := atoi(attr(el, "data-i")); i >= 0 && i < len(a.shelf.Recipes) {
+			pick = append(pick, a.shelf.Recipes[i])
 		}
 	}
-	if len(pick) == 0 {
+	if len(pick)+len(picks) == 0 {
 		a.boxMessage("m-carry", "Tick at least one recipe to send.")
 		return
 	}
@@ -143,6 +150,7 @@ func (a *app) saveCopy() {
 		SavedAt:    UTCStamp(now.Call("toISOString").String()),
 		SentBy:     strings.TrimSpace(value(byID("carry-by"))),
 		Recipes:    pick,
+		Preps:      picks,
 	}
 	out, err := carry.WithCarried(page, c)
 	if err != nil {
@@ -150,7 +158,7 @@ func (a *app) saveCopy() {
 		return
 	}
 	download(CopyFileName(localDate(now)), "text/html", string(out))
-	a.boxMessage("m-carry", "Saved a copy of Saltcast with "+plural(len(pick), "recipe")+". Send that file; whoever opens it sees the recipes as received.")
+	a.boxMessage("m-carry", "Saved a copy of Saltcast with "+carriedCount(c)+". Send that file; whoever opens it sees the recipes as received.")
 }
 
 // ownPage rebuilds this page's bytes from the template compiled into the program and the
@@ -175,27 +183,53 @@ func ownPage() ([]byte, error) {
 	return page, nil
 }
 
-// takeIn adds received recipes to the user's own list (core/carry.TakeIn).
-func (a *app) takeIn(rs []recipe.Recipe) {
-	if len(rs) == 0 {
+// takeIn adds received recipes and preparations to the user's own list (web/carry.TakeIn,
+// TakeInPreps): both or neither are kept.
+func (a *app) takeIn(rs []recipe.Recipe, ps []recipe.Prep) {
+	if len(rs)+len(ps) == 0 {
 		return
 	}
-	all, added, same := carry.TakeIn(a.shelf.Recipes, rs, localDate(js.Global().Get("Date").New()))
+	day := localDate(js.Global().Get("Date").New())
+	all, added, same := carry.TakeIn(a.shelf.Recipes, rs, day)
+	allP, addedP, sameP := carry.TakeInPreps(a.shelf.Preps, ps, day)
 	next := a.shelf
-	next.Recipes = all
+	next.Recipes, next.Preps = all, allP
 	if !a.store.set(keyShelf, string(next.Encode())) {
 		a.boxMessage("m-received", "Nothing was taken: this browser does not let the page keep data (private window or storage full).")
 		return
 	}
 	renamed := all[len(a.shelf.Recipes):]
+	renamedP := allP[len(a.shelf.Preps):]
 	a.shelf = next
 	a.renderShelf()
-	a.boxMessage("m-received", TakeInMessage(rs, renamed, added, same))
+	var msg []string
+	if len(rs) > 0 {
+		msg = append(msg, TakeInMessage(rs, renamed, added, same))
+	}
+	if len(ps) > 0 {
+		msg = append(msg, TakeInPrepsMessage(ps, renamedP, addedP, sameP))
+	}
+	a.boxMessage("m-received", strings.Join(msg, " "))
 }
 
 func (a *app) onReceivedClick(t js.Value, _ event) {
 	b := closest(t, "button")
 	if !exists(b) || a.got == nil {
+		return
+	}
+	if hasAttr(b, "data-p") {
+		i := atoi(attr(b, "data-p"))
+		if i < 0 || i >= len(a.got.from.Preps) {
+			return
+		}
+		p := a.got.from.Preps[i]
+		switch {
+		case hasAttr(b, "data-take"):
+			a.takeIn(nil, []recipe.Prep{p})
+		case hasAttr(b, "data-look"):
+			a.loadPrep(p)
+			a.showScreen("prep")
+		}
 		return
 	}
 	i := atoi(attr(b, "data-i"))
@@ -205,7 +239,7 @@ func (a *app) onReceivedClick(t js.Value, _ event) {
 	r := a.got.from.Recipes[i]
 	switch {
 	case hasAttr(b, "data-take"):
-		a.takeIn([]recipe.Recipe{r})
+		a.takeIn([]recipe.Recipe{r}, nil)
 	case hasAttr(b, "data-look"):
 		a.load(r)
 		a.showScreen("batch")
@@ -235,8 +269,19 @@ func (a *app) renderCarry() {
 		setChecked(box, was[r.Name])
 		add(lab, "span", "", r.Name) // the user's text, as text
 	}
-	setHidden(byID("carry-empty"), len(a.shelf.Recipes) > 0)
-	setHidden(byID("carry-form"), len(a.shelf.Recipes) == 0)
+	for i, p := range a.shelf.Preps {
+		li := add(list, "li", "", "")
+		lab := add(li, "label", "check", "")
+		box := add(lab, "input", "", "")
+		setAttr(box, "type", "checkbox")
+		setAttr(box, "data-p", itoa(i))
+		setAttr(box, "data-name", "preparation:"+p.Name)
+		setChecked(box, was["preparation:"+p.Name])
+		add(lab, "span", "", "Preparation: "+p.Name) // the user's text, as text
+	}
+	n := len(a.shelf.Recipes) + len(a.shelf.Preps)
+	setHidden(byID("carry-empty"), n > 0)
+	setHidden(byID("carry-form"), n == 0)
 	a.syncCarryAll()
 }
 
@@ -253,7 +298,7 @@ func (a *app) syncCarryAll() {
 func (a *app) renderReceived() {
 	list := byID("received")
 	clear(list)
-	has := a.got != nil && len(a.got.from.Recipes) > 0
+	has := a.got != nil && len(a.got.from.Recipes)+len(a.got.from.Preps) > 0
 	setHidden(byID("received-empty"), has)
 	setHidden(byID("take-all"), !has)
 	setText(byID("received-from"), "")
@@ -280,6 +325,25 @@ func (a *app) renderReceived() {
 		setAttr(take, "data-take", "")
 		setAttr(take, "data-i", itoa(i))
 		setAttr(take, "aria-label", "Take "+r.Name+" into my list")
+	}
+	for i, p := range a.got.from.Preps {
+		li := add(list, "li", "", "")
+		add(li, "span", "nm", "Preparation: "+p.Name) // the sender's text, as text
+		look := add(li, "button", "act", "Open")
+		setAttr(look, "type", "button")
+		setAttr(look, "data-look", "")
+		setAttr(look, "data-p", itoa(i))
+		setAttr(look, "aria-label", "Open "+p.Name)
+		if InListPrep(a.shelf.Preps, p) {
+			add(li, "span", "tag", "in your list")
+			continue
+		}
+		left++
+		take := add(li, "button", "act primary", "Take into my list")
+		setAttr(take, "type", "button")
+		setAttr(take, "data-take", "")
+		setAttr(take, "data-p", itoa(i))
+		setAttr(take, "aria-label", "Take "+p.Name+" into my list")
 	}
 	setHidden(byID("take-all"), left == 0)
 	if left == 0 {

@@ -11,17 +11,29 @@ import (
 
 // CarriedNote is the line shown on opening a copy that carries recipes.
 func CarriedNote(c carry.Carried) string {
-	s := "This copy of Saltcast carries " + plural(len(c.Recipes), "recipe")
+	s := "This copy of Saltcast carries " + carriedCount(c)
 	if c.SentBy != "" {
 		s += " from " + c.SentBy
 	}
 	return s + ". They are kept apart from your own until you take them in."
 }
 
+// carriedCount says what c holds: "2 recipes", "2 recipes and 1 preparation",
+// "1 preparation".
+func carriedCount(c carry.Carried) string {
+	switch {
+	case len(c.Preps) == 0:
+		return plural(len(c.Recipes), "recipe")
+	case len(c.Recipes) == 0:
+		return plural(len(c.Preps), "preparation")
+	}
+	return plural(len(c.Recipes), "recipe") + " and " + plural(len(c.Preps), "preparation")
+}
+
 // FromLine says where received recipes come from.
 func FromLine(c carry.Carried, source string) string {
 	var b strings.Builder
-	b.WriteString(plural(len(c.Recipes), "recipe"))
+	b.WriteString(carriedCount(c))
 	if source == "" || source == "this copy" {
 		b.WriteString(" carried by this copy")
 	} else {
@@ -45,9 +57,36 @@ func FromLine(c carry.Carried, source string) string {
 // TakeInMessage reports what TakeIn did: rs were offered, added of them are new to the
 // list (renamed holds them as kept), same were there already.
 func TakeInMessage(rs, kept []recipe.Recipe, added, same int) string {
+	return takeInWords(recipeNames(rs), recipeNames(kept), added, same, "recipe")
+}
+
+// TakeInPrepsMessage reports what TakeInPreps did, as TakeInMessage does for recipes.
+func TakeInPrepsMessage(ps, kept []recipe.Prep, added, same int) string {
+	return takeInWords(prepNames(ps), prepNames(kept), added, same, "preparation")
+}
+
+func recipeNames(rs []recipe.Recipe) []string {
+	n := make([]string, len(rs))
+	for i, r := range rs {
+		n[i] = r.Name
+	}
+	return n
+}
+
+func prepNames(ps []recipe.Prep) []string {
+	n := make([]string, len(ps))
+	for i, p := range ps {
+		n[i] = p.Name
+	}
+	return n
+}
+
+// takeInWords is TakeInMessage for a noun: offered names were taken in, kept the names the
+// added ones are kept under.
+func takeInWords(offered, kept []string, added, same int, noun string) string {
 	var b strings.Builder
 	if added > 0 {
-		b.WriteString("Took " + plural(added, "recipe") + " into your list.")
+		b.WriteString("Took " + plural(added, noun) + " into your list.")
 	}
 	if same > 0 {
 		if b.Len() > 0 {
@@ -59,14 +98,14 @@ func TakeInMessage(rs, kept []recipe.Recipe, added, same int) string {
 			b.WriteString(itoa(same) + " were there already.")
 		}
 	}
-	// Name each clash: the received recipe kept beside the user's under a marked name.
+	// Name each clash: the received one kept beside the user's under a marked name.
 	names := map[string]bool{}
-	for _, r := range rs {
-		names[r.Name] = true
+	for _, n := range offered {
+		names[n] = true
 	}
 	for _, k := range kept {
-		if !names[k.Name] {
-			b.WriteString(" A recipe of the same name was kept as “" + k.Name + "”.")
+		if !names[k] {
+			b.WriteString(" A " + noun + " of the same name was kept as “" + k + "”.")
 		}
 	}
 	return b.String()
@@ -77,6 +116,17 @@ func InList(list []recipe.Recipe, r recipe.Recipe) bool {
 	enc := r.Encode()
 	for _, x := range list {
 		if x.Name == r.Name && string(x.Encode()) == string(enc) {
+			return true
+		}
+	}
+	return false
+}
+
+// InListPrep reports whether the list holds p as it is (same name, same preparation).
+func InListPrep(list []recipe.Prep, p recipe.Prep) bool {
+	enc := p.Encode()
+	for _, x := range list {
+		if x.Name == p.Name && string(x.Encode()) == string(enc) {
 			return true
 		}
 	}

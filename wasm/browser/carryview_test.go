@@ -53,3 +53,24 @@ func TestInList(t *testing.T) {
 		t.Error("InList is wrong")
 	}
 }
+
+func TestCarryWordsPreps(t *testing.T) {
+	rs := []recipe.Recipe{{Name: "a"}}
+	ps := []recipe.Prep{{Name: "p"}, {Name: "q"}}
+	for _, tc := range []struct{ got, want string }{
+		{CarriedNote(carry.Carried{Recipes: rs, Preps: ps}), "This copy of Saltcast carries 1 recipe and 2 preparations. They are kept apart from your own until you take them in."},
+		{FromLine(carry.Carried{Preps: ps[:1], Sealed: true}, "this copy"), "1 preparation carried by this copy."},
+		{TakeInPrepsMessage(ps, []recipe.Prep{{Name: "p (received 2026-12-01)"}}, 1, 1),
+			"Took 1 preparation into your list. 1 was there already. A preparation of the same name was kept as “p (received 2026-12-01)”."},
+	} {
+		if tc.got != tc.want {
+			t.Errorf("got  %q\nwant %q", tc.got, tc.want)
+		}
+	}
+	p := recipe.Prep{Name: "p", Solute: "KCl", Concentration: 1, ConcentrationUnit: "mol/L", FinalVolumeML: recipe.Some(100)}
+	p2 := p
+	p2.Concentration = 2
+	if !InListPrep([]recipe.Prep{p}, p) || InListPrep([]recipe.Prep{p}, p2) || InListPrep(nil, p) {
+		t.Error("InListPrep is wrong")
+	}
+}

@@ -24,6 +24,12 @@ import (
 //	{"format":1,"kind":"saltcast-carried-recipes","app_version":"v1.2","saved_at":"2026-12-01T09:30:00Z",
 //	 "sent_by":"R. Ilves","recipes":{<a recipe collection file>},"crc32":"0a1b2c3d"}
 //
+// A block that also carries preparations (solutions made up to the mark) has them in the
+// collection's optional "preparations" list, as an export file does, and says "format":2,
+// so that a Saltcast that reads only format 1 asks to be updated instead of calling the
+// block damaged. A block without preparations is written exactly as format 1 always was,
+// byte for byte, so copies saved before still verify.
+//
 // "crc32" is the CRC-32 of the canonical encoding of the object without "crc32" (the
 // bytes EncodeCarried writes up to that key), so any changed value, lost recipe or cut
 // text is refused, while a mail program that turns LF into CR LF changes nothing. A CRC
@@ -36,7 +42,8 @@ import (
 
 // Names and limits of the carried-recipes block.
 const (
-	CarriedFormat = 1                                // the carried format this Saltcast writes and the newest it reads
+	CarriedFormat = 2                                // the newest carried format this Saltcast reads and writes (with preparations)
+	carriedPlain  = 1                                // the carried format of a block without preparations
 	CarriedKind   = "saltcast-carried-recipes"       // the "kind" of a carried block
 	CarriedType   = "application/x-saltcast-recipes" // the type attribute of the <script> element
 	CarriedID     = "saltcast-carried"               // the id attribute of the <script> element
@@ -56,6 +63,7 @@ type Carried struct {
 	SavedAt    string          // "saved_at": when, as 2026-12-01T09:30:00Z (UTC); "" if not known
 	SentBy     string          // "sent_by": who saved it, as they typed it; may be ""
 	Recipes    []recipe.Recipe // "recipes": a recipe collection
+	Preps      []recipe.Prep   // its "preparations", when there are some (carried format 2)
 
 	// Sealed reports that the recipes came in a carried block whose checksum matched.
 	// Recipes read from a plain JSON export have no checksum and Sealed false.
@@ -123,11 +131,11 @@ func EncodeCarried(c Carried) ([]byte, error) {
 // body is the canonical encoding of c without the checksum and without the closing
 // brace: the bytes the checksum covers.
 func (c Carried) body() []byte {
-	coll := recipe.EncodeCollection(c.Recipes)
+	coll := recipe.Collection{Recipes: c.Recipes, Preps: c.Preps}.Encode()
 	var e wire.Encoder
 	e.Grow(len(coll) + 256)
 	e.BeginObject()
-	e.Key("format").Int(CarriedFormat)
+	e.Key("format").Int(c.format())
 	e.Key("kind").String(CarriedKind)
 	e.Key("app_version").String(c.AppVersion)
 	e.Key("saved_at").String(c.SavedAt)
@@ -143,14 +151,22 @@ func (c Carried) body() []byte {
 	return append(b, coll...)
 }
 
+// format is the carried format c is written in: 1 unless it carries preparations.
+func (c Carried) format() int {
+	if len(c.Preps) > 0 {
+		return CarriedFormat
+	}
+	return carriedPlain
+}
+
 // check applies the limits ExtractCarried applies.
 func (c Carried) check() error {
 	fe := func(field, value, allowed string) error {
 		return &CarryError{Err: &unit.FieldError{Field: field, Value: value, Allowed: allowed}}
 	}
 	switch {
-	case len(c.Recipes) > recipe.MaxCollectionRecipes:
-		return fe("recipes", strconv.Itoa(len(c.Recipes))+" recipes",
+	case len(c.Recipes)+len(c.Preps) > recipe.MaxCollectionRecipes:
+		return fe("recipes", strconv.Itoa(len(c.Recipes)+len(c.Preps))+" recipes",
 			"at most "+strconv.Itoa(recipe.MaxCollectionRecipes)+" recipes in one copy")
 	case len(c.SentBy) > maxSentBy || !utf8.ValidString(c.SentBy):
 		return fe("sent_by", clip(c.SentBy), "a name of at most "+strconv.Itoa(maxSentBy)+" bytes of UTF-8 text")
@@ -162,6 +178,11 @@ func (c Carried) check() error {
 	for i, r := range c.Recipes {
 		if err := r.Encodable(); err != nil {
 			return fe("recipes["+strconv.Itoa(i)+"]", clip(r.Name), err.Error())
+		}
+	}
+	for i, p := range c.Preps {
+		if err := p.Encodable(); err != nil {
+			return fe("preparations["+strconv.Itoa(i)+"]", clip(p.Name), err.Error())
 		}
 	}
 	return nil
@@ -282,8 +303,11 @@ func readCarriedJSON(text []byte, inBlock bool) (Carried, error) {
 		return Carried{}, err
 	}
 	var rs []recipe.Recipe
+	var ps []recipe.Prep
 	if _, ok := v.Get("kind"); ok {
-		rs, err = recipe.DecodeCollection(text)
+		var coll recipe.Collection
+		coll, err = recipe.CollectionFromValue(v)
+		rs, ps = coll.Recipes, coll.Preps
 	} else {
 		var r recipe.Recipe
 		if r, err = recipe.DecodeValue(v); err == nil {
@@ -293,13 +317,13 @@ func readCarriedJSON(text []byte, inBlock bool) (Carried, error) {
 	if err != nil {
 		return Carried{}, carryErr(ErrMalformed, err)
 	}
-	if err := named(rs); err != nil {
+	if err := named(rs, ps); err != nil {
 		return Carried{}, err
 	}
-	if len(rs) == 0 {
+	if len(rs)+len(ps) == 0 {
 		return Carried{}, carryErr(ErrNoRecipes, nil)
 	}
-	return Carried{Recipes: rs}, nil
+	return Carried{Recipes: rs, Preps: ps}, nil
 }
 
 // readCarriedValue reads the object of a carried block and checks its checksum.
@@ -310,11 +334,12 @@ func readCarriedValue(v wire.Value) (Carried, error) {
 	var c Carried
 	var coll wire.Value
 	var sum string
+	format := 0
 	d := reader{}
 	for _, m := range v.Members {
 		switch m.Key {
 		case "format":
-			d.format(m.Value)
+			format = d.format(m.Value)
 		case "kind":
 			// already checked by the caller
 		case "app_version":
@@ -356,16 +381,23 @@ func readCarriedValue(v wire.Value) (Carried, error) {
 	if err != nil {
 		return Carried{}, carryErr(ErrMalformed, err)
 	}
-	if c.Recipes, err = recipe.DecodeCollection(collJSON); err != nil {
+	all, err := recipe.DecodeAll(collJSON)
+	if err != nil {
 		return Carried{}, carryErr(ErrMalformed, err)
+	}
+	c.Recipes, c.Preps = all.Recipes, all.Preps
+	if format != c.format() {
+		// Format 1 has no preparations; format 2 is written only with them.
+		return Carried{}, carryErr(ErrMalformed, &unit.FieldError{Field: "format", Value: strconv.Itoa(format),
+			Allowed: "1 for a block of recipes only, 2 for one that carries preparations"})
 	}
 	if crc32(c.body()) != parseHex32(sum) {
 		return Carried{}, carryErr(ErrChecksum, nil)
 	}
-	if err := named(c.Recipes); err != nil {
+	if err := named(c.Recipes, c.Preps); err != nil {
 		return Carried{}, err
 	}
-	if len(c.Recipes) == 0 {
+	if len(c.Recipes)+len(c.Preps) == 0 {
 		return Carried{}, carryErr(ErrNoRecipes, nil)
 	}
 	c.Sealed = true
@@ -383,12 +415,18 @@ func newer(v wire.Value, max int) error {
 	return nil
 }
 
-// named refuses recipes without a name: the recipe box keeps recipes by name.
-func named(rs []recipe.Recipe) error {
+// named refuses recipes and preparations without a name: the recipe box keeps both by name.
+func named(rs []recipe.Recipe, ps []recipe.Prep) error {
 	for i, r := range rs {
 		if strings.TrimSpace(r.Name) == "" {
 			return carryErr(ErrMalformed, &unit.FieldError{Field: "recipes[" + strconv.Itoa(i) + "].name", Value: "",
 				Allowed: "a name for every recipe (recipes are kept by name)"})
+		}
+	}
+	for i, p := range ps {
+		if strings.TrimSpace(p.Name) == "" {
+			return carryErr(ErrMalformed, &unit.FieldError{Field: "preparations[" + strconv.Itoa(i) + "].name", Value: "",
+				Allowed: "a name for every preparation (preparations are kept by name)"})
 		}
 	}
 	return nil
@@ -576,9 +614,12 @@ func (d *reader) text(field string, v wire.Value, max int) string {
 	return v.Text
 }
 
-// format checks the block's "format"; newer formats were refused before the keys were read.
-func (d *reader) format(v wire.Value) {
+// format checks the block's "format" and returns it; newer formats were refused before the
+// keys were read.
+func (d *reader) format(v wire.Value) int {
 	if v.Kind != wire.Number || v.Num != float64(int(v.Num)) || v.Num < 1 || v.Num > CarriedFormat {
-		d.fail("format", wire.Literal(v), "the whole number "+strconv.Itoa(CarriedFormat))
+		d.fail("format", wire.Literal(v), "the whole number 1, or 2 with preparations")
+		return 0
 	}
+	return int(v.Num)
 }

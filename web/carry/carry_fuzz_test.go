@@ -3,13 +3,15 @@ package carry
 import (
 	"bytes"
 	"errors"
+	"os"
 	"saltcast/core/recipe"
 	"testing"
 )
 
 // FuzzExtractCarried feeds arbitrary files to the extractor. Properties: it never panics;
 // an error is a *CarryError and comes with nothing; what it accepts has names and at most
-// recipe.MaxCollectionRecipes recipes, and survives being carried again unchanged.
+// recipe.MaxCollectionRecipes recipes and preparations together, and survives being
+// carried again unchanged, preparations included.
 func FuzzExtractCarried(f *testing.F) {
 	c := Carried{AppVersion: "v1", SavedAt: "2026-12-01T09:30:00Z", SentBy: "bench 2",
 		Recipes: named3("stock A", "<b>x</b>")}
@@ -26,6 +28,20 @@ func FuzzExtractCarried(f *testing.F) {
 	f.Add([]byte(`<script type=application/x-saltcast-recipes>{"format":1,"kind":"saltcast-carried-recipes"}`))
 	f.Add([]byte(`<script type="application/x-saltcast-recipes"><!--</script>`))
 	f.Add([]byte(`<scrip<script type='x'<script type=application/x-saltcast-recipes a="`))
+	// with preparations: a page, a block, an export; and an old format 1 copy
+	cp := c
+	cp.Preps = demoPreps(f)
+	if page, err = WithCarried([]byte(testPage), cp); err != nil {
+		f.Fatal(err)
+	}
+	js, _ = EncodeCarried(cp)
+	f.Add(page)
+	f.Add(js)
+	f.Add(recipe.Collection{Recipes: c.Recipes, Preps: cp.Preps}.Encode())
+	f.Add(recipe.Collection{Preps: cp.Preps[:1]}.Encode())
+	if old, err := os.ReadFile("testdata/carried-format1.html"); err == nil {
+		f.Add(old)
+	}
 	f.Fuzz(func(t *testing.T, data []byte) {
 		got, err := ExtractCarried(data)
 		if err != nil {
@@ -33,13 +49,13 @@ func FuzzExtractCarried(f *testing.F) {
 			if !errors.As(err, &ce) {
 				t.Fatalf("error %T %v is not a *CarryError", err, err)
 			}
-			if got.Recipes != nil || got.Sealed || got.SentBy != "" || got.AppVersion != "" || got.SavedAt != "" {
+			if got.Recipes != nil || got.Preps != nil || got.Sealed || got.SentBy != "" || got.AppVersion != "" || got.SavedAt != "" {
 				t.Fatalf("error %v came with %+v", err, got)
 			}
 			return
 		}
-		if len(got.Recipes) == 0 || len(got.Recipes) > recipe.MaxCollectionRecipes {
-			t.Fatalf("accepted %d recipes", len(got.Recipes))
+		if n := len(got.Recipes) + len(got.Preps); n == 0 || n > recipe.MaxCollectionRecipes {
+			t.Fatalf("accepted %d recipes and %d preparations", len(got.Recipes), len(got.Preps))
 		}
 		again, err := WithCarried([]byte(testPage), got)
 		if err != nil {
@@ -49,7 +65,8 @@ func FuzzExtractCarried(f *testing.F) {
 		if err != nil {
 			t.Fatalf("carried again, it does not read: %v", err)
 		}
-		if !bytes.Equal(recipe.EncodeCollection(back.Recipes), recipe.EncodeCollection(got.Recipes)) ||
+		if !bytes.Equal(recipe.Collection{Recipes: back.Recipes, Preps: back.Preps}.Encode(),
+			recipe.Collection{Recipes: got.Recipes, Preps: got.Preps}.Encode()) ||
 			back.SentBy != got.SentBy || back.SavedAt != got.SavedAt || back.AppVersion != got.AppVersion {
 			t.Fatalf("carried again, it changed")
 		}

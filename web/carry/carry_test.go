@@ -203,7 +203,7 @@ func TestExtractCarriedRefuses(t *testing.T) {
 		{"saved_at not a time", blockWith(t, resealed(t, `"saved_at":"2026-12-01T09:30:00Z"`, `"saved_at":"yesterday"`)), ErrMalformed},
 		{"a sealed bad recipe", blockWith(t, resealed(t, `"water_mL":20000`, `"water_mL":0`)), ErrMalformed},
 		// newer
-		{"newer block", blockWith(t, `{"format":2,"kind":"saltcast-carried-recipes","shelf":[],"sig":"x"}`), ErrNewerFormat},
+		{"newer block", blockWith(t, `{"format":`+strconv.Itoa(CarriedFormat+1)+`,"kind":"saltcast-carried-recipes","shelf":[],"sig":"x"}`), ErrNewerFormat},
 		{"newer collection in a block", blockWith(t, resealed(t, `"recipes":{"format":1,`, `"recipes":{"format":2,"items":[],`)), ErrNewerFormat},
 		{"newer JSON export", []byte(`{"format":3,"kind":"saltcast-recipes","things":[]}`), ErrNewerFormat},
 		{"newer single recipe", []byte(`{"format":2,"name":"x","solvent":"ethanol"}`), ErrNewerFormat},

@@ -16,27 +16,41 @@ import (
 // first, at a character boundary, so the list still reads back. An empty name becomes
 // "unnamed". mine is not changed; the result starts with mine.
 func TakeIn(mine, received []recipe.Recipe, day string) (all []recipe.Recipe, added, same int) {
+	return takeIn(mine, received, day, func(r *recipe.Recipe) *string { return &r.Name }, recipe.Recipe.Encode)
+}
+
+// TakeInPreps adds received preparations to mine as TakeIn adds recipes: a clash of names
+// keeps both, the received one renamed "name (received day)"; one identical to a kept
+// preparation of the same name is counted in same and not added again.
+func TakeInPreps(mine, received []recipe.Prep, day string) (all []recipe.Prep, added, same int) {
+	return takeIn(mine, received, day, func(p *recipe.Prep) *string { return &p.Name }, recipe.Prep.Encode)
+}
+
+// takeIn is TakeIn for recipes of any kind: name gives the name to read and set, encode the
+// canonical JSON that tells identical ones apart.
+func takeIn[R any](mine, received []R, day string, name func(*R) *string, encode func(R) []byte) (all []R, added, same int) {
 	day = cutName(day, 32) // a date; longer text would crowd out the name
-	all = make([]recipe.Recipe, len(mine), len(mine)+len(received))
+	all = make([]R, len(mine), len(mine)+len(received))
 	copy(all, mine)
 	taken := make(map[string]int, len(all)+len(received)) // name → index in all
-	for i, r := range all {
-		if _, ok := taken[r.Name]; !ok {
-			taken[r.Name] = i
+	for i := range all {
+		if _, ok := taken[*name(&all[i])]; !ok {
+			taken[*name(&all[i])] = i
 		}
 	}
 	for _, r := range received {
-		if strings.TrimSpace(r.Name) == "" {
-			r.Name = "unnamed"
+		n := name(&r)
+		if strings.TrimSpace(*n) == "" {
+			*n = "unnamed"
 		}
-		if i, ok := taken[r.Name]; ok {
-			if string(all[i].Encode()) == string(r.Encode()) {
+		if i, ok := taken[*n]; ok {
+			if string(encode(all[i])) == string(encode(r)) {
 				same++
 				continue
 			}
-			r.Name = freeName(r.Name, day, taken)
+			*n = freeName(*n, day, taken)
 		}
-		taken[r.Name] = len(all)
+		taken[*n] = len(all)
 		all = append(all, r)
 		added++
 	}
