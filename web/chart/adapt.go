@@ -221,12 +221,18 @@ func renderOrPlaceholder(title string, build func() (Chart, error)) string {
 // curve covers the methods' measured range, 0 to 40 °C, widened to the
 // day's temperature if that lies outside, with a note that it is
 // extrapolated there.
-func OxygenChartView(day gas.Conditions, method string, measured *float64, o Options) (OxygenView, error) {
+func OxygenChartView(day gas.Conditions, method string, measured *float64, o Options) (v OxygenView, err error) {
+	// v stays the zero view until the end: every error return is a bare one (smaller in the
+	// page's module than building a zero view at each).
 	sat, err := gas.OxygenSaturation(day, method)
 	if err != nil {
-		return OxygenView{}, err
+		return
 	}
 	lo, hi := math.Min(gas.O2MinC, day.TempC), math.Max(gas.O2MaxC, day.TempC)
+	// o.samples() points (60 by default, as each solubility curve): the app drew 41 (1 K steps
+	// over 0 to 40 °C) before it used this adapter. 60 keeps steps under 1 K when the curve is
+	// widened to the day's temperature (up to -2 to 50 °C), and the two are indistinguishable
+	// at the chart's size, so one number serves both the app and the sheet.
 	curve, err := Sample(lo, hi, o.samples(), func(t float64) (float64, error) {
 		c := day
 		c.TempC = t
@@ -234,31 +240,39 @@ func OxygenChartView(day gas.Conditions, method string, measured *float64, o Opt
 		return s.MgPerL, err
 	})
 	if err != nil {
-		return OxygenView{}, err
+		return
 	}
 	comma := o.DecimalComma
-	v := OxygenView{
-		Curve: curve,
-		CurveLabel: "Saturation at " + formatShort(day.PressureKPa, 4, comma) + " kPa, salinity " +
-			formatShort(day.Salinity, 3, comma) + " (" + sat.Method + ")",
-		Day:          &Point{day.TempC, sat.MgPerL},
-		Temp:         o.Temp,
-		DecimalComma: comma,
-	}
+	var notes []string
+	var reading *Point
 	if measured != nil {
-		v.Measured = &Point{day.TempC, *measured}
-		if pct, err := gas.PercentSaturation(*measured, sat); err == nil {
-			v.Notes = append(v.Notes, "Measured reading: "+formatShort(pct, 3, comma)+" % of saturation.")
-		} else {
-			return OxygenView{}, err
+		pct, err := gas.PercentSaturation(*measured, sat)
+		if err != nil {
+			return v, err
 		}
+		reading = &Point{day.TempC, *measured}
+		notes = append(notes, "Measured reading: "+formatShort(pct, 3, comma)+" % of saturation.")
 	}
 	if lo < gas.O2MinC || hi > gas.O2MaxC {
-		v.Notes = append(v.Notes, "Outside "+formatTemp(o.Temp.FromCelsius(gas.O2MinC), comma)+" to "+
+		notes = append(notes, "Outside "+formatTemp(o.Temp.FromCelsius(gas.O2MinC), comma)+" to "+
 			formatTemp(o.Temp.FromCelsius(gas.O2MaxC), comma)+" "+o.Temp.Symbol()+
 			" the curve is extrapolated beyond the method's measurements.")
 	}
-	return v, nil
+	return OxygenView{
+		Curve: curve,
+		// The label names the unit of every number, as the gas form does (salinity in g/kg,
+		// about the practical salinity the methods take), and the method, so a printed or
+		// copied chart says what it was drawn from; the app's own label (before the gas screen
+		// drew through this adapter) had the unit but no method, this one the method but no
+		// unit.
+		CurveLabel: "Saturation at " + formatShort(day.PressureKPa, 4, comma) + " kPa, salinity " +
+			formatShort(day.Salinity, 3, comma) + " g/kg (" + sat.Method + ")",
+		Day:          &Point{day.TempC, sat.MgPerL},
+		Measured:     reading,
+		Temp:         o.Temp,
+		DecimalComma: comma,
+		Notes:        notes,
+	}, nil
 }
 
 // OxygenSVG draws OxygenChartView and never fails: an input the gas

@@ -214,6 +214,12 @@ func TestOxygenView(t *testing.T) {
 	if last := v.Curve[len(v.Curve)-1]; last.X != 40 {
 		t.Errorf("curve ends at %v °C, want 40", last.X)
 	}
+	// The label names every unit and the method (the one label the app and sheet draw).
+	if want := "Saturation at 101.3 kPa, salinity 0 g/kg (" + gas.BensonKrause + ")"; v.CurveLabel != want {
+		t.Errorf("curve label = %q, want %q", v.CurveLabel, want)
+	}
+	// The chart the gas screen shows for this day, drawn through the adapter.
+	golden(t, "oxygen-day.svg", OxygenSVG(day, gas.BensonKrause, &measured, Options{}))
 	// 7.4 / 9.092 = 81.4 % of saturation.
 	if len(v.Notes) != 1 || !strings.Contains(v.Notes[0], "81.4 % of saturation") {
 		t.Errorf("notes = %q, want the measured reading as 81.4 %% of saturation", v.Notes)
