@@ -3,6 +3,7 @@
 package main
 
 import (
+	"strconv"
 	"syscall/js"
 
 	"honnef.co/go/js/dom/v2"
@@ -183,7 +184,15 @@ func download(name, mime, text string) {
 	js.Global().Call("setTimeout", revoke, 1000)
 }
 
-// today is the local date, as the sheet prints it.
+// today is the local date as YYYY-MM-DD (ISO 8601), as the sheet and the bottle label print
+// it: a month/day date reads the wrong way round in half the world.
 func today() string {
-	return js.Global().Get("Date").New().Call("toLocaleDateString").String()
+	d := js.Global().Get("Date").New()
+	two := func(n int) string {
+		if n < 10 {
+			return "0" + strconv.Itoa(n)
+		}
+		return strconv.Itoa(n)
+	}
+	return strconv.Itoa(d.Call("getFullYear").Int()) + "-" + two(d.Call("getMonth").Int()+1) + "-" + two(d.Call("getDate").Int())
 }

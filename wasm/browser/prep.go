@@ -90,7 +90,7 @@ func (a *app) startPrep() {
 	if s, ok := a.store.get(keyLabelBy); ok {
 		setValue(byID("p-label_by"), s)
 	}
-	setValue(byID("p-label_date"), isoToday())
+	setValue(byID("p-label_date"), today())
 
 	on(form, "input", a.onPrepInput)
 	on(form, "change", a.onPrepInput)
@@ -529,18 +529,6 @@ func (a *app) sharePrep() {
 	setValue(byID("prep-transfer"), link)
 	js.Global().Get("history").Call("replaceState", nil, "", PrepFragment(p))
 	setText(byID("m-prep-import"), "The link is in the box below; the preparation rides in it after the #, nothing is sent anywhere.")
-}
-
-// isoToday is the local date as YYYY-MM-DD (ISO 8601), for the label.
-func isoToday() string {
-	d := js.Global().Get("Date").New()
-	two := func(n int) string {
-		if n < 10 {
-			return "0" + strconv.Itoa(n)
-		}
-		return strconv.Itoa(n)
-	}
-	return strconv.Itoa(d.Call("getFullYear").Int()) + "-" + two(d.Call("getMonth").Int()+1) + "-" + two(d.Call("getDate").Int())
 }
 
 // prepUnits follows the unit switch: temperatures, masses and volumes on the form are shown
