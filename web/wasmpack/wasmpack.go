@@ -188,7 +188,16 @@ func Pack(module []byte, maxGap int) ([]byte, Stats, error) {
 	if err != nil {
 		return nil, st, err
 	}
+	dataSections := 0
 	for _, s := range secs {
+		if s.ID == sectionData {
+			// The binary format allows each known section once (WebAssembly Core
+			// Specification 2.0, §5.5.2); with two, a gap written out in one could cover
+			// bytes the other writes.
+			if dataSections++; dataSections > 1 {
+				return nil, st, formatError("more than one data section")
+			}
+		}
 		if s.ID == sectionDataCount {
 			// A data count section is there for memory.init and data.drop, which name
 			// segments by index; merging would renumber them.
