@@ -10,10 +10,26 @@ import (
 	"saltcast/core/unit"
 )
 
+// lookupCase is a name as a technician types it, and the compound and form it must find.
+type lookupCase struct{ in, id, form string }
+
+// checkLookups looks each name up and reports a wrong compound or form.
+func checkLookups(t *testing.T, tests []lookupCase) {
+	t.Helper()
+	for _, tt := range tests {
+		c, f, err := Lookup(tt.in)
+		if err != nil || c.ID != tt.id || f.Formula != tt.form {
+			var id, form string
+			if c != nil {
+				id, form = c.ID, f.Formula
+			}
+			t.Errorf("Lookup(%q) = %s, %s, %v; want %s, %s", tt.in, id, form, err, tt.id, tt.form)
+		}
+	}
+}
+
 func TestLookup(t *testing.T) {
-	tests := []struct {
-		in, id, form string
-	}{
+	tests := []lookupCase{
 		// ids
 		{"KNO3", "KNO3", "KNO3"},
 		{"Na2SO4", "Na2SO4", "Na2SO4"},
@@ -60,16 +76,7 @@ func TestLookup(t *testing.T) {
 		{"potassium sulphate", "K2SO4", "K2SO4"},
 		{"hydrohalite", "NaCl", "NaCl·2H2O"},
 	}
-	for _, tt := range tests {
-		c, f, err := Lookup(tt.in)
-		if err != nil || c.ID != tt.id || f.Formula != tt.form {
-			var id, form string
-			if c != nil {
-				id, form = c.ID, f.Formula
-			}
-			t.Errorf("Lookup(%q) = %s, %s, %v; want %s, %s", tt.in, id, form, err, tt.id, tt.form)
-		}
-	}
+	checkLookups(t, tests)
 	for _, bad := range []string{"", "unobtainium", "KNO4", "CuSO4·6H2O", strings.Repeat("x", 10000)} {
 		_, _, err := Lookup(bad)
 		var fe *unit.FieldError

@@ -57,13 +57,7 @@ const (
 	hydrateDisagreeTol = 0.15
 )
 
-var hydrateSecondSource = []struct {
-	id     string
-	tempC  float64
-	want   float64 // g anhydrous per 100 g water
-	tol    float64
-	source string
-}{
+var hydrateSecondSource = []solubilityCheck{
 	// CaCl2 (6H2O < 29.8 °C < 4H2O < 45.3 °C < 2H2O).
 	{"CaCl2", 0, 59.5, hydrateAgreeTol, wiki},
 	{"CaCl2", 10, 64.7, hydrateAgreeTol, wiki},
@@ -218,19 +212,7 @@ var hydrateIDs = []string{"CaCl2", "Ca(NO3)2", "MgCl2", "Na2CO3", "K2CO3", "NaHC
 	"FeSO4", "ZnSO4", "NiSO4", "CoCl2", "MnSO4", "MnCl2"}
 
 func TestHydrateSolubilityAgainstSecondSource(t *testing.T) {
-	rows := map[string]int{}
-	for _, tt := range hydrateSecondSource {
-		c, _ := mustLookup(t, tt.id)
-		got, _, _, err := c.Solubility(tt.tempC)
-		if err != nil {
-			t.Errorf("%s.Solubility(%v): %v", tt.id, tt.tempC, err)
-			continue
-		}
-		if math.Abs(got-tt.want) > tt.tol*tt.want {
-			t.Errorf("%s.Solubility(%v) = %.4g, want %v ± %.1f %% (%s)", tt.id, tt.tempC, got, tt.want, 100*tt.tol, tt.source)
-		}
-		rows[tt.id]++
-	}
+	rows := checkSolubilities(t, hydrateSecondSource)
 	for _, id := range hydrateIDs {
 		if rows[id] < 3 {
 			t.Errorf("%s: %d second-source rows, want at least 3", id, rows[id])
@@ -495,9 +477,7 @@ func TestHydrateDensity(t *testing.T) {
 }
 
 func TestHydrateLookupNames(t *testing.T) {
-	tests := []struct {
-		in, id, form string
-	}{
+	tests := []lookupCase{
 		{"washing soda", "Na2CO3", "Na2CO3·10H2O"},
 		{"soda crystals", "Na2CO3", "Na2CO3·10H2O"},
 		{"soda ash", "Na2CO3", "Na2CO3"},
@@ -532,16 +512,7 @@ func TestHydrateLookupNames(t *testing.T) {
 		{"manganese sulfate monohydrate", "MnSO4", "MnSO4·H2O"},
 		{"MnCl2.4H2O", "MnCl2", "MnCl2·4H2O"},
 	}
-	for _, tt := range tests {
-		c, f, err := Lookup(tt.in)
-		if err != nil || c.ID != tt.id || f.Formula != tt.form {
-			var id, form string
-			if c != nil {
-				id, form = c.ID, f.Formula
-			}
-			t.Errorf("Lookup(%q) = %s, %s, %v; want %s, %s", tt.in, id, form, err, tt.id, tt.form)
-		}
-	}
+	checkLookups(t, tests)
 }
 
 func TestHydrateHazardsAndCautions(t *testing.T) {

@@ -43,13 +43,7 @@ const (
 // saltSecondSource: g anhydrous per 100 g water at tempC from a source other than CRC 98th ed.
 // The Wikipedia "Solubility table" rows (wiki) for KMnO4, NaBr, KBr, KI and LiCl agree with the
 // CRC to under 1 %, so they are only weakly independent (probably older CRC editions).
-var saltSecondSource = []struct {
-	id     string
-	tempC  float64
-	want   float64
-	tol    float64
-	source string
-}{
+var saltSecondSource = []solubilityCheck{
 	{"(NH4)2SO4", 0, 70.6, saltAgreeTol, wiki},
 	{"(NH4)2SO4", 20, 75.4, saltAgreeTol, wiki},
 	{"(NH4)2SO4", 40, 81.2, saltAgreeTol, wiki},
@@ -180,19 +174,7 @@ var saltSecondSource = []struct {
 }
 
 func TestSaltSolubilityAgainstSecondSource(t *testing.T) {
-	rows := map[string]int{}
-	for _, tt := range saltSecondSource {
-		c, _ := mustLookup(t, tt.id)
-		got, _, _, err := c.Solubility(tt.tempC)
-		if err != nil {
-			t.Errorf("%s.Solubility(%v): %v", tt.id, tt.tempC, err)
-			continue
-		}
-		if math.Abs(got-tt.want) > tt.tol*tt.want {
-			t.Errorf("%s.Solubility(%v) = %.4g, want %v ± %.1f %% (%s)", tt.id, tt.tempC, got, tt.want, 100*tt.tol, tt.source)
-		}
-		rows[tt.id]++
-	}
+	rows := checkSolubilities(t, saltSecondSource)
 	for id, n := range rows {
 		if n < 3 {
 			t.Errorf("%s: %d second-source rows, want at least 3", id, n)
@@ -427,7 +409,7 @@ func TestSaltDensityHeldOut(t *testing.T) {
 }
 
 func TestSaltLookup(t *testing.T) {
-	tests := []struct{ in, id, form string }{
+	tests := []lookupCase{
 		{"AMS", "(NH4)2SO4", "(NH4)2SO4"},
 		{"ammonium sulphate", "(NH4)2SO4", "(NH4)2SO4"},
 		{"MAP", "NH4H2PO4", "NH4H2PO4"},
@@ -447,12 +429,7 @@ func TestSaltLookup(t *testing.T) {
 		{"Na2SO3.7H2O", "Na2SO3", "Na2SO3·7H2O"},
 		{"sodium sulphite", "Na2SO3", "Na2SO3"},
 	}
-	for _, tt := range tests {
-		c, f, err := Lookup(tt.in)
-		if err != nil || c.ID != tt.id || f.Formula != tt.form {
-			t.Errorf("Lookup(%q) = %v, %v, %v; want %s, %s", tt.in, c, f, err, tt.id, tt.form)
-		}
-	}
+	checkLookups(t, tests)
 }
 
 // TestSaltHazards: oxidizers and toxic salts carry the flags and the strong wording (GHS

@@ -307,43 +307,32 @@ func (a *app) renderReceived() {
 	}
 	setText(byID("received-from"), FromLine(a.got.from, a.got.source))
 	left := 0 // received recipes not yet in the user's list
-	for i, r := range a.got.from.Recipes {
+	// row lists one received item: its name as text, Open, and Take unless it is already kept.
+	// attr says which list it is in: data-i for recipes, data-p for preparations.
+	row := func(shown, name, attr string, i int, kept bool) {
 		li := add(list, "li", "", "")
-		add(li, "span", "nm", r.Name) // the sender's text, as text
+		add(li, "span", "nm", shown) // the sender's text, as text
 		look := add(li, "button", "act", "Open")
 		setAttr(look, "type", "button")
 		setAttr(look, "data-look", "")
-		setAttr(look, "data-i", itoa(i))
-		setAttr(look, "aria-label", "Open "+r.Name)
-		if InList(a.shelf.Recipes, r) {
+		setAttr(look, attr, itoa(i))
+		setAttr(look, "aria-label", "Open "+name)
+		if kept {
 			add(li, "span", "tag", "in your list")
-			continue
+			return
 		}
 		left++
 		take := add(li, "button", "act primary", "Take into my list")
 		setAttr(take, "type", "button")
 		setAttr(take, "data-take", "")
-		setAttr(take, "data-i", itoa(i))
-		setAttr(take, "aria-label", "Take "+r.Name+" into my list")
+		setAttr(take, attr, itoa(i))
+		setAttr(take, "aria-label", "Take "+name+" into my list")
+	}
+	for i, r := range a.got.from.Recipes {
+		row(r.Name, r.Name, "data-i", i, InList(a.shelf.Recipes, r))
 	}
 	for i, p := range a.got.from.Preps {
-		li := add(list, "li", "", "")
-		add(li, "span", "nm", "Preparation: "+p.Name) // the sender's text, as text
-		look := add(li, "button", "act", "Open")
-		setAttr(look, "type", "button")
-		setAttr(look, "data-look", "")
-		setAttr(look, "data-p", itoa(i))
-		setAttr(look, "aria-label", "Open "+p.Name)
-		if InListPrep(a.shelf.Preps, p) {
-			add(li, "span", "tag", "in your list")
-			continue
-		}
-		left++
-		take := add(li, "button", "act primary", "Take into my list")
-		setAttr(take, "type", "button")
-		setAttr(take, "data-take", "")
-		setAttr(take, "data-p", itoa(i))
-		setAttr(take, "aria-label", "Take "+p.Name+" into my list")
+		row("Preparation: "+p.Name, p.Name, "data-p", i, InListPrep(a.shelf.Preps, p))
 	}
 	setHidden(byID("take-all"), left == 0)
 	if left == 0 {
