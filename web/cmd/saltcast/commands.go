@@ -68,7 +68,7 @@ give the recipe as flags: every recipe key has a flag of the same name (water_g 
 --format recipe prints the recipe the flags make, to keep as a file. Required: --solute (or
 your own compound, --custom-…), the water (--water-g or --water-mL) and --dissolve-temp-C;
 without --saturation-pct, --charge-g or --clear-down-to-C the charge saturates the water.`,
-		Flags:   recipeFlags,
+		Flags: recipeFlags,
 		Options: append([]flagSpec{formatOpt("text: a readable batch sheet, cautions first; json: the plan for scripts (every key always there); "+
 			"recipe: the recipe the flags make, as a file to keep", "text", "json", "recipe")}, unitOpts...),
 		Examples: []string{
@@ -90,7 +90,7 @@ to weigh (or measure from the stock), the water, the concentration in every unit
 lowest temperature it can be stored at without crystals or ice. As JSON. Give a
 preparation file, or its keys as flags of the same name (final_volume_mL is
 --final-volume-mL; a volume also takes -L or -gal, a mass -kg or -lb, a temperature -F or -K).`,
-		Flags:   prepFlags,
+		Flags: prepFlags,
 		Options: []flagSpec{{Name: "format", Arg: "json|recipe", Choices: []string{"json", "recipe"}, Default: "json",
 			Help: "json: the worked preparation; recipe: the preparation the flags make, to keep as a file"}},
 		Examples: []string{
@@ -325,4 +325,3 @@ func padRight(s string, w int) string {
 func (c *command) allFlags() []flagSpec {
 	return append(c.Flags[:len(c.Flags):len(c.Flags)], c.Options...)
 }
-

@@ -250,10 +250,14 @@ func flagError(err error, flags []flagSpec, p *parsed) error {
 		return err
 	}
 	out := &unit.FieldError{Field: fe.Field, Value: fe.Value, Allowed: fe.Allowed}
-	if f := flagForKey(flags, fe.Field); f != nil {
-		out.Field = "--" + f.Name
+	key, index := fe.Field, "" // custom.points[2]: the third point of --custom-points
+	if i := strings.IndexByte(key, '['); i > 0 {
+		key, index = key[:i], key[i:]
+	}
+	if f := flagForKey(flags, key); f != nil {
+		out.Field = "--" + f.Name + index
 		if t, ok := p.typed[f.Key]; ok {
-			out.Field = t
+			out.Field = t + index
 			if u, ok := p.unit[f.Key]; ok {
 				// Typed in °F, lb...: show what was typed, and what it is in the unit the
 				// explanation uses.

@@ -44,6 +44,9 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	}
 	switch args[0] {
 	case "help", "-h", "--help":
+		if len(args) > 1 && (args[1] == "-h" || args[1] == "--help") {
+			args = []string{"help", "help"}
+		}
 		if len(args) == 1 {
 			io.WriteString(stdout, topHelp())
 			return 0
@@ -57,6 +60,10 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		io.WriteString(stdout, c.help())
 		return 0
 	case "--version", "version":
+		if len(args) == 2 && (args[1] == "-h" || args[1] == "--help") {
+			io.WriteString(stdout, findCommand("version").help())
+			return 0
+		}
 		if len(args) > 1 {
 			io.WriteString(stderr, "saltcast version: "+(&unit.FieldError{Field: "arguments", Value: strings.Join(args[1:], " "), Allowed: "none"}).Error()+"\n")
 			return 2
