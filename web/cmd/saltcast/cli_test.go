@@ -653,7 +653,8 @@ func TestReadmeCommandsRun(t *testing.T) {
 			t.Fatal(err)
 		}
 		n := 0
-		for _, line := range strings.Split(string(b), "\n") {
+		lines := strings.Split(strings.ReplaceAll(string(b), "\\\n", " "), "\n") // join continued lines
+		for _, line := range lines {
 			line = strings.TrimSpace(strings.TrimPrefix(strings.TrimSpace(line), "$"))
 			line = strings.TrimPrefix(line, "./bin/")
 			if !strings.HasPrefix(line, "saltcast ") || strings.ContainsAny(line, "<>|`…") || strings.Contains(line, ".json") {
@@ -677,4 +678,46 @@ func TestReadmeCommandsRun(t *testing.T) {
 func crystalsNone(js wire.Value) bool {
 	c, _ := js.Get("crystals_g")
 	return c.Kind != wire.Number || c.Num == 0
+}
+
+// The README's quick plan shows lines the command really prints: each line of the block
+// under "$ saltcast plan --solute KNO3 …" (up to the next command, leaving out "…") is a
+// line of the sheet, in the same order.
+func TestReadmeQuickPlan(t *testing.T) {
+	b, err := os.ReadFile("README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	const prompt = "$ saltcast plan --solute KNO3 "
+	doc := string(b)
+	i := strings.Index(doc, prompt)
+	if i < 0 {
+		t.Fatal("README.md shows no quick plan")
+	}
+	lines := strings.Split(doc[i:], "\n")
+	out, errs, code := run(t, "", append(words(strings.TrimPrefix(lines[0], "$ saltcast ")), "--format", "text")...)
+	if code != 0 {
+		t.Fatalf("%s: exit %d, %s", lines[0], code, errs)
+	}
+	got := strings.Split(out, "\n")
+	at, shown := 0, 0
+	for _, want := range lines[1:] {
+		if strings.HasPrefix(want, "$ ") || strings.HasPrefix(want, "```") {
+			break
+		}
+		if strings.TrimSpace(want) == "…" {
+			continue
+		}
+		for at < len(got) && got[at] != want {
+			at++
+		}
+		if at == len(got) {
+			t.Errorf("README.md shows %q, which the command does not print (in this order):\n%s", want, out)
+			return
+		}
+		shown++
+	}
+	if shown < 10 {
+		t.Errorf("README.md shows only %d lines of the quick plan", shown)
+	}
 }
