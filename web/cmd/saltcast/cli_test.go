@@ -721,3 +721,41 @@ func TestReadmeQuickPlan(t *testing.T) {
 		t.Errorf("README.md shows only %d lines of the quick plan", shown)
 	}
 }
+
+// Flags over a file change the file's recipe: the plan equals the plan of the file with the
+// same change made to the recipe itself.
+func TestFlagsOverFile(t *testing.T) {
+	const file = "../../../core/recipe/demo/demo-cuso4-crystals.json"
+	for _, tt := range []struct {
+		flags  []string
+		change func(r *recipe.Recipe)
+	}{
+		{[]string{"--cool-to-C", "5"}, func(r *recipe.Recipe) { r.CoolToC = recipe.Opt{Value: 5, Set: true} }},
+		{[]string{"--cool-to-F", "41", "--name", "colder"}, func(r *recipe.Recipe) {
+			r.CoolToC, r.Name = recipe.Opt{Value: 5, Set: true}, "colder"
+		}},
+		// Another choice of the amount replaces the file's saturation_pct.
+		{[]string{"--charge-g", "400"}, func(r *recipe.Recipe) {
+			r.SaturationPct, r.ChargeG = recipe.Opt{}, recipe.Opt{Value: 400, Set: true}
+		}},
+		// Water by volume replaces water by mass.
+		{[]string{"--water-L", "0,5", "--water-temp-C", "25"}, func(r *recipe.Recipe) {
+			r.WaterG, r.WaterML, r.WaterTempC = recipe.Opt{}, recipe.Opt{Value: 500, Set: true}, recipe.Opt{Value: 25, Set: true}
+		}},
+	} {
+		data, err := os.ReadFile(file)
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, err := recipe.Decode(data)
+		if err != nil {
+			t.Fatal(err)
+		}
+		tt.change(&r)
+		want, _ := planJSON(t, string(recipe.Fields.Encode(&r)), "-")
+		got, _ := planJSON(t, "", append([]string{file}, tt.flags...)...)
+		if got != want {
+			t.Errorf("plan %s %s:\n%s\nwant\n%s", file, strings.Join(tt.flags, " "), got, want)
+		}
+	}
+}

@@ -56,6 +56,7 @@ var commands = []*command{
 		Usage: []string{
 			"plan RECIPE.json [--format text|json] [--temp-unit C|F|K] [--mass-unit g|kg|lb]",
 			"plan - < RECIPE.json",
+			"plan RECIPE.json --cool-to-C 5 [other recipe flags]     (the file's recipe, changed by the flags)",
 			"plan --solute NAME --water-g MASS --dissolve-temp-C T [more recipe flags] [--format text|json|recipe]",
 		},
 		About: `Plans one batch: how much of the solid on the shelf to weigh into the water, below which
@@ -65,7 +66,9 @@ needed, with the cautions first. Give a recipe file (the app's export or one you
 give the recipe as flags: every recipe key has a flag of the same name (water_g is
 --water-g). A temperature flag ending in -C also takes -F or -K, a mass ending in -g also
 -kg or -lb, a volume ending in -mL also -L or -gal: the flag's name always says the unit.
---format recipe prints the recipe the flags make, to keep as a file. Required: --solute (or
+A file and flags together: the flags change the file's recipe (a flag of another choice, such
+as --charge-g over a file's saturation_pct, replaces that choice). --format recipe prints the
+recipe the flags make, to keep as a file. Required: --solute (or
 your own compound, --custom-…), the water (--water-g or --water-mL) and --dissolve-temp-C;
 without --saturation-pct, --charge-g or --clear-down-to-C the charge saturates the water.`,
 		Flags: recipeFlags,
@@ -74,6 +77,7 @@ without --saturation-pct, --charge-g or --clear-down-to-C the charge saturates t
 		Examples: []string{
 			"plan --solute KNO3 --water-g 500 --dissolve-temp-C 60 --saturation-pct 90 --cool-to-C 10",
 			"plan --solute CuSO4 --charged-form CuSO4·5H2O --water-lb 2 --dissolve-temp-F 140 --cool-to-F 68 --temp-unit F --mass-unit lb",
+			"plan recipe.json --cool-to-C 5 --cooling-time-min 120",
 			"plan recipe.json --format json > plan.json",
 		},
 	},
@@ -81,7 +85,7 @@ without --saturation-pct, --charge-g or --clear-down-to-C the charge saturates t
 		Name:    "prep",
 		Summary: "make up a solution to the mark (or dilute a stock): what to weigh, the water, storage",
 		Usage: []string{
-			"prep PREPARATION.json",
+			"prep PREPARATION.json [preparation flags that change it]",
 			"prep - < PREPARATION.json",
 			"prep --solute NAME --concentration X --concentration-unit U --final-volume-mL VOLUME [more flags] [--format json|recipe]",
 		},

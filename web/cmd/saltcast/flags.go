@@ -245,6 +245,10 @@ func flagsAllowed(flags []flagSpec) string {
 // value what was typed, and keys named in the explanation become flags. Errors that are not
 // about a field come back unchanged.
 func flagError(err error, flags []flagSpec, p *parsed) error {
+	var inFile fileError
+	if errors.As(err, &inFile) {
+		return err
+	}
 	var fe *unit.FieldError
 	if !errors.As(err, &fe) {
 		return err

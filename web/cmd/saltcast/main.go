@@ -155,11 +155,19 @@ func (c *command) planOrPrep(p *parsed, u units, stdin io.Reader, stdout io.Writ
 	switch {
 	case len(p.args) > 1:
 		return nil, &unit.FieldError{Field: "arguments", Value: strings.Join(p.args, " "), Allowed: "one " + kind + " file, or - for standard input"}
-	case len(p.args) == 1 && len(p.typed) > 0:
-		return nil, &unit.FieldError{Field: "arguments", Value: p.args[0], Allowed: "a " + kind + " file or " + kind + " flags, not both"}
 	case len(p.args) == 1:
 		if data, err = readRecipe(p.args[0], stdin); err != nil {
 			return nil, err
+		}
+		if len(p.typed) > 0 { // flags change the file's recipe: a what-if
+			if c.Name == "prep" {
+				data, err = overrideJSON(&recipe.PrepFields, data, p.args[0], p)
+			} else {
+				data, err = overrideJSON(&recipe.Fields, data, p.args[0], p)
+			}
+			if err != nil {
+				return nil, err
+			}
 		}
 	case len(p.typed) > 0:
 		if data, err = tableJSON(specs, p); err != nil {

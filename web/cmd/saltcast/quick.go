@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"strings"
 
 	"saltcast/core/recipe"
@@ -173,3 +174,67 @@ func parsePoints(flag, text string) ([][2]float64, error) {
 	}
 	return pts, nil
 }
+
+// overrideJSON reads a recipe file (data, called name) and puts the flags in p over it: a
+// flag replaces the file's value of its key, and a flag of another choice in a group
+// replaces the file's choice (--charge-g over a file's saturation_pct, --water-mL over its
+// water_g). Two flags of different choices in one group are refused. The result is written
+// as a file of the table's kind, to be decoded and checked as any file is.
+func overrideJSON[R any](t *recipe.Table[R], data []byte, name string, p *parsed) ([]byte, error) {
+	r, err := t.Decode(data)
+	if err != nil {
+		var fe *unit.FieldError
+		if errors.As(err, &fe) {
+			err = &unit.FieldError{Field: name + ": " + fe.Field, Value: fe.Value, Allowed: fe.Allowed}
+		}
+		return nil, fileError{err}
+	}
+	specs := t.Specs()
+	f := specs.NewForm()
+	t.ToForm(&r, &f)
+	chosen := map[string]string{} // group → the flag that chose it
+	for i := range specs {
+		s := &specs[i]
+		v, ok := p.vals[s.Key]
+		if !ok {
+			continue
+		}
+		group, choice := s.Group, s.Choice
+		if parent := s.Parent(); parent != "" {
+			ps, _ := specs.Lookup(parent)
+			group, choice = ps.Group, ps.Choice
+		}
+		if group != "" {
+			if prev, ok := chosen[group]; ok && f.Pick[group] != choice {
+				return nil, &unit.FieldError{Field: p.typed[s.Key], Value: p.raw[s.Key], Allowed: "not together with " + prev}
+			}
+			chosen[group] = p.typed[s.Key]
+			f.Pick[group] = choice
+		}
+		switch s.Kind {
+		case recipe.Text:
+			f.Text[s.Key] = v
+		case recipe.Points:
+			pts, err := parsePoints(p.typed[s.Key], v)
+			if err != nil {
+				return nil, err
+			}
+			f.Points = f.Points[:0]
+			for _, pt := range pts {
+				f.Points = append(f.Points, recipe.Point{TempC: pt[0], GPer100gWater: pt[1]})
+			}
+		default:
+			x, err := unit.ParseNumber(p.typed[s.Key], v)
+			if err != nil {
+				return nil, err
+			}
+			f.Num[s.Key] = x
+		}
+	}
+	return specs.FormJSON(&f), nil
+}
+
+// fileError is an error in a recipe file: it names the file's keys, not flags.
+type fileError struct{ error }
+
+func (e fileError) Unwrap() error { return e.error }
