@@ -46,7 +46,22 @@ var (
 	}
 )
 
-var recipeFlags = tableFlags(recipe.FieldSpecs)
+var recipeFlags = withDefaults(tableFlags(recipe.FieldSpecs), map[string]string{
+	// What the recipe's cross-key check requires (recipe.checkCombination), per flag.
+	"solute":   "required, or your own compound (--custom-name, --custom-molar-mass-g-per-mol, --custom-points)",
+	"water_g":  "required, or --water-mL",
+	"water_mL": "required, or --water-g",
+})
+
+// withDefaults sets the Default shown for the flags of the keys in d.
+func withDefaults(fs []flagSpec, d map[string]string) []flagSpec {
+	for i := range fs {
+		if text, ok := d[fs[i].Key]; ok {
+			fs[i].Default = text
+		}
+	}
+	return fs
+}
 var prepFlags = tableFlags(recipe.PrepFields.Specs())
 
 var commands = []*command{

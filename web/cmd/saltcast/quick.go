@@ -26,6 +26,8 @@ func tableFlags(specs recipe.Specs) []flagSpec {
 		// a choice "table (monotone PCHIP, the default), ...".
 		if h, d, ok := strings.Cut(s.Help, "; default "); ok {
 			f.Help, f.Default = h, d
+		} else if d, h, ok := strings.Cut(strings.TrimPrefix(s.Help, "default "), "; "); ok && strings.HasPrefix(s.Help, "default ") {
+			f.Help, f.Default = h, d
 		} else if s.Choices != nil && strings.Contains(s.Help, "the default") {
 			f.Default = strings.Fields(s.Help)[0]
 		}
@@ -46,10 +48,13 @@ func tableFlags(specs recipe.Specs) []flagSpec {
 		default:
 			f.Arg, f.Unit = "X", s.Unit
 		}
+		if h, ok := strings.CutSuffix(f.Help, " (required)"); ok {
+			f.Help, f.Default = h, "required"
+		}
 		if s.Allowed != "" {
 			f.Help += " (" + s.Allowed + ")"
 		}
-		if s.Need != "" || s.Required && s.Parent() != "" {
+		if s.Need != "" || s.Required {
 			f.Default = "required"
 			if s.Parent() != "" {
 				f.Default = "required with --" + flagName(s.Parent()) + "-…"
