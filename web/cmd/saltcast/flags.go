@@ -5,6 +5,7 @@ import (
 	"slices"
 	"strconv"
 	"strings"
+	"unicode"
 
 	"saltcast/core/recipe"
 	"saltcast/core/unit"
@@ -158,7 +159,7 @@ func parseFlags(flags []flagSpec, args []string, positional bool) (*parsed, erro
 			if !hasValue && i+1 < len(args) && !strings.HasPrefix(args[i+1], "--") {
 				value = args[i+1]
 			}
-			return nil, &unit.FieldError{Field: "--" + name, Value: value, Allowed: flagsAllowed(flags)}
+			return nil, &unit.FieldError{Field: shownFlag(name), Value: value, Allowed: flagsAllowed(flags)}
 		}
 		if !hasValue {
 			if i+1 >= len(args) {
@@ -326,4 +327,13 @@ func keysToFlags(s string, flags []flagSpec) string {
 		}
 	}
 	return b.String()
+}
+
+// shownFlag is an unknown flag as a message shows it: quoted when it holds characters that
+// do not print (a line break would split the one-line message).
+func shownFlag(name string) string {
+	if strings.IndexFunc(name, func(r rune) bool { return !unicode.IsPrint(r) }) >= 0 {
+		return strconv.Quote("--" + name)
+	}
+	return "--" + name
 }
