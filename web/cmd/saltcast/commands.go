@@ -251,7 +251,7 @@ func commandNames() string {
 // topHelp is what saltcast, saltcast help and saltcast --help print.
 func topHelp() string {
 	var b strings.Builder
-	b.WriteString("saltcast " + Version() + ": plan solutions near saturation and crystallization by cooling\n\n")
+	b.WriteString("saltcast: plan solutions near saturation and crystallization by cooling (version " + Version() + ")\n\n")
 	b.WriteString("Usage: saltcast COMMAND [flags]   (saltcast help COMMAND, or COMMAND --help, for its flags)\n\nCommands:\n")
 	for _, c := range commands {
 		b.WriteString("  " + padRight(c.Name, 13) + c.Summary + "\n")
