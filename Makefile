@@ -8,9 +8,13 @@ export PATH := $(shell $(GO) env GOROOT)/lib/wasm:$(PATH)
 
 all: build demo
 
+# VERSION names this build in the page, on its batch sheet and in `saltcast --version`: the
+# same `git describe` web.Version uses, else the first line of a VERSION file, else "dev".
+VERSION ?= $(shell git describe --tags --always --dirty 2>/dev/null || head -n 1 VERSION 2>/dev/null || echo dev)
+
 ## cli: the command-line tool in bin/saltcast
 cli:
-	$(GO) build -o bin/saltcast ./web/cmd/saltcast
+	$(GO) build -ldflags "-X main.version=$(VERSION)" -o bin/saltcast ./web/cmd/saltcast
 
 ## demo: plan the invented demo recipes (core/recipe/demo) and print them readably
 demo: cli
@@ -19,7 +23,7 @@ demo: cli
 ## build: dist/saltcast.html, the single offline file (installs zopfli first when root)
 build:
 	@bash web/scripts/deps-build.sh
-	$(GO) run ./web/bundle -out dist/saltcast.html
+	$(GO) run ./web/bundle -version "$(VERSION)" -out dist/saltcast.html
 	@echo "built $(CURDIR)/dist/saltcast.html"
 
 ## test-deps: what the browser and worker tests need (chromium via apt-get, workerd via npm ci)

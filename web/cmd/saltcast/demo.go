@@ -2,6 +2,7 @@ package main
 
 import (
 	"io"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 
@@ -14,7 +15,7 @@ import (
 // demo plans each recipe file (without files, the demo recipes of core/recipe/demo) and
 // prints it as a plain-text batch sheet. It stops at the first file that fails, with the
 // file named.
-func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
+func demo(files []string, u units, stdin io.Reader, stdout, stderr io.Writer) int {
 	read := func(name string) ([]byte, error) { return readRecipe(name, stdin) }
 	if len(files) == 0 {
 		for _, d := range demos.All {
@@ -35,7 +36,7 @@ func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
 					if i > 0 {
 						io.WriteString(stdout, "\n")
 					}
-					io.WriteString(stdout, Sheet(res))
+					io.WriteString(stdout, SheetIn(res, u))
 					continue
 				}
 			}
@@ -49,8 +50,11 @@ func demo(files []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	return 0
 }
 
-// sheet builds aligned "label  value" lines.
-type sheet struct{ b strings.Builder }
+// sheet builds aligned "label  value" lines, with quantities in the units u.
+type sheet struct {
+	b strings.Builder
+	u units
+}
 
 const labelWidth = 30
 
@@ -72,9 +76,38 @@ func (s *sheet) row(label, value string) {
 
 func (s *sheet) bullet(t string) { s.b.WriteString("  - " + t + "\n") }
 
-func n(v float64) string  { return unit.FormatCompact(v, 4) }
-func g(v float64) string  { return unit.FormatCompact(v, 4) + " g" }
-func tc(v float64) string { return unit.FormatCompact(v, 3) + " °C" }
+func n(v float64) string { return unit.FormatCompact(v, 4) }
+
+// g shows a mass given in grams, in the sheet's mass unit, to 4 significant figures.
+func (s *sheet) g(grams float64) string {
+	return unit.FormatCompact(s.u.mass(grams), 4) + " " + s.u.Mass
+}
+
+// tc shows a temperature given in °C on the sheet's scale, to 3 significant figures.
+func (s *sheet) tc(c float64) string {
+	if s.u.Temp == "C" {
+		return unit.FormatCompact(c, 3) + " " + unitSymbol(s.u.Temp)
+	}
+	// °F and K: to a tenth of a degree, as fine as 3 significant figures of a °C reading.
+	v := strconv.FormatFloat(s.u.temp(c), 'f', 1, 64)
+	v = strings.TrimSuffix(strings.TrimSuffix(v, "0"), ".")
+	if v == "-0" {
+		v = "0"
+	}
+	return v + " " + unitSymbol(s.u.Temp)
+}
+
+// dk shows a temperature difference given in K: in K, or in °F degrees on the °F scale.
+func (s *sheet) dk(k float64, sign bool) string {
+	v, sym := k, "K"
+	if s.u.Temp == "F" {
+		v, sym = k*1.8, "°F"
+	}
+	if sign {
+		return signed(v) + " " + sym
+	}
+	return n(v) + " " + sym
+}
 
 // signed writes v with an explicit + for positive numbers.
 func signed(v float64) string {
@@ -85,9 +118,13 @@ func signed(v float64) string {
 	return s
 }
 
-// Sheet renders a plan as a readable batch sheet (plain text, fixed layout).
-func Sheet(res recipe.Result) string {
-	var s sheet
+// Sheet renders a plan as a readable batch sheet (plain text, fixed layout) in °C and g.
+func Sheet(res recipe.Result) string { return SheetIn(res, defaultUnits) }
+
+// SheetIn renders a plan as a readable batch sheet in the units u: the cautions first, then
+// the charge, the target, seeding, the cooling programme, heat, warnings and sources.
+func SheetIn(res recipe.Result, u units) string {
+	s := sheet{u: u}
 	r := res.Result
 	name := res.Recipe.Name
 	if name == "" {
@@ -98,61 +135,74 @@ func Sheet(res recipe.Result) string {
 		s.b.WriteString(res.Recipe.Notes + "\n")
 	}
 
+	s.section("Cautions (read first)")
+	for _, c := range r.Cautions {
+		s.bullet(c)
+	}
+
 	s.section("Charge")
 	s.row("solute", r.SoluteID+" ("+r.SoluteName+")")
 	form := r.ChargedForm
 	if r.PurityPct < 100 {
 		form += ", " + n(r.PurityPct) + " % pure"
 	}
-	s.row("weigh", g(r.ChargeG)+" of "+form)
-	s.row("into water", g(r.WaterG))
+	s.row("weigh", s.g(r.ChargeG)+" of "+form)
+	water := s.g(r.WaterG)
+	if rc := res.Recipe; rc.WaterML.Set {
+		at := 20.0 // the recipe format's default measuring temperature
+		if rc.WaterTempC.Set {
+			at = rc.WaterTempC.Value
+		}
+		water += " (" + unit.FormatCompact(s.u.volume(rc.WaterML.Value), 4) + " " + unitSymbol(s.u.Volume) + " measured at " + s.tc(at) + ")"
+	}
+	s.row("into water", water)
 	if r.HydrateWaterG > 0 {
-		s.row("hydrate water joins it", g(r.HydrateWaterG)+" (total "+g(r.TotalWaterG)+")")
+		s.row("hydrate water joins it", s.g(r.HydrateWaterG)+" (total "+s.g(r.TotalWaterG)+")")
 	}
 	if r.ImpurityG > 0 {
-		s.row("insoluble impurity", g(r.ImpurityG)+" (taken as inert: it is filtered off with any solid)")
+		s.row("insoluble impurity", s.g(r.ImpurityG)+" (taken as inert: it is filtered off with any solid)")
 	}
-	s.row("dissolve at", tc(r.DissolveTempC)+", "+n(r.SaturationPct)+" % of saturation")
+	s.row("dissolve at", s.tc(r.DissolveTempC)+", "+n(r.SaturationPct)+" % of saturation")
 	s.row("concentration", n(r.ConcentrationG100)+" g per 100 g water (saturated: "+n(r.SolubilityAtStart)+")")
 	if r.MinWaterG > 0 {
-		s.row("least water for this charge", g(r.MinWaterG))
+		s.row("least water for this charge", s.g(r.MinWaterG))
 	}
 	if r.HasClearDown {
-		s.row("sized to stay clear down to", tc(r.ClearDownToC))
+		s.row("sized to stay clear down to", s.tc(r.ClearDownToC))
 	}
 	if r.HasFreezing {
-		s.row("freezing point", tc(r.FreezingPointC)+" (ice forms below it)")
+		s.row("freezing point", s.tc(r.FreezingPointC)+" (ice forms below it)")
 	}
 	if r.HasOnset {
-		s.row("saturation temperature", tc(r.SaturationTempC)+" (crystals can form beyond it)")
+		s.row("saturation temperature", s.tc(r.SaturationTempC)+" (crystals can form beyond it)")
 	} else {
 		s.row("saturation temperature", "none: "+r.OnsetNote)
 	}
 
 	if r.HasTarget {
-		s.section("At " + tc(r.TargetC))
+		s.section("At " + s.tc(r.TargetC))
 		if r.EvaporatedWaterG > 0 {
-			s.row("water evaporated", g(r.EvaporatedWaterG))
+			s.row("water evaporated", s.g(r.EvaporatedWaterG))
 		}
 		if r.CrystalsG > 0 {
-			s.row("crystals", g(r.CrystalsG)+" of "+r.CrystalPhase)
+			s.row("crystals", s.g(r.CrystalsG)+" of "+r.CrystalPhase)
 			s.row("yield (anhydrous basis)", n(r.YieldPct)+" %")
 		} else {
 			s.row("crystals", "none: the liquor stays unsaturated ("+n(r.LiquorG100)+" of "+n(r.SolubilityAtTargetG100)+" g per 100 g water)")
 		}
 		if r.HasIce {
-			s.row("ice", g(r.IceG))
+			s.row("ice", s.g(r.IceG))
 			if r.HasEutectic {
-				s.row("eutectic", tc(r.EutecticC)+": below it "+r.EutecticPhase+" and ice freeze out together")
+				s.row("eutectic", s.tc(r.EutecticC)+": below it "+r.EutecticPhase+" and ice freeze out together")
 			}
 		}
 		if r.Frozen {
 			s.row("mother liquor", "none: below the eutectic the batch freezes solid")
 		} else {
-			s.row("mother liquor", g(r.LiquorG)+", "+n(r.LiquorG100)+" g per 100 g water")
+			s.row("mother liquor", s.g(r.LiquorG)+", "+n(r.LiquorG100)+" g per 100 g water")
 		}
 		for _, p := range r.PhaseChanges {
-			s.row("phase change", p.From+" → "+p.To+" at "+tc(p.TempC))
+			s.row("phase change", p.From+" → "+p.To+" at "+s.tc(p.TempC))
 		}
 	}
 
@@ -160,22 +210,22 @@ func Sheet(res recipe.Result) string {
 		s.section("Unseeded cooling: supersaturation")
 		s.row("temperature", "S = c/c*    excess, g per 100 g water")
 		for _, p := range r.Supersaturation {
-			s.row(tc(p.TempC), pad(unit.FormatNumber(p.Ratio, 4), 12)+n(p.DeltaG))
+			s.row(s.tc(p.TempC), pad(unit.FormatNumber(p.Ratio, 4), 12)+n(p.DeltaG))
 		}
 		if r.HasMetastable {
-			s.row("expected nucleation near", tc(r.NucleationC)+" (metastable zone "+n(r.MetastableWidthK)+" K)")
+			s.row("expected nucleation near", s.tc(r.NucleationC)+" (metastable zone "+s.dk(r.MetastableWidthK, false)+")")
 		}
 	}
 	if r.HasSeedHint {
 		s.section("Seeding")
-		s.row("seed at", tc(r.SeedHintC)+" with "+g(r.SeedLowG)+" to "+g(r.SeedHighG)+" of "+r.SeedPhase)
+		s.row("seed at", s.tc(r.SeedHintC)+" with "+s.g(r.SeedLowG)+" to "+s.g(r.SeedHighG)+" of "+r.SeedPhase)
 		s.row("rule", r.SeedRule)
 	}
 	if len(r.Programme) > 0 {
-		s.section("Cooling programme, " + tc(r.ProgrammeFromC) + " → " + tc(r.ProgrammeToC))
+		s.section("Cooling programme, " + s.tc(r.ProgrammeFromC) + " → " + s.tc(r.ProgrammeToC))
 		s.row("time, min", pad("linear", 12)+"cubic (Mullin & Nývlt)")
 		for _, p := range r.Programme {
-			s.row(n(p.TimeMin), pad(tc(p.LinearC), 12)+tc(p.CubicC))
+			s.row(n(p.TimeMin), pad(s.tc(p.LinearC), 12)+s.tc(p.CubicC))
 		}
 	}
 
@@ -187,7 +237,7 @@ func Sheet(res recipe.Result) string {
 		if q < 0 {
 			verb, q = "dissolving releases", -q
 		}
-		s.row(verb, n(q)+" kJ (insulated: "+signed(r.DissolutionTempChangeK)+" K; ΔsolH at infinite dilution)")
+		s.row(verb, n(q)+" kJ (insulated: "+s.dk(r.DissolutionTempChangeK, true)+"; ΔsolH at infinite dilution)")
 	}
 	if r.HasTarget {
 		if r.HeatBasis != "" && r.CrystalsG > 0 {
@@ -212,7 +262,7 @@ func Sheet(res recipe.Result) string {
 		}
 		s.row("sensible heat to remove", n(r.SensibleHeatKJ)+" kJ")
 		if r.HasIce && r.IceG > 0 {
-			s.row("ice freezing releases", n(r.IceHeatKJ)+" kJ ("+g(r.IceG)+" of ice)")
+			s.row("ice freezing releases", n(r.IceHeatKJ)+" kJ ("+s.g(r.IceG)+" of ice)")
 		}
 		duty := n(r.CoolingDutyKJ) + " kJ"
 		if r.HasCoolingPower {
@@ -221,23 +271,19 @@ func Sheet(res recipe.Result) string {
 		s.row("cooling duty", duty)
 	}
 	if r.HasAdiabatic {
-		s.section("Seeded at " + tc(r.SeedAtC) + " in an insulated vessel")
-		end := tc(r.AdiabaticEndC) + " (" + signed(r.AdiabaticRiseK) + " K)"
+		s.section("Seeded at " + s.tc(r.SeedAtC) + " in an insulated vessel")
+		end := s.tc(r.AdiabaticEndC) + " (" + s.dk(r.AdiabaticRiseK, true) + ")"
 		if r.AdiabaticHeld {
-			end = "held at " + tc(r.AdiabaticEndC) + ", the end of " + r.AdiabaticPhase + "'s range (" + signed(r.AdiabaticRiseK) + " K)"
+			end = "held at " + s.tc(r.AdiabaticEndC) + ", the end of " + r.AdiabaticPhase + "'s range (" + s.dk(r.AdiabaticRiseK, true) + ")"
 		}
 		s.row("end temperature", end)
-		s.row("crystals at once", g(r.AdiabaticCrystalsG)+" of "+r.AdiabaticPhase+" (design heat, "+n(r.AdiabaticEnthalpyKJPerMol)+" kJ/mol)")
+		s.row("crystals at once", s.g(r.AdiabaticCrystalsG)+" of "+r.AdiabaticPhase+" (design heat, "+n(r.AdiabaticEnthalpyKJPerMol)+" kJ/mol)")
 		if r.AdiabaticCrystalsLowG != r.AdiabaticCrystalsG || r.AdiabaticEndLowC != r.AdiabaticEndC {
-			s.row("with the lowest estimate", g(r.AdiabaticCrystalsLowG)+", ends at "+tc(r.AdiabaticEndLowC))
+			s.row("with the lowest estimate", s.g(r.AdiabaticCrystalsLowG)+", ends at "+s.tc(r.AdiabaticEndLowC))
 		}
 		s.row("energy balance", n(r.AdiabaticHeatKJ)+" kJ released = "+n(r.AdiabaticHeatCapacityKJPerK)+" kJ/K × "+n(r.AdiabaticRiseK)+" K")
 	}
 
-	s.section("Cautions")
-	for _, c := range r.Cautions {
-		s.bullet(c)
-	}
 	if len(r.Warnings) > 0 {
 		s.section("Warnings")
 		for _, w := range r.Warnings {
@@ -256,4 +302,55 @@ func pad(s string, w int) string {
 		return s + strings.Repeat(" ", w-k)
 	}
 	return s + " "
+}
+
+// units are the units a text sheet shows: temperature "C", "F" or "K"; mass "g", "kg" or
+// "lb"; volume "mL", "L" or "gal" (US). Plans and recipes themselves are always °C, g, mL.
+type units struct{ Temp, Mass, Volume string }
+
+var defaultUnits = units{Temp: "C", Mass: "g", Volume: "mL"}
+
+// unitsOf reads --temp-unit, --mass-unit and --volume-unit (checked by parseFlags).
+func unitsOf(p *parsed) (units, error) {
+	u := defaultUnits
+	if v, ok := p.opts["temp-unit"]; ok {
+		u.Temp = v
+	}
+	if v, ok := p.opts["mass-unit"]; ok {
+		u.Mass = v
+	}
+	if v, ok := p.opts["volume-unit"]; ok {
+		u.Volume = v
+	}
+	return u, nil
+}
+
+func (u units) temp(c float64) float64 {
+	switch u.Temp {
+	case "F":
+		return unit.FahrenheitFromCelsius(c)
+	case "K":
+		return unit.KelvinFromCelsius(c)
+	}
+	return c
+}
+
+func (u units) mass(g float64) float64 {
+	switch u.Mass {
+	case "kg":
+		return unit.KilogramsFromGrams(g)
+	case "lb":
+		return unit.PoundsFromGrams(g)
+	}
+	return g
+}
+
+func (u units) volume(mL float64) float64 {
+	switch u.Volume {
+	case "L":
+		return unit.LitersFromMilliliters(mL)
+	case "gal":
+		return unit.USGallonsFromMilliliters(mL)
+	}
+	return mL
 }

@@ -12,7 +12,7 @@ import (
 func runGasArgs(t *testing.T, args ...string) (stdout, stderr string, code int) {
 	t.Helper()
 	var out, errb bytes.Buffer
-	code = runGas(args, &out, &errb)
+	code = Run(append([]string{"gas"}, args...), strings.NewReader(""), &out, &errb)
 	return out.String(), errb.String(), code
 }
 
@@ -87,23 +87,27 @@ func TestGasCommandErrors(t *testing.T) {
 		args  []string
 		field string
 	}{
-		{[]string{"--temp-C"}, "temp-C"},
-		{[]string{"--temp-C", "20", "--temp-C", "21"}, "temp_C"},
-		{[]string{"--temp-C", "hot"}, "temp_C"},
-		{[]string{"--temp-C", "20", "--pressure-kPa", "-1"}, "pressure_kPa"},
-		{[]string{"--temp-C", "20", "--salinity", "60"}, "salinity"},
-		{[]string{"--temp-C", "20", "--colour", "blue"}, "colour"},
-		{[]string{"temp", "20"}, "command"},
-		{[]string{"outgas", "--from-C", "80", "--to-C", "20"}, "to_C"},
-		{[]string{"table", "--format", "pdf"}, "format"},
-		{[]string{"-t", "20"}, "arguments"},
+		{[]string{"--temp-C"}, "gas: --temp-C"},
+		{[]string{"--temp-C", "20", "--temp-C", "21"}, "gas: --temp-C"},
+		{[]string{"--temp-C", "20", "--temp-F", "70"}, "gas: --temp-F"},
+		{[]string{"--temp-C", "hot"}, "gas: --temp-C"},
+		{[]string{"--temp-C", "20", "--pressure-kPa", "-1"}, "gas: --pressure-kPa"},
+		{[]string{"--temp-C", "20", "--salinity", "60"}, "gas: --salinity"},
+		{[]string{"--temp-C", "20", "--colour", "blue"}, "gas: --colour"},
+		{[]string{"--temp-C", "20", "--pressure", "30", "--pressure-unit", "psi"}, "gas: --pressure-unit"},
+		{[]string{"temp", "20"}, "gas: command"},
+		{[]string{"outgas", "--from-C", "80", "--to-C", "20"}, "gas outgas: --to-C"},
+		{[]string{"outgas", "--from-F", "176", "--to-F", "68"}, "gas outgas: --to-F"},
+		{[]string{"table", "--format", "pdf"}, "gas table: --format"},
+		{[]string{"table", "--temp-from-C", "20", "--temp-to-C", "10"}, "gas table: --temp-to-C"},
+		{[]string{"-t", "20"}, "gas: arguments"},
 	}
 	for _, tt := range tests {
 		out, errs, code := runGasArgs(t, tt.args...)
 		if code != 2 || out != "" {
 			t.Errorf("%v: exit %d, stdout %q; want 2 and nothing", tt.args, code, out)
 		}
-		if !strings.HasPrefix(errs, "saltcast gas: "+tt.field+":") {
+		if !strings.HasPrefix(errs, "saltcast "+tt.field+":") {
 			t.Errorf("%v: stderr %q does not name %q", tt.args, errs, tt.field)
 		}
 	}
@@ -111,7 +115,7 @@ func TestGasCommandErrors(t *testing.T) {
 
 func TestGasHelp(t *testing.T) {
 	out, _, code := runGasArgs(t, "--help")
-	if code != 0 || !strings.Contains(out, "saltcast gas outgas") {
+	if code != 0 || !strings.Contains(out, "saltcast gas --temp-C 20") {
 		t.Errorf("help: exit %d\n%s", code, out)
 	}
 }

@@ -1,15 +1,19 @@
 // Command saltcast is the command-line face of Saltcast: the same answers as the app and the
-// lab service, as JSON on standard output, for scripts, QC records and tests.
+// lab service, as readable text for people at a terminal and as JSON for scripts, QC records
+// and tests.
 //
-//	saltcast solubility --solute KNO3 --temp-C 20
 //	saltcast plan recipe.json          (or - for standard input)
-//	saltcast prep preparation.json     (or -: a solution made up to the mark)
+//	saltcast plan --solute KNO3 --water-g 500 --dissolve-temp-C 60 --cool-to-C 10
+//	saltcast prep preparation.json     (or -, or its keys as flags: a solution made up to the mark)
+//	saltcast solubility --solute KNO3 --temp-C 20
 //	saltcast compounds
-//	saltcast gas --temp-C 20           (see saltcast gas --help)
-//	saltcast demo [recipe.json ...]    (plans printed as a readable batch sheet; the
-//	                                    built-in invented demos without files)
+//	saltcast gas --temp-C 20           (and gas outgas, gas table)
+//	saltcast demo [recipe.json ...]    (plans printed as readable batch sheets)
+//	saltcast help [command]            (or command --help; saltcast --version)
 //
-// Errors go to standard error; the exit status is 2 for a usage or input error and 1 when
+// Every recipe key has a flag of the same name (water_g is --water-g), taken from the recipe
+// table (core/recipe), so the flags cannot fall behind the format. Errors go to standard
+// error naming the flag as typed; the exit status is 2 for a usage or input error and 1 when
 // Saltcast itself fails.
 package main
 
@@ -18,6 +22,7 @@ import (
 	"os"
 	"strings"
 
+	"saltcast/core/recipe"
 	"saltcast/core/unit"
 	"saltcast/web/api"
 )
@@ -25,27 +30,6 @@ import (
 func main() {
 	os.Exit(Run(os.Args[1:], os.Stdin, os.Stdout, os.Stderr))
 }
-
-const usage = `saltcast: crystallization and solubility planning
-
-  saltcast solubility --solute KNO3 --temp-C 20
-      solubility of a library compound (g anhydrous per 100 g water) and its stable solid, as JSON
-  saltcast plan recipe.json        (or "-" to read the recipe from standard input)
-      the plan of one batch recipe, as JSON
-  saltcast prep preparation.json   (or "-" to read it from standard input)
-      a solution made up to the mark (or diluted from a stock): what to weigh, the water,
-      the concentration in every unit and the lowest storage temperature, as JSON
-  saltcast compounds
-      the compound library, as JSON
-  saltcast gas ...
-      dissolved gases (saltcast gas --help)
-  saltcast demo [recipe.json ...]
-      plans of one or more recipes printed as readable batch sheets (without files: the
-      invented demo recipes built in)
-
-Numbers accept a decimal comma (12,5). Errors go to standard error with exit status 2.
-Saltcast is a planning aid, not a safety assessment: read the SDS and follow local rules.
-`
 
 // maxRecipeBytes bounds what plan and demo read from a file or standard input; the recipe
 // decoder refuses anything past its own 64 KiB limit with a clear message.
@@ -55,69 +39,198 @@ const maxRecipeBytes = 1 << 20
 // status. Tests call it directly.
 func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if len(args) == 0 {
-		io.WriteString(stderr, usage)
+		io.WriteString(stderr, topHelp())
 		return 2
 	}
-	cmd, rest := args[0], args[1:]
+	switch args[0] {
+	case "help", "-h", "--help":
+		if len(args) > 1 && (args[1] == "-h" || args[1] == "--help") {
+			args = []string{"help", "help"}
+		}
+		if len(args) == 1 {
+			io.WriteString(stdout, topHelp())
+			return 0
+		}
+		c := findCommand(args[1:]...)
+		if c == nil {
+			io.WriteString(stderr, "saltcast help: "+(&unit.FieldError{Field: "command", Value: strings.Join(args[1:], " "),
+				Allowed: commandNames() + ", gas outgas or gas table"}).Error()+"\n")
+			return 2
+		}
+		io.WriteString(stdout, c.help())
+		return 0
+	case "--version", "version":
+		if len(args) == 2 && (args[1] == "-h" || args[1] == "--help") {
+			io.WriteString(stdout, findCommand("version").help())
+			return 0
+		}
+		if len(args) > 1 {
+			io.WriteString(stderr, "saltcast version: "+(&unit.FieldError{Field: "arguments", Value: strings.Join(args[1:], " "), Allowed: "none"}).Error()+"\n")
+			return 2
+		}
+		io.WriteString(stdout, "saltcast "+Version()+"\n")
+		return 0
+	}
+	words := args[:1]
+	if args[0] == "gas" && len(args) > 1 && !strings.HasPrefix(args[1], "-") && args[1] != "help" {
+		words = args[:2]
+	}
+	c := findCommand(words...)
+	if c == nil {
+		prefix, allowed := "saltcast", commandNames()+" (see saltcast help)"
+		if len(words) == 2 {
+			prefix, allowed = "saltcast gas", "gas, gas outgas or gas table (see saltcast help gas)"
+		}
+		io.WriteString(stderr, prefix+": "+(&unit.FieldError{Field: "command", Value: strings.Join(words, " "), Allowed: allowed}).Error()+"\n")
+		return 2
+	}
+	return c.run(args[len(words):], stdin, stdout, stderr)
+}
+
+// run parses the command's flags and answers.
+func (c *command) run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	positional := c.Name == "plan" || c.Name == "prep" || c.Name == "demo"
+	flags := c.allFlags()
 	fail := func(err error) int {
-		io.WriteString(stderr, "saltcast "+cmd+": "+err.Error()+"\n")
+		io.WriteString(stderr, "saltcast "+c.Name+": "+err.Error()+"\n")
 		if api.IsInputError(err) {
 			return 2
 		}
 		return 1
 	}
-	var out []byte
-	var err error
-	switch cmd {
-	case "help", "-h", "--help":
-		io.WriteString(stdout, usage)
-		return 0
-	case "solubility":
-		p, help, ferr := flags(rest, "e.g. --temp-C 20")
-		if help {
-			io.WriteString(stdout, usage)
-			return 0
-		}
-		if ferr != nil {
-			return fail(ferr)
-		}
-		out, err = api.Solubility(p)
-	case "plan":
-		if len(rest) != 1 {
-			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "one recipe file, or - for standard input"})
-		}
-		data, rerr := readRecipe(rest[0], stdin)
-		if rerr != nil {
-			return fail(rerr)
-		}
-		out, err = api.Plan(data)
-	case "prep":
-		if len(rest) != 1 {
-			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "one preparation file, or - for standard input"})
-		}
-		data, rerr := readRecipe(rest[0], stdin)
-		if rerr != nil {
-			return fail(rerr)
-		}
-		out, err = api.Prep(data)
-	case "compounds":
-		if len(rest) != 0 {
-			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "none"})
-		}
-		out = api.Compounds()
-	case "gas":
-		return runGas(rest, stdout, stderr)
-	case "demo":
-		return demo(rest, stdin, stdout, stderr)
-	default:
-		return fail(&unit.FieldError{Field: "command", Value: cmd, Allowed: "solubility, plan, prep, compounds, gas, demo or help"})
-	}
+	p, err := parseFlags(flags, args, positional)
 	if err != nil {
 		return fail(err)
 	}
+	if p.help {
+		io.WriteString(stdout, c.help())
+		return 0
+	}
+	u, err := unitsOf(p)
+	if err != nil {
+		return fail(err)
+	}
+	var out []byte
+	switch c.Name {
+	case "plan", "prep":
+		out, err = c.planOrPrep(p, u, stdin, stdout)
+	case "solubility":
+		out, err = api.Solubility(p.vals)
+	case "compounds":
+		out = api.Compounds()
+	case "gas":
+		out, err = api.Gas(p.vals)
+	case "gas outgas":
+		out, err = api.Outgas(p.vals)
+	case "gas table":
+		out, err = api.GasTable(p.vals)
+		if err == nil && format(p, stdout, "text") == "text" {
+			out, err = gasTableText(out)
+		}
+	case "demo":
+		return demo(p.args, u, stdin, stdout, stderr)
+	}
+	if err != nil {
+		if len(p.typed) > 0 {
+			err = flagError(err, flags, p)
+		}
+		return fail(err)
+	}
 	stdout.Write(out)
-	io.WriteString(stdout, "\n")
+	if len(out) == 0 || out[len(out)-1] != '\n' {
+		io.WriteString(stdout, "\n")
+	}
 	return 0
+}
+
+// planOrPrep reads the recipe (a file, standard input, or the flags) and answers in the
+// format asked.
+func (c *command) planOrPrep(p *parsed, u units, stdin io.Reader, stdout io.Writer) ([]byte, error) {
+	kind, specs := "recipe", recipe.FieldSpecs
+	if c.Name == "prep" {
+		kind, specs = "preparation", recipe.PrepFields.Specs()
+	}
+	var data []byte
+	var err error
+	switch {
+	case len(p.args) > 1:
+		return nil, &unit.FieldError{Field: "arguments", Value: strings.Join(p.args, " "), Allowed: "one " + kind + " file, or - for standard input"}
+	case len(p.args) == 1:
+		if data, err = readRecipe(p.args[0], stdin); err != nil {
+			return nil, err
+		}
+		if len(p.typed) > 0 { // flags change the file's recipe: a what-if
+			if c.Name == "prep" {
+				data, err = overrideJSON(&recipe.PrepFields, data, p.args[0], p)
+			} else {
+				data, err = overrideJSON(&recipe.Fields, data, p.args[0], p)
+			}
+			if err != nil {
+				return nil, err
+			}
+		}
+	case len(p.typed) > 0:
+		if data, err = tableJSON(specs, p); err != nil {
+			return nil, err
+		}
+	default:
+		return nil, &unit.FieldError{Field: "arguments", Value: "", Allowed: "a " + kind + " file, - for standard input, or the " + kind + " as flags (see saltcast " + c.Name + " --help)"}
+	}
+	def := "text"
+	if c.Name == "prep" {
+		def = "json"
+	}
+	switch format(p, stdout, def) {
+	case "recipe":
+		if c.Name == "prep" {
+			pr, err := recipe.DecodePrep(data)
+			if err != nil {
+				return nil, err
+			}
+			return recipe.PrepFields.Encode(&pr), nil
+		}
+		r, err := recipe.Decode(data)
+		if err != nil {
+			return nil, err
+		}
+		return recipe.Fields.Encode(&r), nil
+	case "text":
+		r, err := recipe.Decode(data)
+		if err != nil {
+			return nil, err
+		}
+		res, err := recipe.Plan(r)
+		if err != nil {
+			return nil, err
+		}
+		return []byte(SheetIn(res, u)), nil
+	}
+	if c.Name == "prep" {
+		return api.Prep(data)
+	}
+	return api.Plan(data)
+}
+
+// format is the --format asked for; without one, def on a terminal and json otherwise (a
+// pipe or a file: a script reads it).
+func format(p *parsed, stdout io.Writer, def string) string {
+	if f, ok := p.opts["format"]; ok {
+		return f
+	}
+	if isTerminal(stdout) {
+		return def
+	}
+	return "json"
+}
+
+// isTerminal reports whether w is a terminal (a character device), where people read.
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	if !ok {
+		return false
+	}
+	st, err := f.Stat()
+	return err == nil && st.Mode()&os.ModeCharDevice != 0
 }
 
 // readRecipe reads a recipe file, or standard input for "-".
@@ -147,34 +260,4 @@ func errText(err error) string {
 		return pe.Err.Error()
 	}
 	return err.Error()
-}
-
-// flags turns "--temp-C 20" and "--temp-C=20" into Params{"temp_C": "20"}. A flag given
-// twice, a flag without a value and a word that is not a flag are usage errors; example is
-// shown in the message for the last.
-func flags(args []string, example string) (p api.Params, help bool, err error) {
-	p = api.Params{}
-	for i := 0; i < len(args); i++ {
-		a := args[i]
-		if a == "-h" || a == "--help" || a == "help" {
-			return nil, true, nil
-		}
-		if !strings.HasPrefix(a, "--") || len(a) == 2 {
-			return nil, false, &unit.FieldError{Field: "arguments", Value: a, Allowed: "flags written --name value, " + example}
-		}
-		name, value, hasValue := strings.Cut(a[2:], "=")
-		if !hasValue {
-			if i+1 >= len(args) {
-				return nil, false, &unit.FieldError{Field: name, Value: "", Allowed: "a value after --" + name}
-			}
-			i++
-			value = args[i]
-		}
-		key := strings.ReplaceAll(name, "-", "_")
-		if _, dup := p[key]; dup {
-			return nil, false, &unit.FieldError{Field: key, Value: value, Allowed: "each flag once"}
-		}
-		p[key] = value
-	}
-	return p, false, nil
 }

@@ -61,7 +61,7 @@ func TestSheetHeatAndCold(t *testing.T) {
 	}{
 		{acetateSeeded, []string{"heat basis                    heat of fusion of the hydrate", "held at 58 °C", "with the lowest estimate", "heat-capacity model"}},
 		{kno3Ice, []string{"freezing point                -1.43 °C", "  ice  ", "ice freezing releases", "eutectic"}},
-		{dichromate, []string{"Cautions\n  - TOXIC: "}},
+		{dichromate, []string{"Cautions (read first)\n  - TOXIC: "}},
 	} {
 		out, errOut, code := run(t, tt.stdin, "demo", "-")
 		if code != 0 {
@@ -142,14 +142,15 @@ func TestErrors(t *testing.T) {
 		code    int
 		wantErr string
 	}{
-		{nil, "", 2, "saltcast solubility"},
+		{nil, "", 2, "Commands:\n  plan "},
 		{[]string{"frobnicate"}, "", 2, "command"},
-		{[]string{"solubility", "--solute", "KNO3"}, "", 2, "temp_C"},
-		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "1.234,5"}, "", 2, "temp_C"},
-		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "500"}, "", 2, "temp_C"},
-		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "20", "--colour", "red"}, "", 2, "colour"},
-		{[]string{"solubility", "--solute", "kryptonite", "--temp-C", "20"}, "", 2, "solute"},
-		{[]string{"solubility", "--temp-C"}, "", 2, "temp-C"},
+		{[]string{"solubility", "--solute", "KNO3"}, "", 2, "solubility: --temp-C: "},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "1.234,5"}, "", 2, "solubility: --temp-C: "},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "500"}, "", 2, "solubility: --temp-C: "},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-F", "500"}, "", 2, `solubility: --temp-F: "500"`},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "20", "--colour", "red"}, "", 2, "--colour"},
+		{[]string{"solubility", "--solute", "kryptonite", "--temp-C", "20"}, "", 2, "--solute"},
+		{[]string{"solubility", "--temp-C"}, "", 2, "--temp-C"},
 		{[]string{"plan"}, "", 2, "arguments"},
 		{[]string{"plan", "no-such-file.json"}, "", 2, "no-such-file.json"},
 		{[]string{"plan", "-"}, `{"solute":"KNO3","water_g":-5,"dissolve_temp_C":60}`, 2, "water_g"},
@@ -161,6 +162,23 @@ func TestErrors(t *testing.T) {
 		{[]string{"prep", "-"}, `{"solute":"KCl","concentration":1,"concentration_unit":"M","final_volume_mL":100}`, 2, "concentration_unit"},
 		{[]string{"prep", "-"}, `{"solute":"KH2PO4","concentration":1,"concentration_unit":"mol/L","final_mass_g":100}`, 2, "concentration_unit"},
 		{[]string{"demo", "-"}, `{"solute":"KNO3","water_g":100,"dissolve_temp_C":20,"cool_to_C":40}`, 2, "cool_to_C"},
+		// A file's errors name its keys; flags' errors name the flags.
+		{[]string{"plan", "--solute", "KNO3", "--water-g", "100", "--dissolve-temp-C", "20", "--cool-to-C", "40", "--format", "json"}, "", 2, "--cool-to-C"},
+		{[]string{"plan", "--solute", "KNO3", "--water-g", "-5", "--dissolve-temp-C", "20"}, "", 2, `plan: --water-g: "-5"`},
+		{[]string{"plan", "--solute", "KNO3", "--water-kg", "-5", "--dissolve-temp-C", "20"}, "", 2, `plan: --water-kg: "-5"`},
+		{[]string{"plan", "--solute", "KNO3", "--water-g", "5", "--dissolve-temp-C", "20", "--charge-g", "1", "--saturation-pct", "50"}, "", 2, "only one of --saturation-pct, --charge-g and --clear-down-to-C"},
+		{[]string{"plan", "--solute", "KNO3", "--water-g", "5"}, "", 2, "--dissolve-temp-C: "},
+		{[]string{"plan", "--solute", "KNO3", "--water-g", "5", "--water-lb", "1", "--dissolve-temp-C", "20"}, "", 2, "--water-lb"},
+		{[]string{"plan", "no-such-file.json", "--solute", "KNO3"}, "", 2, "no-such-file.json"},
+		{[]string{"plan", "-", "--cool-to-C", "5"}, `{"solute":"KNO3","water_g":-1,"dissolve_temp_C":60}`, 2, `plan: -: water_g: "-1"`},
+		{[]string{"plan", "../../../core/recipe/demo/demo-cuso4-crystals.json", "--charge-g", "300", "--saturation-pct", "50"}, "", 2, "--charge-g"},
+		{[]string{"plan", "--custom-points", "10 5; 20", "--custom-name", "x"}, "", 2, "--custom-points"},
+		{[]string{"plan", "--format", "pdf", "x.json"}, "", 2, "--format"},
+		{[]string{"plan", "--temp-unit", "R", "x.json"}, "", 2, "--temp-unit"},
+		{[]string{"plan", "-x"}, "", 2, "arguments"},
+		{[]string{"prep", "--solute", "KCl", "--concentration", "1", "--concentration-unit", "M", "--final-volume-L", "1"}, "", 2, "--concentration-unit"},
+		{[]string{"help", "frobnicate"}, "", 2, "command"},
+		{[]string{"version", "x"}, "", 2, "arguments"},
 	}
 	for _, tt := range tests {
 		out, errOut, code := run(t, tt.stdin, tt.args...)
@@ -172,7 +190,7 @@ func TestErrors(t *testing.T) {
 
 func TestHelpAndCompounds(t *testing.T) {
 	out, _, code := run(t, "", "help")
-	if code != 0 || !strings.Contains(out, "saltcast plan") {
+	if code != 0 || !strings.Contains(out, "\n  plan ") {
 		t.Errorf("help: exit %d, %q", code, out)
 	}
 	out, _, code = run(t, "", "compounds")
@@ -191,16 +209,24 @@ func TestHelpAndCompounds(t *testing.T) {
 }
 
 // An unknown flag is refused in the same words by every subcommand: exit status 2 and
-// `saltcast <command>: bogus: "1" is not allowed; allowed: one of the keys: …`.
+// `saltcast <command>: --bogus: "1" is not allowed; allowed: one of the flags: …`.
 func TestUnknownFlagOneWording(t *testing.T) {
 	for _, args := range [][]string{
 		{"solubility", "--solute", "KNO3", "--temp-C", "20", "--bogus", "1"},
 		{"gas", "--temp-C", "20", "--bogus", "1"},
 		{"gas", "outgas", "--from-C", "20", "--to-C", "80", "--bogus=1"},
 		{"gas", "table", "--bogus", "1"},
+		{"plan", "--bogus", "1"},
+		{"prep", "--bogus", "1"},
+		{"demo", "--bogus", "1"},
+		{"compounds", "--bogus", "1"},
 	} {
 		_, errs, code := run(t, "", args...)
-		want := "saltcast " + args[0] + `: bogus: "1" is not allowed; allowed: one of the keys: `
+		cmd := args[0]
+		if len(args) > 1 && !strings.HasPrefix(args[1], "-") {
+			cmd += " " + args[1]
+		}
+		want := "saltcast " + cmd + `: --bogus: "1" is not allowed; allowed: one of the flags: `
 		if code != 2 || !strings.HasPrefix(errs, want) {
 			t.Errorf("saltcast %s: exit %d, stderr %q; want 2 and %q…", strings.Join(args, " "), code, errs, want)
 		}
