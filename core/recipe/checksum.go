@@ -1,20 +1,38 @@
 package recipe
 
-import "saltcast/core/wire"
+import (
+	"math"
+
+	"saltcast/core/wire"
+)
 
 // ChecksumSig is the number of significant digits each number of a recipe keeps in the
 // encoding Checksum hashes. The page shows a number in °F, lb or US gal with ten significant
 // digits and stores what is typed back in °C, g and mL: a relative error up to 5e-10, well
 // inside half a step of the eighth digit (at least 5e-9), so the same recipe shown and typed
 // in any unit system gives the same checksum, while any change a balance (seven digits at
-// most) or a thermometer can show changes it.
+// most) can show changes it. Temperatures are rounded to ChecksumTempC instead: near 0 °C a
+// relative rounding would keep digits that ten digits in K or °F do not carry.
 const ChecksumSig = 8
+
+// ChecksumTempC is the step, in °C (= K), temperatures are rounded to in the encoding Checksum
+// hashes: ten times finer than the 1 mK the best laboratory thermometers read (common
+// practice), a hundred times coarser than ten digits of a temperature in K or °F.
+const ChecksumTempC = 1e-4
+
+// checksumNum rounds one number of kind k as Checksum hashes it.
+func checksumNum(v float64, k Kind) float64 {
+	if k == Temp {
+		return math.Round(v/ChecksumTempC)*ChecksumTempC + 0 // + 0: −0 prints as 0
+	}
+	return wire.RoundSig(v, ChecksumSig)
+}
 
 // Checksum returns a short fingerprint of the recipe's inputs, 8 lowercase hex digits, for
 // telling a printed batch sheet's recipe from another: the CRC-32 (CRC-32/ISO-HDLC, the
 // CRC of zip and PNG) of the recipe's canonical encoding, that is Encode (keys in the order
 // of Fields, whatever the order of the file read) with every number rounded to ChecksumSig
-// significant digits, and without the name and notes, which do not change the batch (the
+// significant digits (temperatures to ChecksumTempC), and without the name and notes, which do not change the batch (the
 // sheet prints the name beside the checksum). Text is hashed as written: "CuSO4" and
 // "copper sulfate" give different checksums. It is a check against mix-ups, not a seal:
 // anyone can make a recipe with a given checksum.
@@ -33,13 +51,13 @@ func (r Recipe) Checksum() string {
 		switch {
 		case f.Opt != nil:
 			o := f.Opt(&r)
-			o.Value = wire.RoundSig(o.Value, ChecksumSig)
+			o.Value = checksumNum(o.Value, f.Kind)
 		case f.Num != nil:
 			n := f.Num(&r)
-			*n = wire.RoundSig(*n, ChecksumSig)
+			*n = checksumNum(*n, f.Kind)
 		case f.Points != nil:
 			for j, p := range *f.Points(&r) {
-				(*f.Points(&r))[j] = Point{wire.RoundSig(p.TempC, ChecksumSig), wire.RoundSig(p.GPer100gWater, ChecksumSig)}
+				(*f.Points(&r))[j] = Point{checksumNum(p.TempC, Temp), checksumNum(p.GPer100gWater, Plain)}
 			}
 		}
 	}

@@ -65,8 +65,9 @@ func TestChecksumIgnoresKeyOrder(t *testing.T) {
 }
 
 // Every input of the batch changes the checksum; the name and notes do not (they are printed
-// beside it). Each number present is nudged by one part in a million (a change a balance or a
-// thermometer can show), each text gets a letter more, and each optional number absent is set.
+// beside it). Each number present is nudged by one part in a million (the seventh digit a
+// balance shows) and each temperature by 1 mK (the finest a laboratory thermometer reads;
+// common practice), each text gets a letter more, and each optional number absent is set.
 func TestChecksumFollowsEveryInput(t *testing.T) {
 	for _, base := range demoRecipes(t) {
 		want := base.Checksum()
@@ -89,11 +90,15 @@ func TestChecksumFollowsEveryInput(t *testing.T) {
 			switch {
 			case f.Opt != nil:
 				o := f.Opt(&r)
-				if o.Set {
+				if o.Set && f.Kind == recipe.Temp {
+					o.Value += 1e-3
+				} else if o.Set {
 					o.Value = o.Value*(1+1e-6) + 1e-6
 				} else {
 					*o = recipe.Some(1)
 				}
+			case f.Num != nil && f.Kind == recipe.Temp:
+				*f.Num(&r) += 1e-3
 			case f.Num != nil:
 				*f.Num(&r) *= 1 + 1e-6
 			case f.Text != nil:
@@ -113,9 +118,10 @@ func TestChecksumFollowsEveryInput(t *testing.T) {
 	}
 }
 
-// Property: over random changes of one number of a demo recipe, by a relative step from 1e-7
-// to 10, the checksum changes every time, and the same recipe always gives the same one
-// (fixed seed, so a failure can be replayed).
+// Property: over random changes of one number of a demo recipe, by a relative step from 1e-6
+// (a balance's seventh digit) to about 50, or for a temperature by 1 mK to 65 K, the checksum
+// changes every time, and the same recipe always gives the same one (fixed seed, so a failure
+// can be replayed).
 func TestChecksumChangesWithInputs(t *testing.T) {
 	rng := rand.New(rand.NewPCG(14, 2026))
 	rs := demoRecipes(t)
@@ -123,18 +129,24 @@ func TestChecksumChangesWithInputs(t *testing.T) {
 		base := rs[rng.IntN(len(rs))]
 		r := base
 		var opts []*recipe.Opt
+		var temp []bool
 		for i := range recipe.Fields.Fields {
 			f := &recipe.Fields.Fields[i]
 			if f.Opt != nil && f.Parent() == "" && f.Opt(&r).Set {
 				opts = append(opts, f.Opt(&r))
+				temp = append(temp, f.Kind == recipe.Temp)
 			}
 		}
-		o := opts[rng.IntN(len(opts))]
-		step := 1e-7 * float64(int64(1)<<rng.IntN(27))
-		if maybe := rng.IntN(2); maybe == 0 {
-			step = -step / 2
+		i := rng.IntN(len(opts))
+		o := opts[i]
+		sign := float64(1 - 2*rng.IntN(2))
+		step := 1e-6 * float64(int64(1)<<rng.IntN(26))
+		if temp[i] {
+			step = 1e-3 * float64(int64(1)<<rng.IntN(17))
+			o.Value += sign * step
+		} else {
+			o.Value *= 1 + sign*step/2
 		}
-		o.Value *= 1 + step
 		if r.Checksum() == base.Checksum() {
 			t.Errorf("%s: a relative change of %g leaves the checksum %s", base.Name, step, base.Checksum())
 		}
