@@ -4,6 +4,7 @@ package main
 
 import (
 	"errors"
+	"math"
 	"syscall/js"
 
 	"saltcast/core/gas"
@@ -27,6 +28,10 @@ var gasPick = map[string]string{"gas": "O2", "pressure_unit": "kPa", "pressure_f
 
 // pressureSteps are the field table's column steps in each pressure unit (about 2 kPa).
 var pressureSteps = map[string]float64{"kPa": 2, "hPa": 20, "mmHg": 15, "inHg": 0.6, "atm": 0.02}
+
+// pressureResolution is the step a pressure worked out from the altitude is rounded to for
+// the field table's columns: about 0.1 kPa.
+var pressureResolution = map[string]float64{"kPa": 0.1, "hPa": 1, "mmHg": 1, "inHg": 0.01, "atm": 0.001}
 
 // pressurePlaceholders show one standard atmosphere in each unit.
 var pressurePlaceholders = map[string]string{"kPa": "101.325", "hPa": "1013.25", "mmHg": "760", "inHg": "29.92", "atm": "1"}
@@ -285,7 +290,7 @@ func (a *app) gasCompute() error {
 		sources = append(sources, o.Source)
 	}
 
-	cols, colsKPa := pressureColumns(kPa, pUnit)
+	cols, colsKPa := pressureColumns(kPa, pUnit, altNote != "")
 	tbl, err := gas.OxygenTable(steps(0, 40, 1), gas.ColumnsPressure, colsKPa, cond.Salinity, gas.BensonKrause)
 	if err != nil {
 		return err
@@ -347,13 +352,19 @@ func steps(from, to, step float64) []float64 {
 
 // pressureColumns are the field table's pressures in the unit shown (cols) and in kPa: the
 // day's and two either side, about 2 kPa apart, kept inside the range the equations take.
-func pressureColumns(day float64, pUnit string) (cols, kPa []float64) {
+// rounded centres them on the day's pressure rounded to pressureResolution (for a pressure
+// worked out from the altitude rather than typed).
+func pressureColumns(day float64, pUnit string, rounded bool) (cols, kPa []float64) {
 	per, err := gas.PressureKPa("pressure", 1, pUnit)
 	if err != nil {
 		per, pUnit = 1, "kPa"
 	}
+	center := day / per
+	if rounded {
+		center = math.Round(center/pressureResolution[pUnit]) * pressureResolution[pUnit]
+	}
 	for _, d := range []float64{-2, -1, 0, 1, 2} {
-		c := day/per + d*pressureSteps[pUnit]
+		c := center + d*pressureSteps[pUnit]
 		if p := c * per; p >= gas.O2MinKPa && p <= gas.O2MaxKPa {
 			cols = append(cols, c)
 			kPa = append(kPa, p)
