@@ -15,7 +15,7 @@ import (
 
 // TestRecordScreenshots writes PNGs of the gas screen (the barometer in mmHg, then the
 // altitude, then N2, with the field table scrolled under its header) and of the batch sheet in
-// print emulation, at a tablet's portrait and a laptop's landscape size.
+// print emulation, at a tablet's portrait and a laptop's landscape size and on a phone.
 func TestRecordScreenshots(t *testing.T) {
 	dir := shotsDir(t)
 	if err := os.MkdirAll(dir, 0o755); err != nil {
@@ -39,7 +39,7 @@ func TestRecordScreenshots(t *testing.T) {
 			t.Fatal(err)
 		}
 	}
-	for _, size := range [][2]int64{{768, 1024}, {1280, 800}} {
+	for _, size := range [][2]int64{{768, 1024}, {1280, 800}, {390, 844}} {
 		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
 			t.Fatal(err)
 		}
