@@ -260,7 +260,7 @@ func TestGasScreen(t *testing.T) {
 	mustEval[bool](t, ctx, `document.querySelector('#units [name="unit_temp"]').value="C", document.querySelector('#units [name="unit_temp"]').dispatchEvent(new Event("change",{bubbles:true})), true`)
 	setField(t, ctx, "gas", "temp_C", "12")
 	setField(t, ctx, "gas", "salinity", "0")
-	setField(t, ctx, "gas", "pressure_kPa", "101,325")
+	setField(t, ctx, "gas", "pressure", "101,325")
 	got := outputNumber(t, ctx, "saturation_mg_per_L")
 	want, err := gas.OxygenSaturation(gas.Conditions{TempC: 12, PressureKPa: 101.325}, gas.BensonKrause)
 	if err != nil {

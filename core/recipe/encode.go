@@ -35,6 +35,7 @@ func (res Result) encode(e *wire.Encoder) {
 	e.BeginObject()
 	e.Key("format").Int(CurrentFormat)
 	e.Key("name").String(res.Recipe.Name)
+	e.Key("recipe_check").String(res.Recipe.Checksum())
 	e.Key("solute").String(r.SoluteID)
 	e.Key("solute_name").String(r.SoluteName)
 	e.Key("charged_form").String(r.ChargedForm)

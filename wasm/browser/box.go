@@ -137,6 +137,7 @@ func (a *app) renderShelf() {
 	for i, r := range a.shelf.Recipes {
 		li := add(list, "li", "", "")
 		add(li, "span", "nm", r.Name) // the user's text, as text
+		setAttr(add(li, "span", "sum", r.Checksum()), "title", "recipe check, as printed on its batch sheet")
 		open := add(li, "button", "act", "Open")
 		setAttr(open, "type", "button")
 		setAttr(open, "data-open", itoa(i))

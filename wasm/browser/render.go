@@ -345,6 +345,8 @@ func (a *app) renderSheet() {
 	}
 	setText(byID("s-name"), name)
 	setText(byID("s-date"), today())
+	setText(byID("s-checksum"), r.Recipe.Checksum())
+	a.renderRecord(r)
 	fillList(byID("s-cautions"), r.Cautions)
 	markCautions(byID("s-cautions"), r.CautionKinds)
 	fillList(byID("s-warnings"), orNone(r.Warnings))
@@ -396,4 +398,43 @@ func (a *app) renderSheet() {
 		fillProgramme(body, r, a.u, false, true)
 	}
 	setHidden(pt.Get("parentElement"), len(r.Programme) == 0)
+}
+
+// renderRecord fills the sheet's weighing record: a row for each amount weighed or measured
+// out (and the crystals collected), its planned value as the sheet's results show it, and
+// empty cells for what the balance showed, the lot number and the balance used.
+func (a *app) renderRecord(r *recipe.Result) {
+	tb := q(byID("s-weigh"), "tbody")
+	clear(tb)
+	show := func(key string) string {
+		if f, ok := FigureByKey(key); ok {
+			if text, ut, ok := f.Show(r, a.u); ok {
+				return text + " " + ut
+			}
+		}
+		return ""
+	}
+	row := func(what, planned string) {
+		if planned == "" {
+			return
+		}
+		tr := add(tb, "tr", "", "")
+		setAttr(add(tr, "th", "", what), "scope", "row")
+		add(tr, "td", "", planned)
+		for range 3 {
+			add(tr, "td", "fill", "")
+		}
+	}
+	row("Solid: "+r.ChargedForm, show("charge_g"))
+	water := show("water_g")
+	for _, in := range InputRows(r.Recipe, a.u) {
+		if in.Key == "water_mL" { // measured by volume: the volume first, its mass beside
+			water = in.Text + " " + in.Unit + " (" + water + ")"
+		}
+	}
+	row("Water", water)
+	if r.HasSeedHint {
+		row("Seed crystals", show("seed_low_g")+" to "+show("seed_high_g"))
+	}
+	row("Crystals collected (expected)", show("crystals_g"))
 }

@@ -260,13 +260,11 @@ func OxygenChartView(day gas.Conditions, method string, measured *float64, o Opt
 	}
 	return OxygenView{
 		Curve: curve,
-		// The label names the unit of every number, as the gas form does (salinity in g/kg,
-		// about the practical salinity the methods take), and the method, so a printed or
-		// copied chart says what it was drawn from; the app's own label (before the gas screen
-		// drew through this adapter) had the unit but no method, this one the method but no
-		// unit.
-		CurveLabel: "Saturation at " + formatShort(day.PressureKPa, 4, comma) + " kPa, salinity " +
-			formatShort(day.Salinity, 3, comma) + " g/kg (" + sat.Method + ")",
+		// The label names the unit of every number, as the gas form does (practical
+		// salinity, PSS-78, has none), and the method, so a printed or copied chart says what
+		// it was drawn from.
+		CurveLabel: "Saturation at " + formatShort(day.PressureKPa, 4, comma) + " kPa, practical salinity " +
+			formatShort(day.Salinity, 3, comma) + " (" + sat.Method + ")",
 		Day:          &Point{day.TempC, sat.MgPerL},
 		Measured:     reading,
 		Temp:         o.Temp,

@@ -215,7 +215,7 @@ func TestOxygenView(t *testing.T) {
 		t.Errorf("curve ends at %v °C, want 40", last.X)
 	}
 	// The label names every unit and the method (the one label the app and sheet draw).
-	if want := "Saturation at 101.3 kPa, salinity 0 g/kg (" + gas.BensonKrause + ")"; v.CurveLabel != want {
+	if want := "Saturation at 101.3 kPa, practical salinity 0 (" + gas.BensonKrause + ")"; v.CurveLabel != want {
 		t.Errorf("curve label = %q, want %q", v.CurveLabel, want)
 	}
 	// The chart the gas screen shows for this day, drawn through the adapter.
