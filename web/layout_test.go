@@ -1,0 +1,75 @@
+//go:build browser
+
+package web_test
+
+import (
+	"strconv"
+	"testing"
+
+	"github.com/chromedp/chromedp"
+)
+
+// layoutSizes are the viewports the screens are designed for (CSS px): tablets in both
+// orientations (768×1024 and 800×1280 portrait, 1024×768 and 1280×800 landscape) and a
+// 390 px wide phone.
+var layoutSizes = [][2]int64{{768, 1024}, {800, 1280}, {1024, 768}, {1280, 800}, {390, 844}}
+
+// maxHeaderPx bounds the header on a tablet: one row of 48 px touch targets and its padding.
+// On a phone it takes two rows and scrolls away with the page.
+const maxHeaderPx, maxPhoneHeaderPx = 64, 120
+
+// While a technician types in a field deep in the batch form, the charge to weigh and the
+// onset temperature stay on screen, uncovered, showing numbers; the field itself is not
+// hidden under anything pinned to the top; the header stays one row on a tablet; and the
+// amount switch stays one row. At every size above.
+func TestResultsInViewWhileTyping(t *testing.T) {
+	u := appURL(t)
+	ctx := tab(t)
+	for _, size := range layoutSizes {
+		name := strconv.FormatInt(size[0], 10) + "x" + strconv.FormatInt(size[1], 10)
+		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
+			t.Fatal(err)
+		}
+		open(t, ctx, u)
+		click(t, ctx, `[data-demo="cuso4"]`)
+		head := mustEval[float64](t, ctx, `document.querySelector("header.top").getBoundingClientRect().height`)
+		if limit := float64(maxHeaderPx); size[0] < 561 && head > maxPhoneHeaderPx || size[0] >= 561 && head > limit {
+			t.Errorf("%s: the header is %.0f px high", name, head)
+		}
+		rows := mustEval[int](t, ctx, `new Set([...document.querySelectorAll('#recipe .seg[aria-label="Amount given as"] span')].map(s => Math.round(s.getBoundingClientRect().top))).size`)
+		if rows != 1 {
+			t.Errorf("%s: the amount switch wraps onto %d rows", name, rows)
+		}
+		for _, field := range []string{"f-liquor_heat_capacity_kJ_per_kgK", "f-notes", "f-cool_to_C"} {
+			for _, block := range []string{"start", "end"} {
+				// focus as a tap does, then the field at the top or the bottom of the view:
+				// the two places the browser scrolls a field it focuses to.
+				mustEval[bool](t, ctx, `(function(){const el=document.getElementById("`+field+`"); el.focus(); el.scrollIntoView({block:"`+block+`"}); return true})()`)
+				if msg := mustEval[string](t, ctx, `(function(){
+					const vw = innerWidth, vh = innerHeight;
+					function seen(el) {
+						const r = el.getBoundingClientRect();
+						if (r.width === 0 || r.height === 0) return "not shown";
+						const x = r.left + r.width/2, y = r.top + r.height/2;
+						if (x < 0 || x > vw || y < 0 || y > vh) return "outside the view (centre at " + Math.round(x) + "," + Math.round(y) + ")";
+						const hit = document.elementFromPoint(x, y);
+						if (!hit || !(hit === el || el.contains(hit) || hit.contains(el) && hit.tagName !== "HEADER")) return "covered by " + (hit ? hit.tagName + "." + hit.className : "nothing");
+						return "";
+					}
+					const input = document.getElementById("`+field+`");
+					let why = seen(input);
+					if (why) return "the field itself is " + why;
+					for (const key of ["charge_g", "saturation_temp_C"]) {
+						const shown = [...document.querySelectorAll('[data-strip="' + key + '"], #outcome output[data-key="' + key + '"]')]
+							.filter(el => seen(el) === "");
+						if (shown.length === 0) return key + " is not in view";
+						if (!/^-?[0-9]/.test(shown[0].textContent.trim())) return key + " shows " + JSON.stringify(shown[0].textContent);
+					}
+					return "";
+				})()`); msg != "" {
+					t.Errorf("%s, typing in %s scrolled to the %s: %s", name, field, block, msg)
+				}
+			}
+		}
+	}
+}
