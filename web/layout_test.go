@@ -15,8 +15,9 @@ import (
 var layoutSizes = [][2]int64{{768, 1024}, {800, 1280}, {1024, 768}, {1280, 800}, {390, 844}}
 
 // maxHeaderPx bounds the header on a tablet: one row of 48 px touch targets and its padding.
-// On a phone it takes two rows and scrolls away with the page.
-const maxHeaderPx, maxPhoneHeaderPx = 64, 120
+// On a phone it takes three rows of 44 px targets (name and units, the screens on two rows)
+// and scrolls away with the page.
+const maxHeaderPx, maxPhoneHeaderPx = 64, 160
 
 // While a technician types in a field deep in the batch form, the charge to weigh and the
 // onset temperature stay on screen, uncovered, showing numbers; the field itself is not
@@ -35,6 +36,12 @@ func TestResultsInViewWhileTyping(t *testing.T) {
 		head := mustEval[float64](t, ctx, `document.querySelector("header.top").getBoundingClientRect().height`)
 		if limit := float64(maxHeaderPx); size[0] < 561 && head > maxPhoneHeaderPx || size[0] >= 561 && head > limit {
 			t.Errorf("%s: the header is %.0f px high", name, head)
+		}
+		// every screen's tab is in view, none scrolled away out of reach
+		if hidden := mustEval[[]string](t, ctx, `[...document.querySelectorAll(".screens [data-screen]")].filter(b => {
+				const r = b.getBoundingClientRect(), n = b.parentElement.getBoundingClientRect();
+				return r.left < n.left - 1 || r.right > n.right + 1 || r.right > innerWidth }).map(b => b.id)`); len(hidden) > 0 {
+			t.Errorf("%s: tabs out of view: %v", name, hidden)
 		}
 		rows := mustEval[int](t, ctx, `new Set([...document.querySelectorAll('#recipe .seg[aria-label="Amount given as"] span')].map(s => Math.round(s.getBoundingClientRect().top))).size`)
 		if rows != 1 {

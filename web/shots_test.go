@@ -42,7 +42,7 @@ func TestScreenshots(t *testing.T) {
 		}
 		open(t, ctx, u)
 		click(t, ctx, `[data-demo="cuso4"]`)
-		for _, screen := range []string{"batch", "prep", "gas", "box", "sheet"} {
+		for _, screen := range []string{"batch", "prep", "gas", "box", "sheet", "help"} {
 			click(t, ctx, "#tab-"+screen)
 			screenMedia(t, ctx)
 			png, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
