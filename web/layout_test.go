@@ -3,7 +3,9 @@
 package web_test
 
 import (
+	"context"
 	"strconv"
+	"strings"
 	"testing"
 
 	"github.com/chromedp/chromedp"
@@ -49,34 +51,62 @@ func TestResultsInViewWhileTyping(t *testing.T) {
 		}
 		for _, field := range []string{"f-liquor_heat_capacity_kJ_per_kgK", "f-notes", "f-cool_to_C"} {
 			for _, block := range []string{"start", "end"} {
-				// focus as a tap does, then the field at the top or the bottom of the view:
-				// the two places the browser scrolls a field it focuses to.
-				mustEval[bool](t, ctx, `(function(){const el=document.getElementById("`+field+`"); el.focus(); el.scrollIntoView({block:"`+block+`"}); return true})()`)
-				if msg := mustEval[string](t, ctx, `(function(){
-					const vw = innerWidth, vh = innerHeight;
-					function seen(el) {
-						const r = el.getBoundingClientRect();
-						if (r.width === 0 || r.height === 0) return "not shown";
-						const x = r.left + r.width/2, y = r.top + r.height/2;
-						if (x < 0 || x > vw || y < 0 || y > vh) return "outside the view (centre at " + Math.round(x) + "," + Math.round(y) + ")";
-						const hit = document.elementFromPoint(x, y);
-						if (!hit || !(hit === el || el.contains(hit) || hit.contains(el) && hit.tagName !== "HEADER")) return "covered by " + (hit ? hit.tagName + "." + hit.className : "nothing");
-						return "";
-					}
-					const input = document.getElementById("`+field+`");
-					let why = seen(input);
-					if (why) return "the field itself is " + why;
-					for (const key of ["charge_g", "saturation_temp_C"]) {
-						const shown = [...document.querySelectorAll('[data-strip="' + key + '"], #outcome output[data-key="' + key + '"]')]
-							.filter(el => seen(el) === "");
-						if (shown.length === 0) return key + " is not in view";
-						if (!/^-?[0-9]/.test(shown[0].textContent.trim())) return key + " shows " + JSON.stringify(shown[0].textContent);
-					}
-					return "";
-				})()`); msg != "" {
-					t.Errorf("%s, typing in %s scrolled to the %s: %s", name, field, block, msg)
+				if msg := answerInView(t, ctx, field, block, map[string]string{
+					"charge_g":          `[data-strip="charge_g"], #outcome output[data-key="charge_g"]`,
+					"saturation_temp_C": `[data-strip="saturation_temp_C"], #outcome output[data-key="saturation_temp_C"]`,
+				}); msg != "" {
+					t.Errorf("%s, batch, typing in %s scrolled to the %s: %s", name, field, block, msg)
+				}
+			}
+		}
+		// The Make up screen: the mass to weigh stays in view while typing its last fields.
+		click(t, ctx, "#tab-prep")
+		for _, field := range []string{"p-concentration", "p-notes", "p-store_at_C"} {
+			for _, block := range []string{"start", "end"} {
+				if msg := answerInView(t, ctx, field, block, map[string]string{
+					"form_g": `[data-mirror="form_g"] b, #prep-outcome output[data-key="form_g"]`,
+				}); msg != "" {
+					t.Errorf("%s, make up, typing in %s scrolled to the %s: %s", name, field, block, msg)
 				}
 			}
 		}
 	}
+}
+
+// answerInView focuses the field with the given id as a tap does, scrolls it to the start or
+// the end of the view (the two places a browser scrolls a field it focuses to), and returns
+// why it or one of the answers is not readable: outside the view, covered by something,
+// or showing no number. Each answer is found by a selector; any one element of it in view
+// and uncovered will do. "" when all is in view.
+func answerInView(t *testing.T, ctx context.Context, field, block string, answers map[string]string) string {
+	t.Helper()
+	var keys, sels []string
+	for k, sel := range answers {
+		keys = append(keys, strconv.Quote(k))
+		sels = append(sels, strconv.Quote(sel))
+	}
+	return mustEval[string](t, ctx, `(function(){
+		const keys = [`+strings.Join(keys, ",")+`], sels = [`+strings.Join(sels, ",")+`];
+		const input = document.getElementById("`+field+`");
+		if (!input) return "no field";
+		input.focus(); input.scrollIntoView({block: "`+block+`"});
+		const vw = innerWidth, vh = innerHeight;
+		function seen(el) {
+			const r = el.getBoundingClientRect();
+			if (r.width === 0 || r.height === 0) return "not shown";
+			const x = r.left + r.width/2, y = r.top + r.height/2;
+			if (x < 0 || x > vw || y < 0 || y > vh) return "outside the view (centre at " + Math.round(x) + "," + Math.round(y) + ")";
+			const hit = document.elementFromPoint(x, y);
+			if (!hit || !(hit === el || el.contains(hit) || hit.contains(el) && hit.tagName !== "HEADER")) return "covered by " + (hit ? hit.tagName + "." + hit.className : "nothing");
+			return "";
+		}
+		const why = seen(input);
+		if (why) return "the field itself is " + why;
+		for (let i = 0; i < keys.length; i++) {
+			const shown = [...document.querySelectorAll(sels[i])].filter(el => seen(el) === "");
+			if (shown.length === 0) return keys[i] + " is not in view";
+			if (!/^-?[0-9]/.test(shown[0].textContent.trim())) return keys[i] + " shows " + JSON.stringify(shown[0].textContent);
+		}
+		return "";
+	})()`)
 }
