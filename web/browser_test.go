@@ -213,6 +213,14 @@ func emulatePrint(ctx context.Context) error {
 	}))
 }
 
+// emulateScreen ends emulatePrint: the tab renders for the screen again.
+func emulateScreen(ctx context.Context) error {
+	return chromedp.Do(ctx, chromedp.Func(func(ctx context.Context, tg *chromedp.Target) error {
+		_, err := chromedp.Call(ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: ""})
+		return err
+	}))
+}
+
 // requestCounter records every request the tab makes after it is started.
 type requestCounter struct {
 	mu   sync.Mutex

@@ -3,6 +3,7 @@
 package web_test
 
 import (
+	"context"
 	"os"
 	"path/filepath"
 	"strconv"
@@ -35,14 +36,15 @@ func TestScreenshots(t *testing.T) {
 	}
 	u := appURL(t)
 	ctx := tab(t)
-	for _, size := range [][2]int64{{768, 1024}, {1024, 768}, {1280, 800}, {800, 1280}} {
+	for _, size := range shotSizes {
 		if err := chromedp.Do(ctx, chromedp.EmulateViewport(size[0], size[1])); err != nil {
 			t.Fatal(err)
 		}
 		open(t, ctx, u)
 		click(t, ctx, `[data-demo="cuso4"]`)
-		for _, screen := range []string{"batch", "prep", "gas", "box", "sheet"} {
+		for _, screen := range []string{"batch", "prep", "gas", "box", "sheet", "help"} {
 			click(t, ctx, "#tab-"+screen)
+			screenMedia(t, ctx)
 			png, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
 			if err != nil {
 				t.Fatal(err)
@@ -63,7 +65,25 @@ func TestScreenshots(t *testing.T) {
 			if png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100)); err == nil {
 				os.WriteFile(filepath.Join(dir, "print-1280.png"), png, 0o644)
 			}
+			// Back to the screen: the sizes after this one are pictures of the screen, not of
+			// the print view.
+			if err := emulateScreen(ctx); err != nil {
+				t.Fatal(err)
+			}
 		}
+	}
+}
+
+// shotSizes are the viewports the screens are designed for: the two tablet orientations at
+// 768×1024 and 800×1280, landscape 1024×768 and 1280×800, and a 390 px wide phone.
+var shotSizes = [][2]int64{{768, 1024}, {1024, 768}, {1280, 800}, {800, 1280}, {390, 844}}
+
+// screenMedia fails when the page is rendered for print rather than for the screen: a
+// screenshot taken then would show the print view under the name of a screen.
+func screenMedia(t *testing.T, ctx context.Context) {
+	t.Helper()
+	if mustEval[bool](t, ctx, `matchMedia("print").matches || !matchMedia("screen").matches`) {
+		t.Fatal("the page is emulating print media: the screenshot would show the print view, not the screen")
 	}
 }
 

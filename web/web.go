@@ -19,6 +19,7 @@ import (
 	"strconv"
 	"strings"
 
+	"saltcast/web/help"
 	"saltcast/web/pagecopy"
 	"saltcast/web/policy"
 	"saltcast/web/text91"
@@ -345,6 +346,7 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 		"{{CSP}}", policy.File(wasmExec, loaderJS),
 		"{{VERSION}}", htmlEscape(version),
 		"{{CSS}}", appCSS,
+		"{{HELP}}", help.HTML(),
 		"{{WASM_EXEC}}", wasmExec,
 		"{{LOADER}}", loaderJS,
 		"{{WASM}}", text91.Encode(gz),
