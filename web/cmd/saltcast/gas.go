@@ -84,6 +84,7 @@ func runGas(args []string, stdout, stderr io.Writer) int {
 }
 
 func gasFail(stderr io.Writer, err error) int {
+	err = asFlags(err)
 	io.WriteString(stderr, "saltcast gas: "+err.Error()+"\n")
 	if api.IsInputError(err) {
 		return 2

@@ -87,15 +87,15 @@ func TestGasCommandErrors(t *testing.T) {
 		args  []string
 		field string
 	}{
-		{[]string{"--temp-C"}, "temp-C"},
-		{[]string{"--temp-C", "20", "--temp-C", "21"}, "temp_C"},
-		{[]string{"--temp-C", "hot"}, "temp_C"},
-		{[]string{"--temp-C", "20", "--pressure-kPa", "-1"}, "pressure_kPa"},
-		{[]string{"--temp-C", "20", "--salinity", "60"}, "salinity"},
-		{[]string{"--temp-C", "20", "--colour", "blue"}, "colour"},
+		{[]string{"--temp-C"}, "--temp-C"},
+		{[]string{"--temp-C", "20", "--temp-C", "21"}, "--temp-C"},
+		{[]string{"--temp-C", "hot"}, "--temp-C"},
+		{[]string{"--temp-C", "20", "--pressure-kPa", "-1"}, "--pressure-kPa"},
+		{[]string{"--temp-C", "20", "--salinity", "60"}, "--salinity"},
+		{[]string{"--temp-C", "20", "--colour", "blue"}, "--colour"},
 		{[]string{"temp", "20"}, "command"},
-		{[]string{"outgas", "--from-C", "80", "--to-C", "20"}, "to_C"},
-		{[]string{"table", "--format", "pdf"}, "format"},
+		{[]string{"outgas", "--from-C", "80", "--to-C", "20"}, "--to-C"},
+		{[]string{"table", "--format", "pdf"}, "--format"},
 		{[]string{"-t", "20"}, "arguments"},
 	}
 	for _, tt := range tests {

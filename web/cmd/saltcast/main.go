@@ -14,8 +14,10 @@
 package main
 
 import (
+	"errors"
 	"io"
 	"os"
+	"regexp"
 	"strings"
 
 	"saltcast/core/unit"
@@ -82,6 +84,7 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			return fail(ferr)
 		}
 		out, err = api.Solubility(p)
+		err = asFlags(err)
 	case "plan":
 		if len(rest) != 1 {
 			return fail(&unit.FieldError{Field: "arguments", Value: strings.Join(rest, " "), Allowed: "one recipe file, or - for standard input"})
@@ -118,6 +121,40 @@ func Run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	stdout.Write(out)
 	io.WriteString(stdout, "\n")
 	return 0
+}
+
+// asFlags words an error about a query key as the flag the user typed: temp_C is --temp-C,
+// in the field and in what is allowed ("one of the flags: --solute, --temp-C"; "above
+// --from-C"), and a required key is a required flag. Other errors pass unchanged.
+func asFlags(err error) error {
+	var fe *unit.FieldError
+	if !errors.As(err, &fe) || fe.Field == "" || strings.ContainsAny(fe.Field, " .[") ||
+		fe.Field == "command" || fe.Field == "arguments" || fe.Field == "file" {
+		return err
+	}
+	allowed := strings.ReplaceAll(fe.Allowed, "(the key is required)", "(the flag is required)")
+	allowed = strings.ReplaceAll(allowed, "one of the keys: ", "one of the flags: ")
+	if strings.Contains(allowed, "one of the flags: ") {
+		head, list, _ := strings.Cut(allowed, "one of the flags: ")
+		keys := strings.Split(list, ", ")
+		for i, k := range keys {
+			keys[i] = flagName(k)
+		}
+		allowed = head + "one of the flags: " + strings.Join(keys, ", ")
+	}
+	allowed = keyWord.ReplaceAllStringFunc(allowed, flagName)
+	return &unit.FieldError{Field: flagName(fe.Field), Value: fe.Value, Allowed: allowed}
+}
+
+// keyWord matches a query key inside a sentence (from_C, pressure_kPa).
+var keyWord = regexp.MustCompile(`\b[a-z][a-z0-9]*(_[A-Za-z0-9]+)+\b`)
+
+// flagName is the flag of query key k: temp_C is --temp-C.
+func flagName(k string) string {
+	if strings.HasPrefix(k, "--") {
+		return k
+	}
+	return "--" + strings.ReplaceAll(k, "_", "-")
 }
 
 // readRecipe reads a recipe file, or standard input for "-".

@@ -144,9 +144,9 @@ func TestErrors(t *testing.T) {
 	}{
 		{nil, "", 2, "saltcast solubility"},
 		{[]string{"frobnicate"}, "", 2, "command"},
-		{[]string{"solubility", "--solute", "KNO3"}, "", 2, "temp_C"},
-		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "1.234,5"}, "", 2, "temp_C"},
-		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "500"}, "", 2, "temp_C"},
+		{[]string{"solubility", "--solute", "KNO3"}, "", 2, "--temp-C"},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "1.234,5"}, "", 2, "--temp-C"},
+		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "500"}, "", 2, "--temp-C"},
 		{[]string{"solubility", "--solute", "KNO3", "--temp-C", "20", "--colour", "red"}, "", 2, "colour"},
 		{[]string{"solubility", "--solute", "kryptonite", "--temp-C", "20"}, "", 2, "solute"},
 		{[]string{"solubility", "--temp-C"}, "", 2, "temp-C"},
@@ -191,7 +191,8 @@ func TestHelpAndCompounds(t *testing.T) {
 }
 
 // An unknown flag is refused in the same words by every subcommand: exit status 2 and
-// `saltcast <command>: bogus: "1" is not allowed; allowed: one of the keys: …`.
+// `saltcast <command>: --bogus: "1" is not allowed; allowed: one of the flags: …`, naming
+// flags as the user types them.
 func TestUnknownFlagOneWording(t *testing.T) {
 	for _, args := range [][]string{
 		{"solubility", "--solute", "KNO3", "--temp-C", "20", "--bogus", "1"},
@@ -200,7 +201,7 @@ func TestUnknownFlagOneWording(t *testing.T) {
 		{"gas", "table", "--bogus", "1"},
 	} {
 		_, errs, code := run(t, "", args...)
-		want := "saltcast " + args[0] + `: bogus: "1" is not allowed; allowed: one of the keys: `
+		want := "saltcast " + args[0] + `: --bogus: "1" is not allowed; allowed: one of the flags: --`
 		if code != 2 || !strings.HasPrefix(errs, want) {
 			t.Errorf("saltcast %s: exit %d, stderr %q; want 2 and %q…", strings.Join(args, " "), code, errs, want)
 		}
