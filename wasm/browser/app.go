@@ -319,7 +319,7 @@ func (a *app) setStale(s bool) {
 	setHidden(byID("stale"), !s)
 	out := byID("outcome")
 	classSet(out, "is-stale", s)
-	classSet(byID("strip"), "stale", s)
+	classSet(byID("strip"), "is-stale", s) // not "stale": that class is the banner's
 }
 
 // showPlanError shows a recipe or plan error beside the field it names, or above the
