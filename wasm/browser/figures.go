@@ -58,6 +58,10 @@ func hasAdiabatic(r *recipe.Result) bool { return r.HasAdiabatic }
 func hasDissolutionHeat(r *recipe.Result) bool { return r.HasDissolutionHeat }
 func hasSeedHint(r *recipe.Result) bool        { return r.HasSeedHint }
 
+// notGiven stands where the library has no data for a figure (no enthalpy of solution):
+// a number there would read as "none".
+const notGiven = "not given (no enthalpy of solution in the library)"
+
 // Figures are the plan's results in the order the sheet and the CSV list them. The first
 // ones are also the big tiles of the batch screen (see shell.html).
 var Figures = []Figure{
@@ -75,7 +79,12 @@ var Figures = []Figure{
 	{Key: "yield_pct", Label: "Yield", Kind: kPlain, Unit: "%", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.YieldPct })},
 	{Key: "liquor_g", Label: "Mother liquor", Kind: kMass, Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG })},
 	{Key: "liquor_g_per_100g_water", Label: "Mother liquor strength", Kind: kPlain, Unit: "g/100 g water", Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG100 })},
-	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionHeatKJ })},
+	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: func(r *recipe.Result) (float64, string, bool) {
+		if !r.HasDissolutionHeat {
+			return 0, notGiven, true // said, not shown as 0 kJ
+		}
+		return r.DissolutionHeatKJ, "", true
+	}},
 	{Key: "dissolution_temp_change_K", Label: "Batch temperature change on dissolving, if insulated", Kind: kDelta, Sig: 1, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionTempChangeK })},
 	{Key: "crystallization_heat_kJ", Label: "Heat of crystallization (+ released)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CrystallizationHeatKJ })},
 	{Key: "heat_basis", Label: "Heat of crystallization, basis", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) {
@@ -134,6 +143,9 @@ func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool)
 	v, s, ok := f.Get(r)
 	if !ok {
 		return "", "", false
+	}
+	if s != "" && f.Kind != kTempText {
+		return s, "", true // words in place of the number (kText, or notGiven)
 	}
 	switch f.Kind {
 	case kText:

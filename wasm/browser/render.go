@@ -53,7 +53,10 @@ func (a *app) render() {
 		if a.changed("out:"+t.fig.Key, text) {
 			setText(t.out, text)
 		}
-		if exists(t.unit) && ut != "" && a.changed("unit:"+t.fig.Key, ut) {
+		// A number's words in its place (not given) carry no unit; a figure of words only
+		// leaves the unit it sits beside alone.
+		words := t.fig.Kind == kText || t.fig.Kind == kTempText
+		if exists(t.unit) && (ut != "" || !words) && a.changed("unit:"+t.fig.Key, ut) {
 			setText(t.unit, ut)
 		}
 		// A tile of its own hides when the plan has no such figure; a figure inside
