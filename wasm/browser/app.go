@@ -392,7 +392,7 @@ func (a *app) updateSolute(typing bool) {
 	if c != nil && f != nil && typing {
 		// Typing a hydrate's formula or name puts that hydrate on the shelf; a form left over
 		// from another compound goes.
-		if f != c.Forms[0] {
+		if f != c.Forms[0] && !f.NotOnShelf {
 			want = f.Formula
 		} else if _, err := c.Form(want); want != "" && err != nil {
 			want = ""
@@ -410,6 +410,9 @@ func (a *app) updateSolute(typing bool) {
 		return
 	}
 	for i, form := range c.Forms {
+		if form.NotOnShelf {
+			continue // it crystallizes (NaCl·2H2O below 0.1 °C) but nobody weighs it out
+		}
 		label := form.Formula
 		if i == 0 {
 			label += " (anhydrous)"
@@ -425,6 +428,10 @@ func (a *app) updateSolute(typing bool) {
 	}
 	if want != "" {
 		if form, err := c.Form(want); err == nil && form != c.Forms[0] {
+			if form.NotOnShelf { // from a recipe file: shown, but not offered
+				opt := add(sel, "option", "", form.Formula+" (not kept on a shelf)")
+				setAttr(opt, "value", form.Formula)
+			}
 			setValue(sel, form.Formula)
 			if want != form.Formula {
 				a.d.Text["charged_form"] = form.Formula
@@ -447,7 +454,7 @@ func (a *app) listMatches(box js.Value, text string) {
 	for _, m := range compound.Search(text, maxMatches) {
 		label := m.Compound.ID + " "
 		form := ""
-		if m.Form != m.Compound.Forms[0] {
+		if m.Form != m.Compound.Forms[0] && !m.Form.NotOnShelf {
 			label, form = m.Form.Formula+" ", m.Form.Formula
 		}
 		b := add(box, "button", "", label)

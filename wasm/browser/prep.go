@@ -176,12 +176,17 @@ func (a *app) fillForms() {
 	}
 	setText(picked, c.Name+" · "+c.ID)
 	want := ps.d.Text["charged_form"]
-	if fw, err := c.Form(want); err == nil {
+	if fw, err := c.Form(want); err == nil && !fw.NotOnShelf {
 		want = fw.Formula
-	} else {
+	} else if !f.NotOnShelf {
 		want = f.Formula
+	} else {
+		want = c.Forms[0].Formula
 	}
 	for i, form := range c.Forms {
+		if form.NotOnShelf {
+			continue // crystallizes in the cold, never weighed out
+		}
 		label := form.Formula
 		if i == 0 {
 			label += " (anhydrous)"
