@@ -152,14 +152,39 @@ func (a *app) start() {
 	a.bindBox()
 	a.bindCarry()
 	a.load(start)
-	if p, ok, err := PrepFromFragment(win.Location().Hash()); ok {
-		a.showScreen("prep")
+	a.openPrepLink(win.Location().Hash())
+	// A link pasted into the address bar of a tab that already shows Saltcast changes only
+	// the part after the #: the page reads it then too.
+	on(js.Global(), "hashchange", func(js.Value, event) { a.openLink(win.Location().Hash()) })
+}
+
+// openLink loads the recipe or preparation a share link carries (hash is from the # on);
+// it reports whether the text was such a link.
+func (a *app) openLink(hash string) bool {
+	if r, ok, err := FromFragment(hash); ok {
+		a.showScreen("batch")
 		if err == nil {
-			a.loadPrep(p)
+			a.load(r)
 		} else {
-			setText(byID("m-prep-import"), "The link's preparation could not be read: "+err.Error())
+			a.boxMessage("m-import", "The link's recipe could not be read: "+err.Error())
 		}
+		return true
 	}
+	return a.openPrepLink(hash)
+}
+
+func (a *app) openPrepLink(hash string) bool {
+	p, ok, err := PrepFromFragment(hash)
+	if !ok {
+		return false
+	}
+	a.showScreen("prep")
+	if err == nil {
+		a.loadPrep(p)
+	} else {
+		setText(byID("m-prep-import"), "The link's preparation could not be read: "+err.Error())
+	}
+	return true
 }
 
 // keepCurrent stores the recipe on screen so a reload (or a closed tab) finds it.
