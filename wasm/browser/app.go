@@ -118,6 +118,7 @@ func (a *app) start() {
 			}
 		})
 	}
+	on(byID("new-batch"), "click", func(js.Value, event) { a.freshBatch() })
 	on(byID("solute-matches"), "click", a.onPickMatch)
 	for _, el := range qa(doc, `[name="programme_kind"]`) {
 		on(el, "change", func(js.Value, event) { a.renderProgramme() })
@@ -207,6 +208,57 @@ func (a *app) load(r recipe.Recipe) {
 	a.showDraft()
 	setValue(byID("save-name"), r.Name)
 	a.recompute()
+}
+
+// keptForFresh are the recipe keys a fresh batch keeps: how the lab works (its safety margin
+// for stocks, its vessel), not what this batch is.
+var keptForFresh = []string{"clear_margin_K", "vessel_heat_capacity_J_per_K"}
+
+// freshBatch empties the form for a new batch: name, notes, solute, amounts, temperatures.
+// The units, the choices of how water and amount are given, and keptForFresh stay; the
+// results of the batch before go, so none of its numbers can be read as the new one's.
+func (a *app) freshBatch() {
+	d := NewDraft()
+	d.Pick["water"], d.Pick["amount"] = a.d.Pick["water"], a.d.Pick["amount"]
+	for _, k := range keptForFresh {
+		if v, ok := a.d.Num[k]; ok {
+			d.Num[k] = v
+		}
+	}
+	a.d = d
+	a.last = nil
+	a.shown = nil
+	a.showDraft()
+	setValue(byID("save-name"), "")
+	for _, t := range a.tiles {
+		setText(t.out, "—")
+	}
+	for _, el := range qa(byID("strip"), "[data-strip]") {
+		setText(el, "—")
+	}
+	for _, id := range []string{"cautions", "warnings", "sources"} {
+		clear(byID(id))
+	}
+	setText(byID("charge-form"), "")
+	setText(byID("curve-range"), "")
+	setHTML(byID("chart"), "")
+	setHidden(byID("programme-box"), true)
+	a.recompute()
+}
+
+// staleText is the banner over results that do not match the form: the last good result
+// kept, or none yet (a fresh batch).
+func (a *app) staleText(rest string) string {
+	if a.last == nil {
+		if rest == "" {
+			return "Nothing planned yet: fill in the marked fields."
+		}
+		return "Nothing planned yet. " + rest
+	}
+	if rest == "" {
+		return "Showing the last good result: correct the marked field to update."
+	}
+	return "Showing the last good result. " + rest
 }
 
 // showDraft writes the draft into every input, in the current units.
@@ -314,7 +366,7 @@ func (a *app) recompute() {
 	stale := byID("stale")
 	if len(a.d.Errs) > 0 {
 		a.clearPlanError()
-		setText(stale, "Showing the last good result: correct the marked field to update.")
+		setText(stale, a.staleText(""))
 		a.setStale(true)
 		return
 	}
@@ -366,9 +418,9 @@ func (a *app) showPlanError(err error) {
 	if in, ok := a.inputs[field]; ok && !inHiddenPart(in) {
 		a.planErr = field
 		a.showFieldError(field, err)
-		setText(stale, "Showing the last good result: correct the marked field to update.")
+		setText(stale, a.staleText(""))
 	} else {
-		setText(stale, "Showing the last good result. "+fieldMessage(err, ""))
+		setText(stale, a.staleText(fieldMessage(err, "")))
 	}
 	a.setStale(true)
 }
