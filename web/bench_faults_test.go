@@ -293,6 +293,7 @@ func TestNewBatch(t *testing.T) {
 		t.Errorf("charge after a new batch: %q, want none until the batch is given", c)
 	}
 	// Typing the new batch plans it.
+	setField(t, ctx, "recipe", "solute", "KNO3")
 	setField(t, ctx, "recipe", "water_g", "500")
 	setField(t, ctx, "recipe", "dissolve_temp_C", "140")
 	if c := output(t, ctx, "charge_g"); c == "—" {
