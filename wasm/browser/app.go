@@ -345,22 +345,6 @@ func (a *app) showFieldError(name string, err error) {
 	}
 }
 
-// fieldMessage says what is wrong with what the user typed, in words for beside the field.
-func fieldMessage(err error, typed string) string {
-	var fe *unit.FieldError
-	if errors.As(err, &fe) {
-		s := "Not allowed"
-		if strings.TrimSpace(typed) != "" {
-			s = "“" + typed + "” is not allowed"
-		}
-		if fe.Allowed != "" {
-			s += "; allowed: " + fe.Allowed
-		}
-		return s + "."
-	}
-	return err.Error()
-}
-
 // recompute plans the draft; on any error it keeps the last good results on screen.
 func (a *app) recompute() {
 	stale := byID("stale")
@@ -601,6 +585,12 @@ func (a *app) onUnits(js.Value, event) {
 	}
 	a.store.set(keyUnits, a.u.Temp+" "+a.u.Mass+" "+a.u.Volume)
 	a.showUnitLabels()
+	for name, err := range a.d.Errs { // their messages, in the new units
+		a.showFieldError(name, err)
+	}
+	if a.planErr != "" || !byID("stale").Get("hidden").Bool() {
+		a.recompute()
+	}
 	// Fields that do not parse keep the user's text; the others show the same quantity in
 	// the new unit.
 	for name, el := range a.inputs {
@@ -617,6 +607,7 @@ func (a *app) onUnits(js.Value, event) {
 }
 
 func (a *app) showUnitLabels() {
+	sayUnits = a.u
 	for _, el := range qa(doc, "[data-unit]") {
 		switch attr(el, "data-unit") {
 		case "temp":
@@ -625,6 +616,8 @@ func (a *app) showUnitLabels() {
 			setText(el, a.u.Mass)
 		case "volume":
 			setText(el, a.u.VolumeSymbol())
+		case "tempdiff":
+			setText(el, a.u.DeltaSymbol())
 		}
 	}
 }

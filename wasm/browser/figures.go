@@ -153,12 +153,9 @@ func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool)
 	case kTempText:
 		return strings.Replace(s, "{T}", unit.FormatCompact(TempFromC(v, u), 4)+" "+u.TempSymbol(), 1), "", true
 	case kTemp:
-		return fixed(TempFromC(v, u), f.Sig), u.TempSymbol(), true
+		return fixed(TempFromC(v, u), u.TempDecimals(f.Sig)), u.TempSymbol(), true
 	case kDelta:
-		if u.Temp == "F" {
-			return fixed(v*1.8, f.Sig), "°F", true
-		}
-		return fixed(v, f.Sig), "K", true
+		return fixed(u.DeltaFromK(v), f.Sig), u.DeltaSymbol(), true
 	case kMass:
 		return unit.FormatNumber(MassFromG(v, u), f.Sig), u.Mass, true
 	}
@@ -166,7 +163,9 @@ func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool)
 }
 
 // TempText shows a temperature in °C in the user's unit with its symbol.
-func TempText(c float64, u Units) string { return fixed(TempFromC(c, u), 1) + " " + u.TempSymbol() }
+func TempText(c float64, u Units) string {
+	return fixed(TempFromC(c, u), u.TempDecimals(1)) + " " + u.TempSymbol()
+}
 
 // fixed prints v with dec decimals, "—" when v is not finite; "-0.0" prints as "0.0".
 func fixed(v float64, dec int) string {
@@ -222,21 +221,37 @@ func CSV(r *recipe.Result, u Units) string {
 	row("name", r.Recipe.Name, "", name.Label)
 	row("solute", r.SoluteID, "", r.SoluteName)
 	for _, in := range InputRows(r.Recipe, u) {
-		row("recipe."+in.Key, in.Text, in.Unit, in.Label)
+		row("recipe."+csvKey(in.Key, in.Unit), in.Text, in.Unit, in.Label)
 	}
 	for _, f := range Figures {
 		if text, ut, ok := f.Show(r, u); ok {
-			row(f.Key, text, ut, f.Label)
+			row(csvKey(f.Key, ut), text, ut, f.Label)
 		}
 	}
 	for _, w := range r.Warnings {
-		row("warning", w, "", "")
+		row("warning", say(w), "", "")
 	}
 	for _, c := range r.Cautions {
-		row("caution", c, "", "")
+		row("caution", say(c), "", "")
 	}
 	for _, s := range r.Sources {
 		row("source", s, "", "")
 	}
 	return b.String()
+}
+
+// csvKey is key with its unit suffix (_g, _C, _mL, _K) naming the unit the row is in:
+// charge_g in pounds is charge_lb, saturation_temp_C in °F is saturation_temp_F.
+func csvKey(key, shownUnit string) string {
+	suffix := map[string]string{"g": "g", "kg": "kg", "lb": "lb", "°C": "C", "°F": "F", "K": "K",
+		"mL": "mL", "L": "L", "US gal": "gal"}[shownUnit]
+	if suffix == "" {
+		return key
+	}
+	for _, old := range []string{"_g", "_C", "_mL", "_K"} {
+		if strings.HasSuffix(key, old) {
+			return strings.TrimSuffix(key, old) + "_" + suffix
+		}
+	}
+	return key
 }

@@ -3,6 +3,7 @@
 package main
 
 import (
+	"errors"
 	"strings"
 	"syscall/js"
 
@@ -83,9 +84,9 @@ func (a *app) render() {
 	}
 	setText(byID("charge-form"), cf)
 
-	a.fillListOnce("cautions", r.Cautions)
+	a.fillListOnce("cautions", sayAll(r.Cautions))
 	markCautions(byID("cautions"), r.CautionKinds)
-	a.fillListOnce("warnings", orNone(r.Warnings))
+	a.fillListOnce("warnings", orNone(sayAll(r.Warnings)))
 	a.fillListOnce("sources", r.Sources)
 	if ct := a.curveText(r); a.changed("curve-range", ct) {
 		setText(byID("curve-range"), ct)
@@ -145,6 +146,15 @@ func markCautions(list js.Value, kinds []balance.CautionKind) {
 		setAttr(li, "data-kind", string(k))
 		classSet(li, "strong", k == balance.CautionToxic)
 	}
+}
+
+// sayAll words each of the core's sentences for the screen (say).
+func sayAll(s []string) []string {
+	out := make([]string, len(s))
+	for i, x := range s {
+		out[i] = say(x)
+	}
+	return out
 }
 
 func orNone(s []string) []string {
@@ -291,7 +301,12 @@ func (a *app) showFit() {
 	}
 	f, err := a.fit()
 	if err != nil {
-		setText(out, "No curve yet: "+fieldMessage(err, ""))
+		var fe *unit.FieldError
+		if errors.As(err, &fe) && fe.Allowed != "" {
+			setText(out, "No curve yet: the fit needs "+say(fe.Allowed)+".")
+		} else {
+			setText(out, "No curve yet: "+say(err.Error()))
+		}
 		return
 	}
 	setText(out, "Curve over "+TempText(f.Curve.MinC, a.u)+" to "+TempText(f.Curve.MaxC, a.u)+
@@ -331,10 +346,10 @@ func fillProgramme(body js.Value, r *recipe.Result, u Units, cubic, both bool) {
 		tr := add(body, "tr", "", "")
 		add(tr, "td", "", exact(wire.RoundSig(s.TimeMin, 4)))
 		if both || !cubic {
-			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), 1))
+			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), u.TempDecimals(1)))
 		}
 		if both || cubic {
-			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), 1))
+			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), u.TempDecimals(1)))
 		}
 	}
 }
@@ -348,9 +363,9 @@ func (a *app) renderSheet() {
 	}
 	setText(byID("s-name"), name)
 	setText(byID("s-date"), today())
-	fillList(byID("s-cautions"), r.Cautions)
+	fillList(byID("s-cautions"), sayAll(r.Cautions))
 	markCautions(byID("s-cautions"), r.CautionKinds)
-	fillList(byID("s-warnings"), orNone(r.Warnings))
+	fillList(byID("s-warnings"), orNone(sayAll(r.Warnings)))
 	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
 	setText(byID("s-notes"), r.Recipe.Notes)
 
