@@ -67,6 +67,7 @@ const notGiven = "not given (no enthalpy of solution in the library)"
 var Figures = []Figure{
 	{Key: "charge_g", Label: "Charge to weigh", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.ChargeG })},
 	{Key: "charged_form", Label: "Form weighed", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) { return 0, r.ChargedForm, r.ChargedForm != "" }},
+	{Key: "impurity_g", Label: "Impurity in the charge (taken as inert and insoluble: it ends in the filter cake)", Kind: kMass, Sig: 3, Get: numIf(func(r *recipe.Result) bool { return r.ImpurityG > 0 }, func(r *recipe.Result) float64 { return r.ImpurityG })},
 	{Key: "water_g", Label: "Water added", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.WaterG })},
 	{Key: "hydrate_water_g", Label: "Water brought in by the hydrate", Kind: kMass, Sig: 4, Get: numIf(func(r *recipe.Result) bool { return r.HydrateWaterG > 0 }, func(r *recipe.Result) float64 { return r.HydrateWaterG })},
 	{Key: "saturation_pct", Label: "Saturation at process temperature", Kind: kPlain, Unit: "%", Sig: 3, Get: num(func(r *recipe.Result) float64 { return r.SaturationPct })},

@@ -16,6 +16,14 @@ import (
 	"saltcast/web/chart"
 )
 
+// onSheetOnly are figures the batch screen leaves to the sheet and the CSV: the heat of
+// crystallization on the lowest estimate is said once on screen, in the basis tile (lowest
+// kJ/mol beside the design value the cooling is sized on).
+var onSheetOnly = map[string]bool{"crystallization_heat_low_kJ": true}
+
+// impuritiesNote is said wherever the purity is: the planner's model of what is not the salt.
+const impuritiesNote = "impurities taken as inert and insoluble"
+
 // bindTiles finds the element of each Figure on the batch screen, making a small tile in
 // #extra-figures for the figures the shell does not place itself.
 func (a *app) bindTiles() {
@@ -29,7 +37,7 @@ func (a *app) bindTiles() {
 			if p := el.Get("parentElement"); exists(p) {
 				t.unit = q(p, ".u")
 			}
-		} else if f.Kind == kText {
+		} else if f.Kind == kText || onSheetOnly[f.Key] {
 			continue // words such as the form weighed already show beside their numbers
 		} else {
 			t.box = addFigure(extra, f.Label)
@@ -81,6 +89,7 @@ func (a *app) render() {
 		if r.PurityPct > 0 && r.PurityPct < 100 {
 			cf += " at " + exact(wire.RoundSig(r.PurityPct, 4)) + " % purity"
 		}
+		cf += "; " + impuritiesNote
 	}
 	setText(byID("charge-form"), cf)
 
@@ -386,7 +395,7 @@ func (a *app) renderSheet() {
 	}
 	row(in, "Solute", solute)
 	row(in, "Form on the shelf", r.ChargedForm)
-	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" %")
+	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" % ("+impuritiesNote+")")
 	for _, k := range InputRows(r.Recipe, a.u) {
 		if k.Key != "purity_pct" { // shown above from the plan, with its default
 			row(in, k.Label, k.Text+" "+k.Unit)
