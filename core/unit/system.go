@@ -238,6 +238,9 @@ func trimZeros(s string) string {
 // numberAt reads a number written at text[i:] (a sign '-' or '−', digits, a decimal point,
 // an exponent) that does not continue a word or another number; ok is false otherwise.
 func numberAt(text string, i int) (v float64, end int, ok bool) {
+	if i >= len(text) {
+		return 0, i, false
+	}
 	if i > 0 {
 		p := text[i-1]
 		if isDigit(p) || isLetter(p) || p == '.' || p == '_' {

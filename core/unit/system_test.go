@@ -1,6 +1,9 @@
 package unit
 
-import "testing"
+import (
+	"testing"
+	"unicode/utf8"
+)
 
 // Sentences written in °C, K, g and mL, read in other units. Factors: NIST SP 811 (2008),
 // B.8 (pound 453.59237 g, US gallon 3.785411784 L) and B.9 (t/°F = 1.8·t/°C + 32; a
@@ -32,4 +35,24 @@ func TestWords(t *testing.T) {
 			t.Errorf("%v.Words(%q) = %q, want %q", tt.s, tt.in, got, tt.want)
 		}
 	}
+}
+
+// Words never panics, leaves text alone in the metric system, and keeps valid UTF-8 valid
+// (it must not cut a multi-byte character such as "−" or "°").
+func FuzzWords(f *testing.F) {
+	for _, s := range []string{"from −40 to 150 °C", "by 11.4 K", "6.35 g per 100 g water", "1e7 g", "-2.9–100 °C", "−", "°C", "5 mL", "1.2.3 °C", "-e5 g"} {
+		f.Add(s)
+	}
+	us := System{Temp: "F", Mass: "lb", Volume: "gal"}
+	f.Fuzz(func(t *testing.T, s string) {
+		if got := Metric.Words(s); got != s {
+			t.Fatalf("Metric.Words(%q) = %q", s, got)
+		}
+		for _, sys := range []System{us, {Temp: "K", Mass: "kg", Volume: "L"}} {
+			got := sys.Words(s)
+			if utf8.ValidString(s) && !utf8.ValidString(got) {
+				t.Fatalf("%v.Words(%q) = %q, not valid UTF-8", sys, s, got)
+			}
+		}
+	})
 }
