@@ -40,9 +40,16 @@ func (pl *planner) heat() {
 		res.DissolutionTempChangeK = -res.DissolutionHeatKJ / capAt(b.DissolveTempC)
 		pl.srcs.add(form.EnthalpySource)
 		if math.Abs(res.DissolutionTempChangeK) > 2 {
-			pl.warn.add("the heat of dissolving uses ΔsolH at infinite dilution; dissolving into a strong liquor releases or " +
-				"absorbs a different amount (for salts that form hydrates, such as CH3COONa, far less heat than the " +
-				"infinite-dilution value), so treat the dissolving figures as rough")
+			// Said in proportion: the far larger gap of salts that form hydrates is named only
+			// for them, not for a plain salt such as KCl.
+			w := "the heat of dissolving uses ΔsolH at infinite dilution; dissolving into a strong liquor releases or " +
+				"absorbs a somewhat different amount, so treat the dissolving figures as rough"
+			if len(c.Forms) > 1 {
+				w = "the heat of dissolving uses ΔsolH at infinite dilution; dissolving into a strong liquor releases or " +
+					"absorbs a different amount (for salts that form hydrates, such as CH3COONa, far less heat than the " +
+					"infinite-dilution value), so treat the dissolving figures as rough"
+			}
+			pl.warn.add(w)
 		}
 	} else {
 		pl.warn.add("the library has no enthalpy of solution for " + form.Formula + ": the heat of dissolving is not given")

@@ -11,11 +11,14 @@ import (
 
 // Form is one solid form of a compound: the anhydrous salt or a hydrate.
 type Form struct {
-	Formula                  string   // "CuSO4·5H2O"; the anhydrous form's Formula is the compound ID
-	Names                    []string // common names of this form
-	WaterPerFormula          float64  // n in ·nH2O
-	MolarMassGPerMol         float64
-	AnhydrousFraction        float64 // mass of anhydrous salt per mass of this form
+	Formula           string   // "CuSO4·5H2O"; the anhydrous form's Formula is the compound ID
+	Names             []string // common names of this form
+	WaterPerFormula   float64  // n in ·nH2O
+	MolarMassGPerMol  float64
+	AnhydrousFraction float64 // mass of anhydrous salt per mass of this form
+	// NotOnShelf marks a form that crystallizes but is not kept or sold (NaCl·2H2O, stable
+	// only below 0.1 °C): front ends do not offer it as the form weighed.
+	NotOnShelf               bool
 	SolutionEnthalpyKJPerMol float64 // per mol of this form, infinite dilution, 25 °C; + = endothermic
 	HasEnthalpy              bool
 	EnthalpySource           string

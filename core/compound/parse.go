@@ -273,8 +273,8 @@ func (p *parser) compound(fields []string) error {
 }
 
 func (p *parser) form(fields []string) error {
-	if len(fields) < 1 || len(fields) > 2 {
-		return p.fail("want: form FORMULA | name ; name")
+	if len(fields) < 1 || len(fields) > 3 {
+		return p.fail("want: form FORMULA | name ; name [| not on the shelf]")
 	}
 	formula := fields[0]
 	f := &Form{Formula: formula}
@@ -293,8 +293,14 @@ func (p *parser) form(fields []string) error {
 		m, _ := MolarMass(formula)
 		f.MolarMassGPerMol = m
 	}
-	if len(fields) == 2 {
+	if len(fields) >= 2 {
 		f.Names = splitNames(fields[1])
+	}
+	if len(fields) == 3 {
+		if fields[2] != "not on the shelf" || len(p.c.Forms) == 0 {
+			return p.fail("the third field of a hydrate's form line can only be: not on the shelf")
+		}
+		f.NotOnShelf = true
 	}
 	for _, g := range p.c.Forms {
 		if g.Formula == formula {

@@ -14,6 +14,11 @@
 // System of Units", appendix B. Degrees Celsius and Fahrenheit are offset scales, so they are
 // converted by functions, never by multiplying with a factor.
 //
+// System is the reader's choice of units. It converts figures (TempFromC, DeltaFromK for
+// temperature differences, MassFromG, VolumeFromML) and rewrites the sentences Saltcast writes
+// in °C, K, g and mL into those units (Words), so messages, cautions and warnings follow the
+// unit switch the same way the figures do.
+//
 // FormatNumber prints a value for a person, rounded to significant figures; FormatCompact does
 // the same without trailing zeros, for numbers inside sentences. Neither ever prints NaN or Inf
 // (they print "—" instead).

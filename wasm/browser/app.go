@@ -118,6 +118,7 @@ func (a *app) start() {
 			}
 		})
 	}
+	on(byID("new-batch"), "click", func(js.Value, event) { a.freshBatch() })
 	on(byID("solute-matches"), "click", a.onPickMatch)
 	for _, el := range qa(doc, `[name="programme_kind"]`) {
 		on(el, "change", func(js.Value, event) { a.renderProgramme() })
@@ -152,14 +153,39 @@ func (a *app) start() {
 	a.bindBox()
 	a.bindCarry()
 	a.load(start)
-	if p, ok, err := PrepFromFragment(win.Location().Hash()); ok {
-		a.showScreen("prep")
+	a.openPrepLink(win.Location().Hash())
+	// A link pasted into the address bar of a tab that already shows Saltcast changes only
+	// the part after the #: the page reads it then too.
+	on(js.Global(), "hashchange", func(js.Value, event) { a.openLink(win.Location().Hash()) })
+}
+
+// openLink loads the recipe or preparation a share link carries (hash is from the # on);
+// it reports whether the text was such a link.
+func (a *app) openLink(hash string) bool {
+	if r, ok, err := FromFragment(hash); ok {
+		a.showScreen("batch")
 		if err == nil {
-			a.loadPrep(p)
+			a.load(r)
 		} else {
-			setText(byID("m-prep-import"), "The link's preparation could not be read: "+err.Error())
+			a.boxMessage("m-import", "The link's recipe could not be read: "+err.Error())
 		}
+		return true
 	}
+	return a.openPrepLink(hash)
+}
+
+func (a *app) openPrepLink(hash string) bool {
+	p, ok, err := PrepFromFragment(hash)
+	if !ok {
+		return false
+	}
+	a.showScreen("prep")
+	if err == nil {
+		a.loadPrep(p)
+	} else {
+		setText(byID("m-prep-import"), "The link's preparation could not be read: "+err.Error())
+	}
+	return true
 }
 
 // keepCurrent stores the recipe on screen so a reload (or a closed tab) finds it.
@@ -182,6 +208,57 @@ func (a *app) load(r recipe.Recipe) {
 	a.showDraft()
 	setValue(byID("save-name"), r.Name)
 	a.recompute()
+}
+
+// keptForFresh are the recipe keys a fresh batch keeps: how the lab works (its safety margin
+// for stocks, its vessel), not what this batch is.
+var keptForFresh = []string{"clear_margin_K", "vessel_heat_capacity_J_per_K"}
+
+// freshBatch empties the form for a new batch: name, notes, solute, amounts, temperatures.
+// The units, the choices of how water and amount are given, and keptForFresh stay; the
+// results of the batch before go, so none of its numbers can be read as the new one's.
+func (a *app) freshBatch() {
+	d := NewDraft()
+	d.Pick["water"], d.Pick["amount"] = a.d.Pick["water"], a.d.Pick["amount"]
+	for _, k := range keptForFresh {
+		if v, ok := a.d.Num[k]; ok {
+			d.Num[k] = v
+		}
+	}
+	a.d = d
+	a.last = nil
+	a.shown = nil
+	a.showDraft()
+	setValue(byID("save-name"), "")
+	for _, t := range a.tiles {
+		setText(t.out, "—")
+	}
+	for _, el := range qa(byID("strip"), "[data-strip]") {
+		setText(el, "—")
+	}
+	for _, id := range []string{"cautions", "warnings", "sources"} {
+		clear(byID(id))
+	}
+	setText(byID("charge-form"), "")
+	setText(byID("curve-range"), "")
+	setHTML(byID("chart"), "")
+	setHidden(byID("programme-box"), true)
+	a.recompute()
+}
+
+// staleText is the banner over results that do not match the form: the last good result
+// kept, or none yet (a fresh batch).
+func (a *app) staleText(rest string) string {
+	if a.last == nil {
+		if rest == "" {
+			return "Nothing planned yet: fill in the marked fields."
+		}
+		return "Nothing planned yet. " + rest
+	}
+	if rest == "" {
+		return "Showing the last good result: correct the marked field to update."
+	}
+	return "Showing the last good result. " + rest
 }
 
 // showDraft writes the draft into every input, in the current units.
@@ -268,28 +345,12 @@ func (a *app) showFieldError(name string, err error) {
 	}
 }
 
-// fieldMessage says what is wrong with what the user typed, in words for beside the field.
-func fieldMessage(err error, typed string) string {
-	var fe *unit.FieldError
-	if errors.As(err, &fe) {
-		s := "Not allowed"
-		if strings.TrimSpace(typed) != "" {
-			s = "“" + typed + "” is not allowed"
-		}
-		if fe.Allowed != "" {
-			s += "; allowed: " + fe.Allowed
-		}
-		return s + "."
-	}
-	return err.Error()
-}
-
 // recompute plans the draft; on any error it keeps the last good results on screen.
 func (a *app) recompute() {
 	stale := byID("stale")
 	if len(a.d.Errs) > 0 {
 		a.clearPlanError()
-		setText(stale, "Showing the last good result: correct the marked field to update.")
+		setText(stale, a.staleText(""))
 		a.setStale(true)
 		return
 	}
@@ -319,7 +380,7 @@ func (a *app) setStale(s bool) {
 	setHidden(byID("stale"), !s)
 	out := byID("outcome")
 	classSet(out, "is-stale", s)
-	classSet(byID("strip"), "stale", s)
+	classSet(byID("strip"), "is-stale", s) // not "stale": that class is the banner's
 }
 
 // showPlanError shows a recipe or plan error beside the field it names, or above the
@@ -341,9 +402,9 @@ func (a *app) showPlanError(err error) {
 	if in, ok := a.inputs[field]; ok && !inHiddenPart(in) {
 		a.planErr = field
 		a.showFieldError(field, err)
-		setText(stale, "Showing the last good result: correct the marked field to update.")
+		setText(stale, a.staleText(""))
 	} else {
-		setText(stale, "Showing the last good result. "+fieldMessage(err, ""))
+		setText(stale, a.staleText(fieldMessage(err, "")))
 	}
 	a.setStale(true)
 }
@@ -392,7 +453,7 @@ func (a *app) updateSolute(typing bool) {
 	if c != nil && f != nil && typing {
 		// Typing a hydrate's formula or name puts that hydrate on the shelf; a form left over
 		// from another compound goes.
-		if f != c.Forms[0] {
+		if f != c.Forms[0] && !f.NotOnShelf {
 			want = f.Formula
 		} else if _, err := c.Form(want); want != "" && err != nil {
 			want = ""
@@ -410,6 +471,9 @@ func (a *app) updateSolute(typing bool) {
 		return
 	}
 	for i, form := range c.Forms {
+		if form.NotOnShelf {
+			continue // it crystallizes (NaCl·2H2O below 0.1 °C) but nobody weighs it out
+		}
 		label := form.Formula
 		if i == 0 {
 			label += " (anhydrous)"
@@ -425,6 +489,10 @@ func (a *app) updateSolute(typing bool) {
 	}
 	if want != "" {
 		if form, err := c.Form(want); err == nil && form != c.Forms[0] {
+			if form.NotOnShelf { // from a recipe file: shown, but not offered
+				opt := add(sel, "option", "", form.Formula+" (not kept on a shelf)")
+				setAttr(opt, "value", form.Formula)
+			}
 			setValue(sel, form.Formula)
 			if want != form.Formula {
 				a.d.Text["charged_form"] = form.Formula
@@ -447,7 +515,7 @@ func (a *app) listMatches(box js.Value, text string) {
 	for _, m := range compound.Search(text, maxMatches) {
 		label := m.Compound.ID + " "
 		form := ""
-		if m.Form != m.Compound.Forms[0] {
+		if m.Form != m.Compound.Forms[0] && !m.Form.NotOnShelf {
 			label, form = m.Form.Formula+" ", m.Form.Formula
 		}
 		b := add(box, "button", "", label)
@@ -517,6 +585,12 @@ func (a *app) onUnits(js.Value, event) {
 	}
 	a.store.set(keyUnits, a.u.Temp+" "+a.u.Mass+" "+a.u.Volume)
 	a.showUnitLabels()
+	for name, err := range a.d.Errs { // their messages, in the new units
+		a.showFieldError(name, err)
+	}
+	if a.planErr != "" || !byID("stale").Get("hidden").Bool() {
+		a.recompute()
+	}
 	// Fields that do not parse keep the user's text; the others show the same quantity in
 	// the new unit.
 	for name, el := range a.inputs {
@@ -533,6 +607,7 @@ func (a *app) onUnits(js.Value, event) {
 }
 
 func (a *app) showUnitLabels() {
+	sayUnits = a.u
 	for _, el := range qa(doc, "[data-unit]") {
 		switch attr(el, "data-unit") {
 		case "temp":
@@ -541,6 +616,8 @@ func (a *app) showUnitLabels() {
 			setText(el, a.u.Mass)
 		case "volume":
 			setText(el, a.u.VolumeSymbol())
+		case "tempdiff":
+			setText(el, a.u.DeltaSymbol())
 		}
 	}
 }

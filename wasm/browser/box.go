@@ -114,6 +114,9 @@ func (a *app) save() {
 
 // importText adds every recipe of a file to the shelf, or none of them.
 func (a *app) importText(text string) {
+	if a.importLink(text) {
+		return
+	}
 	next := a.shelf
 	next.Recipes = append([]recipe.Recipe(nil), a.shelf.Recipes...)
 	n, err := next.Import([]byte(text))
@@ -199,13 +202,45 @@ func (a *app) share() {
 		return
 	}
 	frag := ShareFragment(r)
+	js.Global().Get("history").Call("replaceState", nil, "", frag)
+	link, local := shareLink(frag)
+	setValue(byID("share-link"), link)
+	if local {
+		a.boxMessage("m-import", localLinkNote)
+	}
+}
+
+// shareLink is the page's address with frag after the #. A page opened from a file gives
+// frag alone: its address would show the folders of this computer and opens nowhere else.
+func shareLink(frag string) (link string, local bool) {
 	loc := win.Location()
+	if loc.Protocol() == "file:" {
+		return frag, true
+	}
 	base := loc.Href()
 	if i := strings.IndexByte(base, '#'); i >= 0 {
 		base = base[:i]
 	}
-	js.Global().Get("history").Call("replaceState", nil, "", frag)
-	setValue(byID("share-link"), base+frag)
+	return base + frag, false
+}
+
+// localLinkNote says how the receiver uses a link made from a file.
+const localLinkNote = "Opened from a file, so the link holds the recipe only (from the #), not where this file lies. " +
+	"In their own copy of Saltcast the receiver pastes it into the Recipe box's text box and presses Import text, " +
+	"or adds it to the end of the address."
+
+// importLink takes in a share link pasted into the import box; it reports whether text was one.
+func (a *app) importLink(text string) bool {
+	text = strings.TrimSpace(text)
+	i := strings.IndexByte(text, '#')
+	if i < 0 || strings.ContainsAny(text, "{\n") {
+		return false
+	}
+	if !a.openLink(text[i:]) {
+		return false
+	}
+	a.boxMessage("m-import", "The link's recipe is open on the Batch screen (not saved: save it to keep it).")
+	return true
 }
 
 func (a *app) boxMessage(id, text string) {

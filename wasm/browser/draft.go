@@ -10,30 +10,13 @@ import (
 )
 
 // Units are the units the user reads and types: temperature "C", "F" or "K"; mass "g", "kg"
-// or "lb"; volume "mL", "L" or "gal" (US). The recipe itself is always °C, g and mL.
-type Units struct{ Temp, Mass, Volume string }
+// or "lb"; volume "mL", "L" or "gal" (US). The recipe itself is always °C, g and mL (and K
+// for temperature differences). unit.System converts and words them, in figures and in
+// the sentences of messages, cautions and warnings (Words).
+type Units = unit.System
 
 // DefaultUnits are the units of a first visit.
-var DefaultUnits = Units{Temp: "C", Mass: "g", Volume: "mL"}
-
-// TempSymbol is the symbol shown beside a temperature.
-func (u Units) TempSymbol() string {
-	switch u.Temp {
-	case "F":
-		return "°F"
-	case "K":
-		return "K"
-	}
-	return "°C"
-}
-
-// VolumeSymbol is the symbol shown beside a volume.
-func (u Units) VolumeSymbol() string {
-	if u.Volume == "gal" {
-		return "US gal"
-	}
-	return u.Volume
-}
+var DefaultUnits = unit.Metric
 
 // kind says how a value travels between the screen and the recipe: the recipe table's kinds
 // (recipe.Kind), and kDelta for a result that is a temperature difference.
@@ -140,6 +123,10 @@ func (d *Draft) set(s *recipe.Spec, text string, u Units) error {
 		return err
 	}
 	switch s.Kind {
+	case kPlain:
+		if isDelta(s) {
+			v = u.DeltaToK(v) // typed in °F-degrees when °F is shown
+		}
 	case kTemp:
 		v, err = unit.ToCelsius(name, v, u.Temp)
 	case kMass:
@@ -236,16 +223,36 @@ func (d *Draft) Display(name string, u Units) string {
 	if !ok {
 		return ""
 	}
-	switch k {
-	case kTemp:
-		return editable(TempFromC(v, u))
-	case kMass:
-		return editable(MassFromG(v, u))
-	case kVolume:
-		return editable(VolumeFromML(v, u))
+	switch {
+	case k == kTemp:
+		return shownIn(TempFromC(v, u), u.Temp == "C")
+	case k == kMass:
+		return shownIn(MassFromG(v, u), u.Mass == "g")
+	case k == kVolume:
+		return shownIn(VolumeFromML(v, u), u.Volume == "mL")
+	case isDelta(s):
+		return shownIn(u.DeltaFromK(v), u.Temp != "F")
 	}
 	return exact(v)
 }
+
+// isDelta reports whether a key holds a temperature difference in K (the safety margin, the
+// metastable width): shown in °F-degrees when °F is shown.
+func isDelta(s *recipe.Spec) bool { return s.Kind == kPlain && s.Unit == "K" }
+
+// shownIn is the text of a value in an input: as stored in the recipe's own unit; converted,
+// to inputDigits significant figures (5.2834 US gal, not 5.283441047). The draft keeps the
+// value itself, so a converted number typed back unchanged is not rounded.
+func shownIn(v float64, native bool) string {
+	if native {
+		return editable(v)
+	}
+	return exact(wire.RoundSig(v, inputDigits))
+}
+
+// inputDigits is how many significant figures a converted value shows in an input: 0.1 °F,
+// 0.01 K, 1 mg in a kilogram, well inside what a balance or thermometer reads.
+const inputDigits = 5
 
 // unitText is the unit shown beside a recipe key's number in units u.
 func unitText(s *recipe.Spec, u Units) string {
@@ -257,41 +264,20 @@ func unitText(s *recipe.Spec, u Units) string {
 	case kVolume:
 		return u.VolumeSymbol()
 	}
+	if isDelta(s) {
+		return u.DeltaSymbol()
+	}
 	return s.Unit
 }
 
 // TempFromC converts °C to the user's temperature unit.
-func TempFromC(c float64, u Units) float64 {
-	switch u.Temp {
-	case "F":
-		return unit.FahrenheitFromCelsius(c)
-	case "K":
-		return unit.KelvinFromCelsius(c)
-	}
-	return c
-}
+func TempFromC(c float64, u Units) float64 { return u.TempFromC(c) }
 
 // MassFromG converts grams to the user's mass unit.
-func MassFromG(g float64, u Units) float64 {
-	switch u.Mass {
-	case "kg":
-		return unit.KilogramsFromGrams(g)
-	case "lb":
-		return unit.PoundsFromGrams(g)
-	}
-	return g
-}
+func MassFromG(g float64, u Units) float64 { return u.MassFromG(g) }
 
 // VolumeFromML converts millilitres to the user's volume unit.
-func VolumeFromML(ml float64, u Units) float64 {
-	switch u.Volume {
-	case "L":
-		return unit.LitersFromMilliliters(ml)
-	case "gal":
-		return unit.USGallonsFromMilliliters(ml)
-	}
-	return ml
-}
+func VolumeFromML(ml float64, u Units) float64 { return u.VolumeFromML(ml) }
 
 // exact prints the shortest text that reads back as v, without an exponent.
 func exact(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }

@@ -58,11 +58,16 @@ func hasAdiabatic(r *recipe.Result) bool { return r.HasAdiabatic }
 func hasDissolutionHeat(r *recipe.Result) bool { return r.HasDissolutionHeat }
 func hasSeedHint(r *recipe.Result) bool        { return r.HasSeedHint }
 
+// notGiven stands where the library has no data for a figure (no enthalpy of solution):
+// a number there would read as "none".
+const notGiven = "not given (no enthalpy of solution in the library)"
+
 // Figures are the plan's results in the order the sheet and the CSV list them. The first
 // ones are also the big tiles of the batch screen (see shell.html).
 var Figures = []Figure{
 	{Key: "charge_g", Label: "Charge to weigh", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.ChargeG })},
 	{Key: "charged_form", Label: "Form weighed", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) { return 0, r.ChargedForm, r.ChargedForm != "" }},
+	{Key: "impurity_g", Label: "Impurity in the charge (taken as inert and insoluble: it ends in the filter cake)", Kind: kMass, Sig: 3, Get: numIf(func(r *recipe.Result) bool { return r.ImpurityG > 0 }, func(r *recipe.Result) float64 { return r.ImpurityG })},
 	{Key: "water_g", Label: "Water added", Kind: kMass, Sig: 4, Get: num(func(r *recipe.Result) float64 { return r.WaterG })},
 	{Key: "hydrate_water_g", Label: "Water brought in by the hydrate", Kind: kMass, Sig: 4, Get: numIf(func(r *recipe.Result) bool { return r.HydrateWaterG > 0 }, func(r *recipe.Result) float64 { return r.HydrateWaterG })},
 	{Key: "saturation_pct", Label: "Saturation at process temperature", Kind: kPlain, Unit: "%", Sig: 3, Get: num(func(r *recipe.Result) float64 { return r.SaturationPct })},
@@ -75,7 +80,12 @@ var Figures = []Figure{
 	{Key: "yield_pct", Label: "Yield", Kind: kPlain, Unit: "%", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.YieldPct })},
 	{Key: "liquor_g", Label: "Mother liquor", Kind: kMass, Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG })},
 	{Key: "liquor_g_per_100g_water", Label: "Mother liquor strength", Kind: kPlain, Unit: "g/100 g water", Sig: 4, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.LiquorG100 })},
-	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionHeatKJ })},
+	{Key: "dissolution_heat_kJ", Label: "Heat on dissolving (+ absorbed)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: func(r *recipe.Result) (float64, string, bool) {
+		if !r.HasDissolutionHeat {
+			return 0, notGiven, true // said, not shown as 0 kJ
+		}
+		return r.DissolutionHeatKJ, "", true
+	}},
 	{Key: "dissolution_temp_change_K", Label: "Batch temperature change on dissolving, if insulated", Kind: kDelta, Sig: 1, Get: numIf(hasDissolutionHeat, func(r *recipe.Result) float64 { return r.DissolutionTempChangeK })},
 	{Key: "crystallization_heat_kJ", Label: "Heat of crystallization (+ released)", Kind: kPlain, Unit: "kJ", Sig: 3, Get: numIf(hasTarget, func(r *recipe.Result) float64 { return r.CrystallizationHeatKJ })},
 	{Key: "heat_basis", Label: "Heat of crystallization, basis", Kind: kText, Get: func(r *recipe.Result) (float64, string, bool) {
@@ -135,18 +145,18 @@ func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool)
 	if !ok {
 		return "", "", false
 	}
+	if s != "" && f.Kind != kTempText {
+		return s, "", true // words in place of the number (kText, or notGiven)
+	}
 	switch f.Kind {
 	case kText:
 		return s, "", true
 	case kTempText:
 		return strings.Replace(s, "{T}", unit.FormatCompact(TempFromC(v, u), 4)+" "+u.TempSymbol(), 1), "", true
 	case kTemp:
-		return fixed(TempFromC(v, u), f.Sig), u.TempSymbol(), true
+		return fixed(TempFromC(v, u), u.TempDecimals(f.Sig)), u.TempSymbol(), true
 	case kDelta:
-		if u.Temp == "F" {
-			return fixed(v*1.8, f.Sig), "°F", true
-		}
-		return fixed(v, f.Sig), "K", true
+		return fixed(u.DeltaFromK(v), f.Sig), u.DeltaSymbol(), true
 	case kMass:
 		return unit.FormatNumber(MassFromG(v, u), f.Sig), u.Mass, true
 	}
@@ -154,7 +164,9 @@ func (f Figure) Show(r *recipe.Result, u Units) (text, unitText string, ok bool)
 }
 
 // TempText shows a temperature in °C in the user's unit with its symbol.
-func TempText(c float64, u Units) string { return fixed(TempFromC(c, u), 1) + " " + u.TempSymbol() }
+func TempText(c float64, u Units) string {
+	return fixed(TempFromC(c, u), u.TempDecimals(1)) + " " + u.TempSymbol()
+}
 
 // fixed prints v with dec decimals, "—" when v is not finite; "-0.0" prints as "0.0".
 func fixed(v float64, dec int) string {
@@ -210,21 +222,37 @@ func CSV(r *recipe.Result, u Units) string {
 	row("name", r.Recipe.Name, "", name.Label)
 	row("solute", r.SoluteID, "", r.SoluteName)
 	for _, in := range InputRows(r.Recipe, u) {
-		row("recipe."+in.Key, in.Text, in.Unit, in.Label)
+		row("recipe."+csvKey(in.Key, in.Unit), in.Text, in.Unit, in.Label)
 	}
 	for _, f := range Figures {
 		if text, ut, ok := f.Show(r, u); ok {
-			row(f.Key, text, ut, f.Label)
+			row(csvKey(f.Key, ut), text, ut, f.Label)
 		}
 	}
 	for _, w := range r.Warnings {
-		row("warning", w, "", "")
+		row("warning", say(w), "", "")
 	}
 	for _, c := range r.Cautions {
-		row("caution", c, "", "")
+		row("caution", say(c), "", "")
 	}
 	for _, s := range r.Sources {
 		row("source", s, "", "")
 	}
 	return b.String()
+}
+
+// csvKey is key with its unit suffix (_g, _C, _mL, _K) naming the unit the row is in:
+// charge_g in pounds is charge_lb, saturation_temp_C in °F is saturation_temp_F.
+func csvKey(key, shownUnit string) string {
+	suffix := map[string]string{"g": "g", "kg": "kg", "lb": "lb", "°C": "C", "°F": "F", "K": "K",
+		"mL": "mL", "L": "L", "US gal": "gal"}[shownUnit]
+	if suffix == "" {
+		return key
+	}
+	for _, old := range []string{"_g", "_C", "_mL", "_K"} {
+		if strings.HasSuffix(key, old) {
+			return strings.TrimSuffix(key, old) + "_" + suffix
+		}
+	}
+	return key
 }

@@ -161,7 +161,7 @@ func allUnits() []Units {
 	for _, t := range []string{"C", "F", "K"} {
 		for _, m := range []string{"g", "kg", "lb"} {
 			for _, v := range []string{"mL", "L", "gal"} {
-				us = append(us, Units{t, m, v})
+				us = append(us, Units{Temp: t, Mass: m, Volume: v})
 			}
 		}
 	}
@@ -394,12 +394,14 @@ func TestInputRowsCoverTable(t *testing.T) {
 	rng := rand.New(rand.NewPCG(20261202, 9))
 	seen := map[string]bool{}
 	for i := range 50 {
-		for _, row := range InputRows(tableRecipe(rng, i, true), Units{"F", "lb", "gal"}) {
+		for _, row := range InputRows(tableRecipe(rng, i, true), Units{Temp: "F", Mass: "lb", Volume: "gal"}) {
 			if row.Label == "" || row.Text == "" {
 				t.Errorf("row %+v lacks a label or a value", row)
 			}
-			if s, _ := recipe.FieldSpecs.Lookup(row.Key); s.Kind == recipe.Plain && row.Unit != s.Unit {
+			if s, _ := recipe.FieldSpecs.Lookup(row.Key); s.Kind == recipe.Plain && !isDelta(s) && row.Unit != s.Unit {
 				t.Errorf("row %s has unit %q, want %q", row.Key, row.Unit, s.Unit)
+			} else if isDelta(s) && row.Unit != "°F" {
+				t.Errorf("row %s, a temperature difference, has unit %q in °F, want °F", row.Key, row.Unit)
 			}
 			seen[row.Key] = true
 		}

@@ -67,7 +67,7 @@ func (a *app) startGas() {
 		{"saturation_umol_per_kg", "O₂ at saturation", "µmol/kg"},
 		{"percent_saturation", "Measured O₂ is", "% of saturation"},
 		{"total_released_mL_per_L", "Gas driven out on heating", "mL per L of water"},
-		{"bubble_temp_C", "Bubbles can form from", "temp"},
+		{"bubble_temp_C", "Gas starts to leave", "temp"},
 	} {
 		box := addFigure(figs, t.label)
 		val := add(box, "span", "val", "")
@@ -281,7 +281,13 @@ func (a *app) gasCompute() error {
 		}
 		shown["total_released_mL_per_L"] = unit.FormatNumber(o.TotalMLPerL, 3)
 		if o.BubbleFound {
-			shown["bubble_temp_C"] = fixed(TempFromC(o.BubbleTempC, a.u), 1)
+			// Water saturated with air at the start holds all the gas it can: any warming lets
+			// gas out, so the bubble temperature is the start temperature and says nothing new.
+			if o.BubbleTempC-from < bubbleAtOnceK {
+				shown["bubble_temp_C"] = bubbleAtOnce
+			} else {
+				shown["bubble_temp_C"] = fixed(TempFromC(o.BubbleTempC, a.u), 1)
+			}
 		}
 		warnings = append(warnings, o.Warnings...)
 		warnings = append(warnings, o.Notes...)
@@ -311,6 +317,15 @@ func (a *app) gasCompute() error {
 		}
 		setText(t.out, s)
 		setHidden(t.box, !ok)
+		if t.key == "bubble_temp_C" {
+			words := s == bubbleAtOnce
+			setHidden(q(t.box, ".u"), words)
+			sub := q(t.box, ".sub")
+			if !exists(sub) {
+				sub = add(t.box, "span", "sub", bubbleWhy)
+			}
+			setHidden(sub, !words)
+		}
 	}
 	// The chart goes through web/chart's one oxygen adapter (curve, label, units, notes);
 	// anything it cannot draw becomes a placeholder saying why. (chart.OxygenSVG does the same
@@ -336,6 +351,17 @@ func (a *app) gasCompute() error {
 	fillList(byID("gas-sources"), sources)
 	return nil
 }
+
+// bubbleAtOnceK: a bubble temperature this close to the start is the start itself
+// (air-saturated water), said in words.
+const bubbleAtOnceK = 0.5
+
+// bubbleAtOnce is what the technician needs to know about air-saturated water.
+const bubbleAtOnce = "as soon as it warms"
+
+// bubbleWhy says why, under the figure.
+const bubbleWhy = "Water saturated with air holds all the gas it can: every degree of warming drives some out. " +
+	"Bubbles show on walls and probes a few degrees later; boil or pull a vacuum first if they matter."
 
 // gasCaution closes the gas screen's cautions, as the planner's general caution closes a
 // batch's.

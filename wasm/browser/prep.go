@@ -176,12 +176,17 @@ func (a *app) fillForms() {
 	}
 	setText(picked, c.Name+" · "+c.ID)
 	want := ps.d.Text["charged_form"]
-	if fw, err := c.Form(want); err == nil {
+	if fw, err := c.Form(want); err == nil && !fw.NotOnShelf {
 		want = fw.Formula
-	} else {
+	} else if !f.NotOnShelf {
 		want = f.Formula
+	} else {
+		want = c.Forms[0].Formula
 	}
 	for i, form := range c.Forms {
+		if form.NotOnShelf {
+			continue // crystallizes in the cold, never weighed out
+		}
 		label := form.Formula
 		if i == 0 {
 			label += " (anhydrous)"
@@ -502,6 +507,10 @@ func (a *app) adoptOldPreps() {
 // nothing, into the recipe box.
 func (a *app) importPreps() {
 	msg := byID("m-prep-import")
+	if t := strings.TrimSpace(value(byID("prep-transfer"))); !strings.ContainsAny(t, "{\n") &&
+		strings.Contains(t, "#") && a.openLink(t[strings.IndexByte(t, '#'):]) {
+		return // a share link: its preparation (or recipe) is open on screen
+	}
 	next := a.shelf
 	next.Recipes = append([]recipe.Recipe(nil), a.shelf.Recipes...)
 	n, err := next.Import([]byte(strings.TrimSpace(value(byID("prep-transfer")))))
@@ -524,10 +533,14 @@ func (a *app) sharePrep() {
 		setText(byID("m-prep-import"), "No link: correct the marked field first.")
 		return
 	}
-	loc := win.Location()
-	link := strings.SplitN(loc.Href(), "#", 2)[0] + PrepFragment(p)
+	link, local := shareLink(PrepFragment(p))
 	setValue(byID("prep-transfer"), link)
 	js.Global().Get("history").Call("replaceState", nil, "", PrepFragment(p))
+	if local {
+		setText(byID("m-prep-import"), "The link is in the box below. Opened from a file, so it holds the preparation only (from the #), "+
+			"not where this file lies: the receiver pastes it into this box in their copy of Saltcast and imports it, or adds it to the end of the address.")
+		return
+	}
 	setText(byID("m-prep-import"), "The link is in the box below; the preparation rides in it after the #, nothing is sent anywhere.")
 }
 

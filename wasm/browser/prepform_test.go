@@ -153,10 +153,10 @@ func TestPrepFormUnits(t *testing.T) {
 		text       string
 		want       float64
 	}{
-		{Units{"C", "g", "L"}, "volume", "final_volume_mL", "2,5", 2500},
-		{Units{"C", "lb", "mL"}, "mass", "final_mass_g", "1.5", 680.388555},
-		{Units{"C", "kg", "gal"}, "volume", "final_volume_mL", "2", 7570.823568},
-		{Units{"F", "kg", "mL"}, "water", "solvent_g", "0.25", 250},
+		{Units{Temp: "C", Mass: "g", Volume: "L"}, "volume", "final_volume_mL", "2,5", 2500},
+		{Units{Temp: "C", Mass: "lb", Volume: "mL"}, "mass", "final_mass_g", "1.5", 680.388555},
+		{Units{Temp: "C", Mass: "kg", Volume: "gal"}, "volume", "final_volume_mL", "2", 7570.823568},
+		{Units{Temp: "F", Mass: "kg", Volume: "mL"}, "water", "solvent_g", "0.25", 250},
 	} {
 		d := NewPrepDraft()
 		d.Pick["amount"] = tc.pick
@@ -230,7 +230,7 @@ func TestLabel(t *testing.T) {
 		}
 	}
 	// In litres and pounds the label speaks the user's units.
-	l = LabelFor(res, "", "2026-03-01", Units{"C", "lb", "L"})
+	l = LabelFor(res, "", "2026-03-01", Units{Temp: "C", Mass: "lb", Volume: "L"})
 	if !strings.Contains(l.Made, "lb KCl, made up to 1 L at") {
 		t.Errorf("label in lb and L: %s", l.Made)
 	}

@@ -3,6 +3,7 @@
 package main
 
 import (
+	"errors"
 	"strings"
 	"syscall/js"
 
@@ -14,6 +15,14 @@ import (
 	"saltcast/core/wire"
 	"saltcast/web/chart"
 )
+
+// onSheetOnly are figures the batch screen leaves to the sheet and the CSV: the heat of
+// crystallization on the lowest estimate is said once on screen, in the basis tile (lowest
+// kJ/mol beside the design value the cooling is sized on).
+var onSheetOnly = map[string]bool{"crystallization_heat_low_kJ": true}
+
+// impuritiesNote is said wherever the purity is: the planner's model of what is not the salt.
+const impuritiesNote = "impurities taken as inert and insoluble"
 
 // bindTiles finds the element of each Figure on the batch screen, making a small tile in
 // #extra-figures for the figures the shell does not place itself.
@@ -28,7 +37,7 @@ func (a *app) bindTiles() {
 			if p := el.Get("parentElement"); exists(p) {
 				t.unit = q(p, ".u")
 			}
-		} else if f.Kind == kText {
+		} else if f.Kind == kText || onSheetOnly[f.Key] {
 			continue // words such as the form weighed already show beside their numbers
 		} else {
 			t.box = addFigure(extra, f.Label)
@@ -53,7 +62,10 @@ func (a *app) render() {
 		if a.changed("out:"+t.fig.Key, text) {
 			setText(t.out, text)
 		}
-		if exists(t.unit) && ut != "" && a.changed("unit:"+t.fig.Key, ut) {
+		// A number's words in its place (not given) carry no unit; a figure of words only
+		// leaves the unit it sits beside alone.
+		words := t.fig.Kind == kText || t.fig.Kind == kTempText
+		if exists(t.unit) && (ut != "" || !words) && a.changed("unit:"+t.fig.Key, ut) {
 			setText(t.unit, ut)
 		}
 		// A tile of its own hides when the plan has no such figure; a figure inside
@@ -77,12 +89,13 @@ func (a *app) render() {
 		if r.PurityPct > 0 && r.PurityPct < 100 {
 			cf += " at " + exact(wire.RoundSig(r.PurityPct, 4)) + " % purity"
 		}
+		cf += "; " + impuritiesNote
 	}
 	setText(byID("charge-form"), cf)
 
-	a.fillListOnce("cautions", r.Cautions)
+	a.fillListOnce("cautions", sayAll(r.Cautions))
 	markCautions(byID("cautions"), r.CautionKinds)
-	a.fillListOnce("warnings", orNone(r.Warnings))
+	a.fillListOnce("warnings", orNone(sayAll(r.Warnings)))
 	a.fillListOnce("sources", r.Sources)
 	if ct := a.curveText(r); a.changed("curve-range", ct) {
 		setText(byID("curve-range"), ct)
@@ -142,6 +155,15 @@ func markCautions(list js.Value, kinds []balance.CautionKind) {
 		setAttr(li, "data-kind", string(k))
 		classSet(li, "strong", k == balance.CautionToxic)
 	}
+}
+
+// sayAll words each of the core's sentences for the screen (say).
+func sayAll(s []string) []string {
+	out := make([]string, len(s))
+	for i, x := range s {
+		out[i] = say(x)
+	}
+	return out
 }
 
 func orNone(s []string) []string {
@@ -288,7 +310,12 @@ func (a *app) showFit() {
 	}
 	f, err := a.fit()
 	if err != nil {
-		setText(out, "No curve yet: "+fieldMessage(err, ""))
+		var fe *unit.FieldError
+		if errors.As(err, &fe) && fe.Allowed != "" {
+			setText(out, "No curve yet: the fit needs "+say(fe.Allowed)+".")
+		} else {
+			setText(out, "No curve yet: "+say(err.Error()))
+		}
 		return
 	}
 	setText(out, "Curve over "+TempText(f.Curve.MinC, a.u)+" to "+TempText(f.Curve.MaxC, a.u)+
@@ -328,10 +355,10 @@ func fillProgramme(body js.Value, r *recipe.Result, u Units, cubic, both bool) {
 		tr := add(body, "tr", "", "")
 		add(tr, "td", "", exact(wire.RoundSig(s.TimeMin, 4)))
 		if both || !cubic {
-			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), 1))
+			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), u.TempDecimals(1)))
 		}
 		if both || cubic {
-			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), 1))
+			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), u.TempDecimals(1)))
 		}
 	}
 }
@@ -347,9 +374,9 @@ func (a *app) renderSheet() {
 	setText(byID("s-date"), today())
 	setText(byID("s-checksum"), r.Recipe.Checksum())
 	a.renderRecord(r)
-	fillList(byID("s-cautions"), r.Cautions)
+	fillList(byID("s-cautions"), sayAll(r.Cautions))
 	markCautions(byID("s-cautions"), r.CautionKinds)
-	fillList(byID("s-warnings"), orNone(r.Warnings))
+	fillList(byID("s-warnings"), orNone(sayAll(r.Warnings)))
 	fillList(byID("s-sources"), append(r.Sources, a.curveText(r)))
 	setText(byID("s-notes"), r.Recipe.Notes)
 
@@ -370,7 +397,7 @@ func (a *app) renderSheet() {
 	}
 	row(in, "Solute", solute)
 	row(in, "Form on the shelf", r.ChargedForm)
-	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" %")
+	row(in, "Purity", exact(wire.RoundSig(r.PurityPct, 4))+" % ("+impuritiesNote+")")
 	for _, k := range InputRows(r.Recipe, a.u) {
 		if k.Key != "purity_pct" { // shown above from the plan, with its default
 			row(in, k.Label, k.Text+" "+k.Unit)

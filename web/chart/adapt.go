@@ -171,6 +171,9 @@ func BatchFromPlan(r *balance.Result) *Batch {
 	if b.Onset == nil {
 		b.Settled = nil
 	}
+	if r.HasClearDown {
+		b.Storage = &Point{r.ClearDownToC, r.ConcentrationG100}
+	}
 	return b
 }
 

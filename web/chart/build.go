@@ -54,6 +54,9 @@ type Batch struct {
 	// crystallization released at Onset stayed in it (no cooling): drawn as
 	// a jump from Onset.
 	Settled *Point
+	// Storage is where a stock sized to stay clear is kept (the temperature it was sized
+	// for), nil for other batches. Without a target the path runs to it.
+	Storage *Point
 }
 
 // SolubilityView is what the solubility chart shows.
@@ -194,12 +197,21 @@ func Solubility(v SolubilityView) (Chart, error) {
 			}
 			route = append(route, alongCurve(curve, from, b.End.X)...)
 		}
-		route = append(route, b.End)
-		pts, err := convAll("batch path", dedupe(route), 0)
-		if err != nil {
-			return Chart{}, err
+		// No target: the batch stays where it was dissolved, or (a stock kept clear) is
+		// cooled to its storage temperature without crystals.
+		noTarget := b.End == b.Dissolve
+		if noTarget && b.Storage != nil {
+			route = append(route, *b.Storage)
+		} else {
+			route = append(route, b.End)
 		}
-		c.Series = append(c.Series, Series{Label: "Batch path", Points: pts, Kind: Path})
+		if route = dedupe(route); len(route) > 1 { // a path of one point is not drawn, nor listed
+			pts, err := convAll("batch path", route, 0)
+			if err != nil {
+				return Chart{}, err
+			}
+			c.Series = append(c.Series, Series{Label: "Batch path", Points: pts, Kind: Path})
+		}
 		if b.Onset != nil && b.Settled != nil {
 			j, err := convAll("insulated jump", []Point{*b.Onset, *b.Settled}, 0)
 			if err != nil {
@@ -225,6 +237,12 @@ func Solubility(v SolubilityView) (Chart, error) {
 		if b.Seed != nil && b.Onset != nil && *b.Seed == *b.Onset {
 			onsetMark = nil // seeding starts the crystals: one marker says it
 		}
+		// One marker a point: no end marker over the dissolved one (no target), and a stock
+		// stored where it ends is marked as stored.
+		endMark := &b.End
+		if noTarget || (b.Storage != nil && *b.Storage == b.End) {
+			endMark = nil
+		}
 		for _, m := range [...]struct {
 			label string
 			p     *Point
@@ -235,7 +253,8 @@ func Solubility(v SolubilityView) (Chart, error) {
 			{"Seeded at", b.Seed, TriangleDown},
 			{"Crystals from", onsetMark, TriangleUp},
 			{"Insulated, ends at", b.Settled, Cross},
-			{"Ends at", &b.End, Square},
+			{"Ends at", endMark, Square},
+			{"Kept clear down to", b.Storage, Square},
 		} {
 			if err := mark(m.label, m.p, m.s); err != nil {
 				return Chart{}, err

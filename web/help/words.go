@@ -57,6 +57,7 @@ var Outputs = []Output{
 	{"charge_g", "Charge to weigh", "The mass to weigh from the jar you named (its form and purity included)."},
 	{"charged_form", "Form weighed", "The form the charge is for: anhydrous or a hydrate."},
 	{"water_g", "Water added", "The water you put in, in grams."},
+	{"impurity_g", "Impurity in the charge", "What the purity you gave leaves of the charge that is not the compound. Saltcast takes it as inert and insoluble: it does not change the solubility and ends in the filter cake with the crystals. If your impurity dissolves or reacts, the figures do not cover it."},
 	{"hydrate_water_g", "Water brought in by the hydrate", "The water of crystallization in the charge; it joins the solvent once dissolved."},
 	{"saturation_pct", "Saturation at process temperature", "How much of what could dissolve at the process temperature is in the batch."},
 	{"min_water_g", "Least water that dissolves the charge", "Less water than this at the process temperature leaves solid undissolved."},
