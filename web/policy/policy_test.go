@@ -25,8 +25,8 @@ func TestFileAndServedDifferOnlyWhereServedMust(t *testing.T) {
 	must := map[string]string{
 		"img-src": "'self' data:", "connect-src": "'self'", "worker-src": "'self'", "manifest-src": "'self'",
 	}
-	if len(file) != len(served) {
-		t.Fatalf("file has %d directives, served %d", len(file), len(served))
+	if len(file)+1 != len(served) || file["manifest-src"] != "" {
+		t.Fatalf("file has %d directives, served %d; want the served page's manifest-src more", len(file), len(served))
 	}
 	for name, fv := range file {
 		sv, ok := served[name]
@@ -42,7 +42,7 @@ func TestFileAndServedDifferOnlyWhereServedMust(t *testing.T) {
 		}
 	}
 	// The file may fetch nothing at all.
-	for _, d := range []string{"default-src", "connect-src", "worker-src", "manifest-src", "object-src",
+	for _, d := range []string{"default-src", "connect-src", "worker-src", "object-src",
 		"frame-src", "form-action", "base-uri"} {
 		if file[d] != "'none'" {
 			t.Errorf("file %s = %q, want 'none'", d, file[d])
@@ -99,4 +99,20 @@ func FuzzInlineScripts(f *testing.F) {
 			}
 		}
 	})
+}
+
+// The file's policy names only directives that Chromium, Gecko and WebKit all know, so no
+// engine logs an unknown directive when the file opens (WebKit logs one for manifest-src).
+// The list: the fetch and document/navigation directives of W3C Content Security Policy
+// Level 3 that MDN's browser-compat-data (http/headers/Content-Security-Policy.json) marks as
+// supported in Chrome, Firefox and Safari (from memory; WebKit's support for manifest-src is
+// marked false there, and the WebKit suite of web/ loads the file in WebKitGTK).
+func TestFileDirectivesKnownToAllEngines(t *testing.T) {
+	known := []string{"default-src", "script-src", "style-src", "img-src", "font-src", "connect-src",
+		"media-src", "object-src", "frame-src", "worker-src", "form-action", "base-uri", "child-src"}
+	for name := range directivesOf(File("go();")) {
+		if !slices.Contains(known, name) {
+			t.Errorf("the file's policy has %s, which not every engine knows", name)
+		}
+	}
 }
