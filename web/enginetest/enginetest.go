@@ -126,3 +126,13 @@ func lastLines(s string, n int) string {
 	}
 	return strings.Join(lines, "\n")
 }
+
+// Sees reports whether the request log holds url (the same URL, or one that starts with it).
+func Sees(log []string, url string) bool {
+	for _, r := range log {
+		if strings.HasPrefix(r, url) || strings.HasPrefix(r, strings.TrimSuffix(url, "/")) {
+			return true
+		}
+	}
+	return false
+}
