@@ -31,7 +31,7 @@ var directives = []directive{
 	{"media-src", "'none'", "'none'"},
 	{"object-src", "'none'", "'none'"},
 	{"frame-src", "'none'", "'none'"},
-	{"worker-src", "'none'", "'self'"},   // served: /sw.js
+	{"worker-src", "'none'", "'self'"}, // served: /sw.js
 	// served: /manifest.webmanifest. Left out of the file: WebKit does not know manifest-src
 	// and logs an error for it, and default-src 'none' already covers it where it is known.
 	{"manifest-src", "", "'self'"},
