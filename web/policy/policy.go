@@ -32,8 +32,8 @@ var directives = []directive{
 	{"object-src", "'none'", "'none'"},
 	{"frame-src", "'none'", "'none'"},
 	{"worker-src", "'none'", "'self'"}, // served: /sw.js
-	// served: /manifest.webmanifest. Left out of the file: WebKit does not know manifest-src
-	// and logs an error for it, and default-src 'none' already covers it where it is known.
+	// served: /manifest.webmanifest. Left out of the file: WebKitGTK logs manifest-src as an
+	// unrecognised directive, and default-src 'none' already covers it where it is known.
 	{"manifest-src", "", "'self'"},
 	{"form-action", "'none'", "'none'"},
 	{"base-uri", "'none'", "'none'"},
