@@ -13,6 +13,7 @@ import (
 	"net/http"
 	"os"
 	"os/exec"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"sync"
@@ -23,9 +24,17 @@ import (
 // shown on a virtual X display (Debian's xvfb).
 const (
 	WebKitDriverPath = "/usr/bin/WebKitWebDriver"
-	MiniBrowserPath  = "/usr/lib/x86_64-linux-gnu/webkit2gtk-4.1/MiniBrowser"
 	XvfbPath         = "/usr/bin/Xvfb"
 )
+
+// miniBrowser is WebKitGTK's MiniBrowser (package libwebkit2gtk-4.1-0, which
+// webkit2gtk-driver depends on), under the machine's multiarch directory.
+func miniBrowser() string {
+	if m, _ := filepath.Glob("/usr/lib/*/webkit2gtk-4.1/MiniBrowser"); len(m) > 0 {
+		return m[0]
+	}
+	return "/usr/lib/x86_64-linux-gnu/webkit2gtk-4.1/MiniBrowser"
+}
 
 type webkit struct {
 	xvfb, driver *exec.Cmd
@@ -38,7 +47,7 @@ type webkit struct {
 // StartWebKit starts Xvfb on a free display, WebKitWebDriver on a free port and a MiniBrowser
 // session in it, with every request the page might make sent to the recording proxy.
 func StartWebKit(o Options) (Browser, error) {
-	for _, p := range []string{WebKitDriverPath, MiniBrowserPath, XvfbPath} {
+	for _, p := range []string{WebKitDriverPath, miniBrowser(), XvfbPath} {
 		if !executable(p) {
 			return nil, fmt.Errorf("%s %w (apt-get install webkit2gtk-driver xvfb, or run web/scripts/deps-webkit.sh)", p, ErrMissing)
 		}
@@ -104,7 +113,7 @@ func StartWebKit(o Options) (Browser, error) {
 		args = append(args, "--enable-javascript=false") // a WebKitSettings property
 	}
 	caps := map[string]any{"capabilities": map[string]any{"alwaysMatch": map[string]any{
-		"webkitgtk:browserOptions": map[string]any{"binary": MiniBrowserPath, "args": args},
+		"webkitgtk:browserOptions": map[string]any{"binary": miniBrowser(), "args": args},
 		"proxy":                    map[string]any{"proxyType": "manual", "httpProxy": k.proxy.addr(), "sslProxy": k.proxy.addr()},
 	}}}
 	var sess struct {

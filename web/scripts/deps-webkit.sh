@@ -4,9 +4,9 @@
 # (the virtual X display MiniBrowser is shown on). Fast and silent when all are there. As root
 # it installs them with apt-get; otherwise it prints what to install and fails.
 set -euo pipefail
-minibrowser=/usr/lib/x86_64-linux-gnu/webkit2gtk-4.1/MiniBrowser
+minibrowser() { ls /usr/lib/*/webkit2gtk-4.1/MiniBrowser 2>/dev/null | head -n 1; }
 missing=()
-[ -x /usr/bin/WebKitWebDriver ] && [ -x "$minibrowser" ] || missing+=(webkit2gtk-driver)
+[ -x /usr/bin/WebKitWebDriver ] && [ -n "$(minibrowser)" ] || missing+=(webkit2gtk-driver)
 [ -x /usr/bin/Xvfb ] || missing+=(xvfb)
 if [ ${#missing[@]} -eq 0 ]; then
 	exit 0
@@ -20,6 +20,6 @@ echo "deps-webkit: installing ${missing[*]} with apt-get" >&2
 export DEBIAN_FRONTEND=noninteractive
 apt-get update -qq
 apt-get install -y -qq --no-install-recommends "${missing[@]}" >/dev/null
-for f in /usr/bin/WebKitWebDriver "$minibrowser" /usr/bin/Xvfb; do
+for f in /usr/bin/WebKitWebDriver "$(minibrowser)" /usr/bin/Xvfb; do
 	[ -x "$f" ] || { echo "deps-webkit: $f still missing after apt-get" >&2; exit 1; }
 done
