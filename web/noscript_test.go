@@ -89,3 +89,39 @@ func scriptsDisabled(off bool) chromedp.Action[chromedp.Void] {
 		return err
 	})
 }
+
+// A browser that runs scripts but cannot start the app (here: a damaged module) shows why
+// and the note on opening the file in a current browser again, not a calculator of dashes.
+func TestStartFailureShowsNote(t *testing.T) {
+	page, err := os.ReadFile(filepath.Join("..", "dist", "saltcast.html"))
+	if err != nil {
+		need(t, "dist/saltcast.html is not built")
+	}
+	const open0 = `<script id="saltcast-wasm" type="application/octet-stream">`
+	s := string(page)
+	i := strings.Index(s, open0)
+	if i < 0 {
+		t.Fatal("the page has no module block")
+	}
+	i += len(open0)
+	j := strings.Index(s[i:], "</script>")
+	damaged := s[:i] + s[i:i+64] + s[i+j:] // the module cut short
+	path := filepath.Join(t.TempDir(), "damaged.html")
+	if err := os.WriteFile(path, []byte(damaged), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	ctx := tab(t)
+	if err := chromedp.Do(ctx, chromedp.Navigate(fileURL(t, path))); err != nil {
+		t.Fatal(err)
+	}
+	state, err := chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`))
+	if err != nil || state != "error" {
+		t.Fatalf("a damaged module: data-ready %q, %v; want error", state, err)
+	}
+	if msg := mustEval[string](t, ctx, `document.getElementById("load-error").textContent`); !strings.Contains(msg, "Safari 16") {
+		t.Errorf("the load error does not name the browsers needed: %q", msg)
+	}
+	if !mustEval[bool](t, ctx, `getComputedStyle(document.getElementById("no-app")).display !== "none" && document.querySelector("main").getClientRects().length === 0`) {
+		t.Error("after a failed start the note is hidden or the calculator shows")
+	}
+}
