@@ -26,14 +26,16 @@ build:
 	$(GO) run ./web/bundle -version "$(VERSION)" -out dist/saltcast.html
 	@echo "built $(CURDIR)/dist/saltcast.html"
 
-## test-deps: what the browser and worker tests need (chromium via apt-get, workerd via npm ci)
+## test-deps: what the browser and worker tests need (chromium, firefox-esr, webkit2gtk-driver
+## and xvfb via apt-get, workerd via npm ci)
 test-deps:
 	bash web/scripts/test-deps.sh
 
-# The browser (chromedp) and worker (workerd) tests are built only with these tags, so a plain
-# `go test ./...` runs the host tests alone; with the tags a missing chromium, workerd or build
-# is a failure, never a skip.
-E2E_TAGS = browser,workerd
+# The browser (chromedp), cross-engine (Gecko: firefox-esr; WebKit: WebKitWebDriver under Xvfb)
+# and worker (workerd) tests are built only with these tags, so a plain `go test ./...` runs the
+# host tests alone; with the tags a missing chromium, firefox-esr, WebKit driver, workerd or
+# build is a failure, never a skip.
+E2E_TAGS = browser,gecko,webkit,workerd
 
 ## test-core: host tests only (no browser, no worker), and vet of the js/wasm programs
 test-core:

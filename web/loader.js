@@ -15,9 +15,11 @@
     if (box) {
       box.hidden = false;
       box.textContent = "Saltcast could not start in this browser: " + String(err) +
-        ". It needs a current browser with WebAssembly.";
+        ". It needs Chrome or Edge 97, Firefox 102, Safari 16 or later (see the note below).";
     }
     document.documentElement.setAttribute("data-ready", "error");
+    // The app cannot start here: the note on opening the file in a current browser again.
+    document.documentElement.removeAttribute("data-run");
   }
   // The module's text: 13 bits in every two characters of 91 (saltcast/web/text91 writes it
   // and says why; 1.23 characters a byte where base64 takes 1.33).

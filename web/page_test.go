@@ -51,17 +51,17 @@ func TestPageIsSelfContained(t *testing.T) {
 		t.Error("CSP allows eval")
 	}
 	// Every script the page runs is listed by its hash, and nothing else is.
-	scripts := regexp.MustCompile(`(?s)<script id="(saltcast-go|saltcast-loader)">(.*?)</script>`).FindAllStringSubmatch(html, -1)
-	if len(scripts) != 2 {
-		t.Fatalf("found %d of the page's two scripts", len(scripts))
+	scripts := regexp.MustCompile(`(?s)<script id="(saltcast-run|saltcast-go|saltcast-loader)">(.*?)</script>`).FindAllStringSubmatch(html, -1)
+	if len(scripts) != 3 {
+		t.Fatalf("found %d of the page's three scripts", len(scripts))
 	}
 	for _, m := range scripts {
 		if !strings.Contains(csp, policy.ScriptHash(m[2])) {
 			t.Errorf("CSP lacks the hash of script %s", m[1])
 		}
 	}
-	if n := strings.Count(csp, "'sha256-"); n != 2 {
-		t.Errorf("CSP lists %d script hashes, want 2", n)
+	if n := strings.Count(csp, "'sha256-"); n != 3 {
+		t.Errorf("CSP lists %d script hashes, want 3", n)
 	}
 	// No element loads anything: no src or href to another file, no link or iframe. Script
 	// and style contents are code, not markup, so they are left out of this look.

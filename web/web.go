@@ -2,9 +2,9 @@
 // WebAssembly, gzip-compressed and inlined as ASCII text (saltcast/web/text91), the Go
 // toolchain's wasm_exec.js, and the HTML/CSS shell kept beside this file.
 //
-// The page needs no network: the module is unpacked in the browser with DecompressionStream
+// The page needs no network: the module is unpacked in the browser (LZMA by the loader, or gzip by DecompressionStream)
 // and compiled from memory, and a Content-Security-Policy in the page forbids every request
-// (connect-src 'none' and the rest) while allowing its own two inline scripts, by their
+// (connect-src 'none' and the rest) while allowing its own three inline scripts, by their
 // SHA-256 hashes, and the WebAssembly compile ('wasm-unsafe-eval', which is needed and enough).
 package web
 
@@ -331,6 +331,12 @@ func withSize(lz []byte, size int) ([]byte, string, error) {
 	return lz, "xz", nil
 }
 
+// runMark is the page's first script, in its head: it marks the page as running scripts
+// before anything is painted, so app.css shows the app and not the note on how to open the
+// file (which a viewer without scripts shows instead). The loader takes the mark away when
+// the app cannot start.
+const runMark = `document.documentElement.setAttribute("data-run", "");`
+
 // Page assembles the HTML file from the gzip-compressed module, the toolchain's
 // wasm_exec.js and the version text.
 func Page(gz []byte, wasmExec, version string) ([]byte, error) {
@@ -343,7 +349,8 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 		return nil, errors.New("app.css contains </style and cannot be inlined")
 	}
 	r := strings.NewReplacer(
-		"{{CSP}}", policy.File(wasmExec, loaderJS),
+		"{{CSP}}", policy.File(runMark, wasmExec, loaderJS),
+		"{{RUN}}", runMark,
 		"{{VERSION}}", htmlEscape(version),
 		"{{CSS}}", appCSS,
 		"{{HELP}}", help.HTML(),

@@ -299,7 +299,15 @@ func (a *app) onRecipeInput(el js.Value, _ event) {
 	name := attr(el, "name")
 	switch name {
 	case groupInputs["water"]:
-		a.d.Pick["water"] = value(el)
+		// The amount goes over to the other box (converted), so the result on screen stays
+		// the one of the amount shown.
+		a.d.SwitchWater(value(el))
+		for _, k := range []string{"water_g", "water_mL"} {
+			if a.d.Errs[k] == nil { // a box with a typing error keeps the user's text
+				setValue(a.inputs[k], a.d.Display(k, a.u))
+				a.showFieldError(k, nil)
+			}
+		}
 		a.showBases()
 	case groupInputs["amount"]:
 		a.d.Pick["amount"] = value(el)

@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"saltcast/core/recipe"
+	"saltcast/core/water"
 	"saltcast/core/unit"
 	"saltcast/core/wire"
 )
@@ -72,6 +73,35 @@ func (d *Draft) SetCustom(on bool) {
 	if on {
 		d.Pick["solute"] = "custom"
 	}
+}
+
+// SwitchWater gives the water by basis ("mass" or "volume") and carries the amount over, as
+// the planner converts it: the grams of the volume at its temperature (water_temp_C, else
+// recipe.DefaultWaterTempC) by pure water's density (core/water), or the volume of the
+// grams at that temperature. With nothing readable to carry (the box left is empty or
+// wrong), the new box keeps what it had; an empty one then fails the plan and the page
+// marks its last result as stale.
+func (d *Draft) SwitchWater(basis string) {
+	old := d.Pick["water"]
+	d.Pick["water"] = basis
+	if old == basis {
+		return
+	}
+	tempC := recipe.DefaultWaterTempC
+	if v, ok := d.Num["water_temp_C"]; ok && d.Errs["water_temp_C"] == nil {
+		tempC = v
+	}
+	gPerML := water.DensityKgPerM3(tempC) / 1000
+	from, to, factor := "water_mL", "water_g", gPerML
+	if basis == "volume" {
+		from, to, factor = "water_g", "water_mL", 1/gPerML
+	}
+	v, ok := d.Num[from]
+	if !ok || d.Errs[from] != nil || !(factor > 0) {
+		return
+	}
+	d.Num[to] = v * factor
+	delete(d.Errs, to)
 }
 
 // Set reads what the user typed into field name, in units u. An empty optional number

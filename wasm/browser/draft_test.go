@@ -163,3 +163,46 @@ func TestParsePoints(t *testing.T) {
 		t.Errorf("FormatPoints does not read back: %v", back)
 	}
 }
+
+// Switching the water between volume and mass carries the amount over at the density of
+// pure water. Check values: 998.2067 kg/m³ at 20 °C and 999.1026 kg/m³ at 15 °C (CRC
+// Handbook of Chemistry and Physics, 97th ed., "Properties of water in the range 0–100 °C",
+// from memory); tolerance 1e-5 relative covers the fourth decimal of those table values.
+func TestSwitchWaterCarriesAmount(t *testing.T) {
+	d := NewDraft()
+	d.Set("solute", "KNO3", DefaultUnits)
+	d.Set("dissolve_temp_C", "30", DefaultUnits)
+	d.SwitchWater("volume")
+	if err := d.Set("water_mL", "1000", DefaultUnits); err != nil {
+		t.Fatal(err)
+	}
+	d.SwitchWater("mass") // no temperature given: 20 °C
+	if g := d.Num["water_g"]; !nearTol(g, 998.2067, 1e-5) {
+		t.Errorf("1000 mL at 20 °C → %v g, want 998.2067 g", g)
+	}
+	d.SwitchWater("volume")
+	if err := d.Set("water_temp_C", "15", DefaultUnits); err != nil {
+		t.Fatal(err)
+	}
+	if err := d.Set("water_mL", "2000", DefaultUnits); err != nil {
+		t.Fatal(err)
+	}
+	d.SwitchWater("mass")
+	if g := d.Num["water_g"]; !nearTol(g, 1998.2052, 1e-5) {
+		t.Errorf("2000 mL at 15 °C → %v g, want 1998.2052 g", g)
+	}
+	d.SwitchWater("volume") // and back: the same volume
+	if ml := d.Num["water_mL"]; !nearTol(ml, 2000, convTol) {
+		t.Errorf("back to volume: %v mL, want 2000", ml)
+	}
+	r, err := d.Recipe()
+	if err != nil || !r.WaterML.Set || r.WaterG.Set {
+		t.Errorf("the recipe after switching back: %+v, %v; want water_mL only", r, err)
+	}
+	// Nothing readable to carry: the other box keeps what it had.
+	d.Set("water_mL", "12,5,0", DefaultUnits)
+	d.SwitchWater("mass")
+	if g := d.Num["water_g"]; !nearTol(g, 1998.2052, 1e-5) {
+		t.Errorf("a wrong volume was carried over: water_g %v", g)
+	}
+}

@@ -8,6 +8,7 @@
 //	saltcast.html          the single-file app as served: the page of -page with a web app
 //	                       manifest link, an icon for iOS, the script that registers the
 //	                       service worker (install.js) and the bar that asks before an update;
+//	                       a note in the footer on keeping it on the home screen;
 //	                       its Content-Security-Policy allows the service worker, the manifest
 //	                       and requests to the same origin (connect-src, worker-src,
 //	                       manifest-src 'self'), and nothing else more than the file's
@@ -54,6 +55,7 @@ var manifest []byte
 const installCSS = `.update-bar { display: flex; flex-wrap: wrap; align-items: center; gap: 8px 12px; padding: 8px 12px;
   background: var(--warn-bg); color: var(--warn-ink); border-bottom: 3px solid var(--focus); }
 .update-bar p { margin: 0; flex: 1 1 18em; font-weight: 600; }
+.home-note { max-width: 46em; margin: 0 auto 8px; }
 @media print { .update-bar { display: none; } }`
 
 // headExtra goes just before </head> of the served page.
@@ -62,6 +64,18 @@ const headExtra = `<link rel="manifest" href="/manifest.webmanifest">
 <link rel="apple-touch-icon" href="/icons/apple-touch-icon.png">
 <style id="saltcast-install-css">` + installCSS + `</style>
 `
+
+// homeNote goes at the top of the served page's footer: how to keep Saltcast on the home
+// screen of a tablet or phone, where the service worker then opens it without a network.
+// The file from disk has no such note: a file cannot be installed.
+const homeNote = `<p class="home-note" id="home-note">To keep Saltcast on this tablet or phone for use without a
+network: in Safari tap Share, then <b>Add to Home Screen</b>; in Chrome or Edge open the menu, then
+<b>Install app</b> or <b>Add to Home screen</b>; in Firefox for Android open the menu, then
+<b>Add to Home screen</b>. Open it from that icon: once it has loaded here, it works offline.</p>
+`
+
+// footOpen is the start of the page's footer, where homeNote goes.
+const footOpen = `<footer class="foot no-print">`
 
 // ServedCSP is the page's Content-Security-Policy when the worker serves it: policy.Served
 // over the page's own inline scripts and the install script. fileCSP, the policy the page
@@ -93,7 +107,7 @@ func Served(page []byte) ([]byte, error) {
 	if strings.Contains(strings.ToLower(installJS), "</script") {
 		return nil, errors.New("install.js contains </script and cannot be inlined")
 	}
-	for _, tag := range []string{"</head>", "</body>"} {
+	for _, tag := range []string{"</head>", "</body>", footOpen} {
 		if n := bytes.Count(page, []byte(tag)); n != 1 {
 			return nil, errors.New("the page has " + strconv.Itoa(n) + " " + tag + "; want 1")
 		}
@@ -101,6 +115,7 @@ func Served(page []byte) ([]byte, error) {
 	s := string(page)
 	s = strings.Replace(s, meta, `<meta http-equiv="Content-Security-Policy" content="`+served+`">`, 1)
 	s = strings.Replace(s, "</head>", headExtra+"</head>", 1)
+	s = strings.Replace(s, footOpen, footOpen+homeNote, 1)
 	s = strings.Replace(s, "</body>", `<script id="saltcast-install">`+installJS+"</script>\n</body>", 1)
 	return []byte(s), nil
 }

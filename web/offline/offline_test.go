@@ -64,6 +64,8 @@ func TestServed(t *testing.T) {
 		`<meta http-equiv="Content-Security-Policy" content="` + csp + `">`,
 		`<script id="saltcast-install">`,
 		`sw.register("/sw.js"`,
+		`<b>Add to Home Screen</b>`, // Safari's wording
+		`<b>Install app</b>`,        // Chrome's and Edge's
 	} {
 		if strings.Count(s, want) != 1 {
 			t.Errorf("served page holds %q %d times, want once", want, strings.Count(s, want))
@@ -81,9 +83,10 @@ func TestServed(t *testing.T) {
 	// Nothing else changed: undo the three edits and the file's page is back.
 	back := strings.Replace(s, csp, fileCSP, 1)
 	back = strings.Replace(back, headExtra, "", 1)
+	back = strings.Replace(back, homeNote, "", 1)
 	back = strings.Replace(back, `<script id="saltcast-install">`+installJS+"</script>\n", "", 1)
 	if back != string(page) {
-		t.Error("the served page differs from the file's in more than the CSP, the head links and the install script")
+		t.Error("the served page differs from the file's in more than the CSP, the head links, the home-screen note and the install script")
 	}
 	// The file's page itself registers nothing and names no manifest.
 	for _, never := range []string{"serviceWorker", "manifest.webmanifest", "sw.js"} {
