@@ -1,3 +1,5 @@
+//go:build !(js && wasm)
+
 package main
 
 import (
@@ -84,9 +86,9 @@ func TestPage(t *testing.T) {
 // The runtime's own copy of the page is used when the worker offers one.
 func TestPageWrittenByRuntime(t *testing.T) {
 	called := false
-	h := NewHandler(Options{Page: []byte("<p>x</p>"), WritePage: func(w http.ResponseWriter) bool {
+	h := NewHandler(Options{Page: []byte("<p>x</p>"), WritePage: func(w ResponseWriter) bool {
 		called = true
-		w.WriteHeader(http.StatusOK)
+		w.WriteHeader(statusOK)
 		io.WriteString(w, "from the runtime")
 		return true
 	}})
@@ -180,9 +182,9 @@ func TestCORS(t *testing.T) {
 
 // A panic inside a route is a bug; the answer is still JSON, and a 500.
 func TestPanicIsA500(t *testing.T) {
-	h := NewHandler(Options{}).(*handler)
-	h.routes["/api/v1/boom"] = route{methods: "GET", serve: func(*http.Request) ([]byte, error) { panic("boom") }}
-	res, _ := inProcess(h)(httptest.NewRequest("GET", "/api/v1/boom", nil))
+	h := newHandler(Options{})
+	h.routes["/api/v1/boom"] = route{methods: "GET", serve: func(*Request) ([]byte, error) { panic("boom") }}
+	res, _ := inProcess(httpHandler{h})(httptest.NewRequest("GET", "/api/v1/boom", nil))
 	body, _ := io.ReadAll(res.Body)
 	if res.StatusCode != 500 || res.Header.Get("Content-Type") != "application/json" {
 		t.Errorf("panicking route: %d %q", res.StatusCode, res.Header.Get("Content-Type"))
