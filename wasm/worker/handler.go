@@ -350,6 +350,39 @@ func readBody(r *Request) ([]byte, error) {
 	return body, nil
 }
 
+// splitURL gives the path (unescaped) and the raw query of an absolute URL as the runtime
+// hands it over ("https://host/api/v1/gas?temp_C=20"), as net/url's Parse does for such
+// URLs (TestSplitURLAsNetURL), without linking net/url, and with it fmt and reflect, into
+// the worker. A path with a bad escape is kept as it came (and answered 404).
+func splitURL(raw string) (path, rawQuery string) {
+	raw, _, _ = strings.Cut(raw, "#")
+	raw, rawQuery, _ = strings.Cut(raw, "?")
+	if i := strings.Index(raw, "://"); i >= 0 {
+		raw = raw[i+3:]
+		if j := strings.IndexByte(raw, '/'); j >= 0 {
+			raw = raw[j:]
+		} else {
+			raw = ""
+		}
+	}
+	if !strings.Contains(raw, "%") {
+		return raw, rawQuery
+	}
+	b := make([]byte, 0, len(raw))
+	for i := 0; i < len(raw); i++ {
+		if raw[i] != '%' {
+			b = append(b, raw[i])
+			continue
+		}
+		if i+2 >= len(raw) || unhex(raw[i+1]) < 0 || unhex(raw[i+2]) < 0 {
+			return raw, rawQuery
+		}
+		b = append(b, byte(unhex(raw[i+1])<<4|unhex(raw[i+2])))
+		i += 2
+	}
+	return string(b), rawQuery
+}
+
 // parseQuery decodes a query string strictly: every key once, valid percent-escapes.
 func parseQuery(raw string) (api.Params, error) {
 	p := api.Params{}

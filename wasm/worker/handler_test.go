@@ -306,3 +306,32 @@ func FuzzHandler(f *testing.F) {
 		}
 	})
 }
+
+// splitURL reads the URLs the runtime hands over as Go's net/url does (the reference).
+func TestSplitURLAsNetURL(t *testing.T) {
+	for _, raw := range []string{
+		"http://saltcast.test/",
+		"https://saltcast.example/api/v1/plan",
+		"http://127.0.0.1:8787/api/v1/solubility?solute=KNO3&temp_C=20%2C5",
+		"http://h/api/v1/gas/table?temp_to_C=30#frag",
+		"http://h/api%2Fv1/plan?a=%zz",
+		"http://h/api/v1/caf%C3%A9?x=1?y=2",
+		"http://h/a+b/%20c",
+		"http://h",
+		"http://h?q=1",
+		"http://user@h:1/p",
+	} {
+		u, err := url.Parse(raw)
+		if err != nil {
+			t.Fatalf("%s: %v", raw, err)
+		}
+		path, query := splitURL(raw)
+		if path != u.Path || query != u.RawQuery {
+			t.Errorf("splitURL(%q) = %q, %q; net/url: %q, %q", raw, path, query, u.Path, u.RawQuery)
+		}
+	}
+	// A bad escape in the path, which net/url refuses, is kept as it came.
+	if path, _ := splitURL("http://h/api/%zz"); path != "/api/%zz" {
+		t.Errorf("bad escape: path %q", path)
+	}
+}

@@ -6,7 +6,6 @@ import (
 	"bytes"
 	"errors"
 	"io"
-	"net/url"
 	"strconv"
 	"syscall/js"
 )
@@ -59,12 +58,7 @@ func main() {
 // serveJS answers one runtime Request object with a runtime Response object.
 func serveJS(h *handler, req js.Value) js.Value {
 	r := &Request{Method: req.Get("method").String(), Header: jsHeaders{req.Get("headers")}}
-	rawURL := req.Get("url").String()
-	if u, err := url.Parse(rawURL); err == nil {
-		r.Path, r.RawQuery = u.Path, u.RawQuery
-	} else {
-		r.Path = rawURL // answered 404, naming it
-	}
+	r.Path, r.RawQuery = splitURL(req.Get("url").String())
 	body := req.Get("body") // a ReadableStream, or null
 	hasBody := !body.IsNull() && !body.IsUndefined()
 	if n, err := strconv.ParseInt(r.Header.Get("Content-Length"), 10, 64); err == nil {
