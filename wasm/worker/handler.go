@@ -5,6 +5,7 @@ import (
 	"io"
 	"strconv"
 	"strings"
+	"sync"
 	"unicode/utf8"
 
 	"saltcast/core/unit"
@@ -70,6 +71,11 @@ type Options struct {
 	// Page is the single-file app served at GET /. Empty: a page saying the app was not built.
 	Page []byte
 
+	// LoadPage, when set and Page is empty, gives Page on the first request for /: the worker
+	// reads the page from the runtime then, not at start, so an API call's cold start does not
+	// pay for copying and hashing 1 MB it does not serve.
+	LoadPage func() []byte
+
 	// WritePage, when set, writes the body of GET / itself and reports whether it did; the
 	// worker uses it to hand the runtime its own copy of the page instead of streaming Page
 	// through Go. Page is still needed: the Content-Security-Policy hashes its scripts.
@@ -114,7 +120,8 @@ const staticCSP = "default-src 'none'; connect-src 'self'; frame-ancestors 'none
 // handler routes the HTTP API onto web/api. It holds no state between requests.
 type handler struct {
 	opt       Options
-	page      []byte
+	pageOnce  sync.Once
+	page      []byte // the page served at / and its CSP, set by loadPage on first use
 	pageCSP   string
 	routes    map[string]route
 	openapi   []byte
@@ -130,11 +137,7 @@ type route struct {
 
 // newHandler returns the worker's HTTP handler (NewHandler adapts it to net/http on the host).
 func newHandler(opt Options) *handler {
-	h := &handler{opt: opt, page: opt.Page, openapi: openAPI}
-	if len(h.page) == 0 {
-		h.page = []byte(placeholderPage)
-	}
-	h.pageCSP = pageCSP(h.page)
+	h := &handler{opt: opt, openapi: openAPI}
 	h.allowCORS = func(origin string) bool {
 		return opt.AllowOrigin != "" && (opt.AllowOrigin == "*" || origin == opt.AllowOrigin)
 	}
@@ -222,6 +225,22 @@ func (h *handler) Serve(w ResponseWriter, r *Request) {
 	writeJSON(w, statusOK, body)
 }
 
+// loadPage sets the page served at / (Options.Page, else Options.LoadPage's, else a
+// placeholder) and its Content-Security-Policy, once.
+func (h *handler) loadPage() {
+	h.pageOnce.Do(func() {
+		h.page = h.opt.Page
+		if len(h.page) == 0 && h.opt.LoadPage != nil {
+			h.page = h.opt.LoadPage()
+			h.opt.Page = h.page
+		}
+		if len(h.page) == 0 {
+			h.page = []byte(placeholderPage)
+		}
+		h.pageCSP = pageCSP(h.page)
+	})
+}
+
 // servePage answers GET / with the single-file app and the headers that fence it in.
 func (h *handler) servePage(w ResponseWriter, r *Request) {
 	hdr := w.Header()
@@ -231,6 +250,7 @@ func (h *handler) servePage(w ResponseWriter, r *Request) {
 			" is not allowed at /; allowed: GET, HEAD"))
 		return
 	}
+	h.loadPage()
 	hdr.Set("Content-Type", "text/html; charset=utf-8")
 	hdr.Set("Content-Security-Policy", h.pageCSP)
 	hdr.Set("Cache-Control", "no-cache")

@@ -335,3 +335,25 @@ func TestSplitURLAsNetURL(t *testing.T) {
 		t.Errorf("bad escape: path %q", path)
 	}
 }
+
+// LoadPage is read on the first request for the page, once, and never for an API call.
+func TestPageLoadedOnFirstUse(t *testing.T) {
+	loads := 0
+	// The CSP specification's example script and its hash, as in TestInlineScriptHashes.
+	page := "<!doctype html><title>t</title><script>alert('Hello, world.');</script>"
+	do := inProcess(NewHandler(Options{LoadPage: func() []byte { loads++; return []byte(page) }}))
+	res, _ := do(httptest.NewRequest("GET", "/api/v1/compounds", nil))
+	if res.StatusCode != 200 || loads != 0 {
+		t.Fatalf("API call: %d, page loaded %d times", res.StatusCode, loads)
+	}
+	for range 2 {
+		res, _ = do(httptest.NewRequest("GET", "/", nil))
+		got, _ := io.ReadAll(res.Body)
+		if string(got) != page || !strings.Contains(res.Header.Get("Content-Security-Policy"), "'sha256-qznLcsROx4GACP2dm0UCKCzCG+HiZ1guq6ZZDob/Tng='") {
+			t.Errorf("GET /: body %q, CSP %q", got, res.Header.Get("Content-Security-Policy"))
+		}
+	}
+	if loads != 1 {
+		t.Errorf("page loaded %d times, want 1", loads)
+	}
+}

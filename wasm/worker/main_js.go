@@ -22,7 +22,7 @@ func main() {
 	page := runtime.Get("page") // the text module saltcast.html, a JS string
 	opt := Options{AllowOrigin: stringOf(runtime.Get("env").Get("SALTCAST_ALLOW_ORIGIN"))}
 	if page.Type() == js.TypeString {
-		opt.Page = []byte(page.String())
+		opt.LoadPage = func() []byte { return []byte(page.String()) }
 		opt.WritePage = func(w ResponseWriter) bool {
 			jw, ok := w.(*jsWriter)
 			if !ok {
