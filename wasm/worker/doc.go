@@ -2,8 +2,10 @@
 // web/api, so the worker, the CLI and the browser give byte-identical answers.
 //
 // Built with GOOS=js GOARCH=wasm by wasm/worker/build.sh, it is started by glue/worker.mjs,
-// which keeps one Go program per isolate. Built for the host it serves the same handler with
-// net/http for debugging (`go run ./wasm/worker`, 127.0.0.1:8788).
+// which keeps one Go program per isolate; main_js.go turns the runtime's Request objects into
+// the handler's own small Request and its answer into a Response, so the js/wasm build links
+// neither net/http nor net/url. Built for the host it serves the same handler with net/http
+// for debugging (`go run ./wasm/worker`, 127.0.0.1:8788).
 //
 // Routes (described for clients in openapi.json, served at /api/v1/openapi.json):
 //

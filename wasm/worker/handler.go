@@ -3,9 +3,9 @@ package main
 import (
 	"errors"
 	"io"
-	"net/http"
 	"strconv"
 	"strings"
+	"sync"
 	"unicode/utf8"
 
 	"saltcast/core/unit"
@@ -17,15 +17,69 @@ import (
 // 64 KiB holds any recipe many times over and is the limit core/wire applies to JSON too.
 const MaxBodyBytes = 64 << 10
 
+// Request is what the handler reads of an HTTP request: main_js.go fills it from the
+// runtime's Request object, NewHandler (handler_http.go, host only) from net/http's. The
+// worker's Go program does not link net/http: through github.com/syumai/workers it made
+// app.wasm 0.8 MB larger gzipped (wasm/worker/README.md).
+type Request struct {
+	Method        string
+	Path          string // unescaped, as net/url gives it
+	RawQuery      string
+	ContentLength int64 // -1 when unknown
+	Header        interface{ Get(name string) string }
+	Body          io.Reader // nil: the request has no body
+}
+
+// ResponseWriter takes the answer, in net/http's shape.
+type ResponseWriter interface {
+	Header() Header
+	WriteHeader(status int)
+	Write(p []byte) (int, error)
+}
+
+// Header holds response headers by name; the handler writes names in canonical case.
+type Header map[string][]string
+
+// Set replaces the values of name with value.
+func (h Header) Set(name, value string) { h[name] = []string{value} }
+
+// Add appends value to the values of name.
+func (h Header) Add(name, value string) { h[name] = append(h[name], value) }
+
+// Get returns the first value of name, or "".
+func (h Header) Get(name string) string {
+	if v := h[name]; len(v) > 0 {
+		return v[0]
+	}
+	return ""
+}
+
+// The HTTP statuses the handler answers with.
+const (
+	statusOK                    = 200
+	statusNoContent             = 204
+	statusBadRequest            = 400
+	statusNotFound              = 404
+	statusMethodNotAllowed      = 405
+	statusRequestEntityTooLarge = 413
+	statusUnsupportedMediaType  = 415
+	statusInternalServerError   = 500
+)
+
 // Options say what a handler serves besides the API.
 type Options struct {
 	// Page is the single-file app served at GET /. Empty: a page saying the app was not built.
 	Page []byte
 
+	// LoadPage, when set and Page is empty, gives Page on the first request for /: the worker
+	// reads the page from the runtime then, not at start, so an API call's cold start does not
+	// pay for copying and hashing 1 MB it does not serve.
+	LoadPage func() []byte
+
 	// WritePage, when set, writes the body of GET / itself and reports whether it did; the
 	// worker uses it to hand the runtime its own copy of the page instead of streaming Page
 	// through Go. Page is still needed: the Content-Security-Policy hashes its scripts.
-	WritePage func(w http.ResponseWriter) bool
+	WritePage func(w ResponseWriter) bool
 
 	// Files are served as they are, by path ("/sw.js"): the service worker, web app
 	// manifest and icons that let a tablet install the app from this address and run it
@@ -66,7 +120,8 @@ const staticCSP = "default-src 'none'; connect-src 'self'; frame-ancestors 'none
 // handler routes the HTTP API onto web/api. It holds no state between requests.
 type handler struct {
 	opt       Options
-	page      []byte
+	pageOnce  sync.Once
+	page      []byte // the page served at / and its CSP, set by loadPage on first use
 	pageCSP   string
 	routes    map[string]route
 	openapi   []byte
@@ -76,17 +131,13 @@ type handler struct {
 // route is one path of the API: the methods it answers and what answers them.
 type route struct {
 	methods     string // for the Allow header, e.g. "GET, HEAD"
-	serve       func(r *http.Request) ([]byte, error)
+	serve       func(r *Request) ([]byte, error)
 	contentType string // of a successful answer; "" is application/json
 }
 
-// NewHandler returns the worker's HTTP handler.
-func NewHandler(opt Options) http.Handler {
-	h := &handler{opt: opt, page: opt.Page, openapi: openAPI}
-	if len(h.page) == 0 {
-		h.page = []byte(placeholderPage)
-	}
-	h.pageCSP = pageCSP(h.page)
+// newHandler returns the worker's HTTP handler (NewHandler adapts it to net/http on the host).
+func newHandler(opt Options) *handler {
+	h := &handler{opt: opt, openapi: openAPI}
 	h.allowCORS = func(origin string) bool {
 		return opt.AllowOrigin != "" && (opt.AllowOrigin == "*" || origin == opt.AllowOrigin)
 	}
@@ -97,21 +148,19 @@ func NewHandler(opt Options) http.Handler {
 		"/api/v1/gas":          {methods: "GET, HEAD, POST", serve: h.gas},
 		"/api/v1/gas/outgas":   {methods: "GET, HEAD", serve: h.query(api.Outgas)},
 		"/api/v1/gas/table":    {methods: "GET, HEAD", serve: h.query(api.GasTable)},
-		"/api/v1/compounds":    {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return api.Compounds(), nil }},
-		"/api/v1/openapi.json": {methods: "GET, HEAD", serve: func(*http.Request) ([]byte, error) { return h.openapi, nil }},
+		"/api/v1/compounds":    {methods: "GET, HEAD", serve: func(*Request) ([]byte, error) { return api.Compounds(), nil }},
+		"/api/v1/openapi.json": {methods: "GET, HEAD", serve: func(*Request) ([]byte, error) { return h.openapi, nil }},
 	}
 	return h
 }
 
-func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
+// Serve answers one request.
+func (h *handler) Serve(w ResponseWriter, r *Request) {
 	defer func() {
 		// A panic here is a bug, never the user's fault; the tests assert none happens.
 		if v := recover(); v != nil {
-			if v == http.ErrAbortHandler {
-				panic(v)
-			}
-			println("saltcast worker: panic serving", r.Method, r.URL.Path+":", panicText(v))
-			writeJSON(w, http.StatusInternalServerError,
+			println("saltcast worker: panic serving", r.Method, r.Path+":", panicText(v))
+			writeJSON(w, statusInternalServerError,
 				api.ErrorJSON(errors.New("internal error in the Saltcast worker; the request was not the cause")))
 		}
 	}()
@@ -119,17 +168,17 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 	hdr.Set("X-Content-Type-Options", "nosniff")
 	hdr.Set("Referrer-Policy", "no-referrer")
 
-	if r.URL.Path == "/" {
+	if r.Path == "/" {
 		h.servePage(w, r)
 		return
 	}
-	if f, ok := h.opt.Files[r.URL.Path]; ok {
+	if f, ok := h.opt.Files[r.Path]; ok {
 		h.serveFile(w, r, f)
 		return
 	}
-	rt, ok := h.routes[r.URL.Path]
+	rt, ok := h.routes[r.Path]
 	if !ok {
-		writeError(w, http.StatusNotFound, errors.New("no such address: "+r.URL.Path+
+		writeError(w, statusNotFound, errors.New("no such address: "+r.Path+
 			"; the API is described at /api/v1/openapi.json"))
 		return
 	}
@@ -143,7 +192,7 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 			hdr.Add("Vary", "Origin")
 		}
 	}
-	if r.Method == http.MethodOptions {
+	if r.Method == "OPTIONS" {
 		// A CORS preflight, or a client asking what the address allows.
 		hdr.Set("Allow", rt.methods+", OPTIONS")
 		if cors {
@@ -151,13 +200,13 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 			hdr.Set("Access-Control-Allow-Headers", "Content-Type")
 			hdr.Set("Access-Control-Max-Age", "86400")
 		}
-		w.WriteHeader(http.StatusNoContent)
+		w.WriteHeader(statusNoContent)
 		return
 	}
 	if !allows(rt.methods, r.Method) {
 		hdr.Set("Allow", rt.methods+", OPTIONS")
-		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
-			" is not allowed at "+r.URL.Path+"; allowed: "+rt.methods))
+		writeError(w, statusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+			" is not allowed at "+r.Path+"; allowed: "+rt.methods))
 		return
 	}
 	body, err := rt.serve(r)
@@ -169,61 +218,78 @@ func (h *handler) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 	if rt.contentType != "" {
 		hdr.Set("Content-Type", rt.contentType)
 		hdr.Set("Content-Length", strconv.Itoa(len(body)))
-		w.WriteHeader(http.StatusOK)
+		w.WriteHeader(statusOK)
 		w.Write(body)
 		return
 	}
-	writeJSON(w, http.StatusOK, body)
+	writeJSON(w, statusOK, body)
+}
+
+// loadPage sets the page served at / (Options.Page, else Options.LoadPage's, else a
+// placeholder) and its Content-Security-Policy, once.
+func (h *handler) loadPage() {
+	h.pageOnce.Do(func() {
+		h.page = h.opt.Page
+		if len(h.page) == 0 && h.opt.LoadPage != nil {
+			h.page = h.opt.LoadPage()
+			h.opt.Page = h.page
+		}
+		if len(h.page) == 0 {
+			h.page = []byte(placeholderPage)
+		}
+		h.pageCSP = pageCSP(h.page)
+	})
 }
 
 // servePage answers GET / with the single-file app and the headers that fence it in.
-func (h *handler) servePage(w http.ResponseWriter, r *http.Request) {
+func (h *handler) servePage(w ResponseWriter, r *Request) {
 	hdr := w.Header()
-	if r.Method != http.MethodGet && r.Method != http.MethodHead {
+	if r.Method != "GET" && r.Method != "HEAD" {
 		hdr.Set("Allow", "GET, HEAD")
-		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+		writeError(w, statusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
 			" is not allowed at /; allowed: GET, HEAD"))
 		return
 	}
+	h.loadPage()
 	hdr.Set("Content-Type", "text/html; charset=utf-8")
 	hdr.Set("Content-Security-Policy", h.pageCSP)
 	hdr.Set("Cache-Control", "no-cache")
-	if r.Method == http.MethodHead {
+	if r.Method == "HEAD" {
 		hdr.Set("Content-Length", strconv.Itoa(len(h.page)))
-		w.WriteHeader(http.StatusOK)
+		w.WriteHeader(statusOK)
 		return
 	}
 	if h.opt.WritePage != nil && len(h.opt.Page) > 0 && h.opt.WritePage(w) {
 		return
 	}
 	hdr.Set("Content-Length", strconv.Itoa(len(h.page)))
-	w.WriteHeader(http.StatusOK)
+	w.WriteHeader(statusOK)
 	w.Write(h.page)
 }
 
 // serveFile answers GET of a file of the installable copy. no-cache: a browser may keep it
 // but asks each time whether it changed, so a new version is seen at once (the service
 // worker keeps the app for offline use, not the HTTP cache).
-func (h *handler) serveFile(w http.ResponseWriter, r *http.Request, f Static) {
+func (h *handler) serveFile(w ResponseWriter, r *Request, f Static) {
 	hdr := w.Header()
-	if r.Method != http.MethodGet && r.Method != http.MethodHead {
+	if r.Method != "GET" && r.Method != "HEAD" {
 		hdr.Set("Allow", "GET, HEAD")
-		writeError(w, http.StatusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
-			" is not allowed at "+r.URL.Path+"; allowed: GET, HEAD"))
+		writeError(w, statusMethodNotAllowed, errors.New("method "+strconv.Quote(r.Method)+
+			" is not allowed at "+r.Path+"; allowed: GET, HEAD"))
 		return
 	}
 	hdr.Set("Content-Type", f.ContentType)
 	hdr.Set("Content-Length", strconv.Itoa(len(f.Body)))
 	hdr.Set("Cache-Control", "no-cache")
 	hdr.Set("Content-Security-Policy", staticCSP)
-	w.WriteHeader(http.StatusOK)
-	if r.Method != http.MethodHead {
+	w.WriteHeader(statusOK)
+	if r.Method != "HEAD" {
 		w.Write(f.Body)
 	}
 }
 
 // plan answers POST /api/v1/plan: a recipe in, the plan out.
-func (h *handler) plan(r *http.Request) ([]byte, error) {
+func (h *handler) plan(r *Request) ([]byte, error) {
 	body, err := readBody(r)
 	if err != nil {
 		return nil, err
@@ -232,7 +298,7 @@ func (h *handler) plan(r *http.Request) ([]byte, error) {
 }
 
 // prep answers POST /api/v1/prep: a preparation recipe in, the worked preparation out.
-func (h *handler) prep(r *http.Request) ([]byte, error) {
+func (h *handler) prep(r *Request) ([]byte, error) {
 	body, err := readBody(r)
 	if err != nil {
 		return nil, err
@@ -241,9 +307,9 @@ func (h *handler) prep(r *http.Request) ([]byte, error) {
 }
 
 // query adapts a service call that takes the query string's parameters.
-func (h *handler) query(call func(api.Params) ([]byte, error)) func(*http.Request) ([]byte, error) {
-	return func(r *http.Request) ([]byte, error) {
-		p, err := parseQuery(r.URL.RawQuery)
+func (h *handler) query(call func(api.Params) ([]byte, error)) func(*Request) ([]byte, error) {
+	return func(r *Request) ([]byte, error) {
+		p, err := parseQuery(r.RawQuery)
 		if err != nil {
 			return nil, err
 		}
@@ -252,8 +318,8 @@ func (h *handler) query(call func(api.Params) ([]byte, error)) func(*http.Reques
 }
 
 // gas answers GET /api/v1/gas?… and POST /api/v1/gas with the same keys in a JSON object.
-func (h *handler) gas(r *http.Request) ([]byte, error) {
-	if r.Method != http.MethodPost {
+func (h *handler) gas(r *Request) ([]byte, error) {
+	if r.Method != "POST" {
 		return h.query(api.Gas)(r)
 	}
 	body, err := readBody(r)
@@ -280,7 +346,7 @@ var errBodyTooLarge = errors.New("the request body is larger than " + strconv.It
 var errMediaType = errors.New("the request body must be JSON: send Content-Type: application/json")
 
 // readBody reads a JSON request body of at most MaxBodyBytes.
-func readBody(r *http.Request) ([]byte, error) {
+func readBody(r *Request) ([]byte, error) {
 	if ct := r.Header.Get("Content-Type"); ct != "" {
 		mt, _, _ := strings.Cut(ct, ";")
 		if !strings.EqualFold(strings.TrimSpace(mt), "application/json") {
@@ -302,6 +368,39 @@ func readBody(r *http.Request) ([]byte, error) {
 		return nil, errBodyTooLarge
 	}
 	return body, nil
+}
+
+// splitURL gives the path (unescaped) and the raw query of an absolute URL as the runtime
+// hands it over ("https://host/api/v1/gas?temp_C=20"), as net/url's Parse does for such
+// URLs (TestSplitURLAsNetURL), without linking net/url, and with it fmt and reflect, into
+// the worker. A path with a bad escape is kept as it came (and answered 404).
+func splitURL(raw string) (path, rawQuery string) {
+	raw, _, _ = strings.Cut(raw, "#")
+	raw, rawQuery, _ = strings.Cut(raw, "?")
+	if i := strings.Index(raw, "://"); i >= 0 {
+		raw = raw[i+3:]
+		if j := strings.IndexByte(raw, '/'); j >= 0 {
+			raw = raw[j:]
+		} else {
+			raw = ""
+		}
+	}
+	if !strings.Contains(raw, "%") {
+		return raw, rawQuery
+	}
+	b := make([]byte, 0, len(raw))
+	for i := 0; i < len(raw); i++ {
+		if raw[i] != '%' {
+			b = append(b, raw[i])
+			continue
+		}
+		if i+2 >= len(raw) || unhex(raw[i+1]) < 0 || unhex(raw[i+2]) < 0 {
+			return raw, rawQuery
+		}
+		b = append(b, byte(unhex(raw[i+1])<<4|unhex(raw[i+2])))
+		i += 2
+	}
+	return string(b), rawQuery
 }
 
 // parseQuery decodes a query string strictly: every key once, valid percent-escapes.
@@ -404,25 +503,25 @@ func statusOf(err error) int {
 	var syn *wire.SyntaxError
 	switch {
 	case errors.Is(err, errBodyTooLarge):
-		return http.StatusRequestEntityTooLarge
+		return statusRequestEntityTooLarge
 	case errors.Is(err, errMediaType):
-		return http.StatusUnsupportedMediaType
+		return statusUnsupportedMediaType
 	case errors.As(err, &syn), api.IsInputError(err):
-		return http.StatusBadRequest
+		return statusBadRequest
 	}
 	var fe *unit.FieldError
 	if errors.As(err, &fe) {
-		return http.StatusBadRequest
+		return statusBadRequest
 	}
-	return http.StatusInternalServerError
+	return statusInternalServerError
 }
 
-func writeError(w http.ResponseWriter, status int, err error) {
+func writeError(w ResponseWriter, status int, err error) {
 	w.Header().Set("Cache-Control", "no-store")
 	writeJSON(w, status, api.ErrorJSON(err))
 }
 
-func writeJSON(w http.ResponseWriter, status int, body []byte) {
+func writeJSON(w ResponseWriter, status int, body []byte) {
 	hdr := w.Header()
 	hdr.Set("Content-Type", "application/json")
 	hdr.Set("Content-Length", strconv.Itoa(len(body)))

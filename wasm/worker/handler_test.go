@@ -1,3 +1,5 @@
+//go:build !(js && wasm)
+
 package main
 
 import (
@@ -84,9 +86,9 @@ func TestPage(t *testing.T) {
 // The runtime's own copy of the page is used when the worker offers one.
 func TestPageWrittenByRuntime(t *testing.T) {
 	called := false
-	h := NewHandler(Options{Page: []byte("<p>x</p>"), WritePage: func(w http.ResponseWriter) bool {
+	h := NewHandler(Options{Page: []byte("<p>x</p>"), WritePage: func(w ResponseWriter) bool {
 		called = true
-		w.WriteHeader(http.StatusOK)
+		w.WriteHeader(statusOK)
 		io.WriteString(w, "from the runtime")
 		return true
 	}})
@@ -180,9 +182,9 @@ func TestCORS(t *testing.T) {
 
 // A panic inside a route is a bug; the answer is still JSON, and a 500.
 func TestPanicIsA500(t *testing.T) {
-	h := NewHandler(Options{}).(*handler)
-	h.routes["/api/v1/boom"] = route{methods: "GET", serve: func(*http.Request) ([]byte, error) { panic("boom") }}
-	res, _ := inProcess(h)(httptest.NewRequest("GET", "/api/v1/boom", nil))
+	h := newHandler(Options{})
+	h.routes["/api/v1/boom"] = route{methods: "GET", serve: func(*Request) ([]byte, error) { panic("boom") }}
+	res, _ := inProcess(httpHandler{h})(httptest.NewRequest("GET", "/api/v1/boom", nil))
 	body, _ := io.ReadAll(res.Body)
 	if res.StatusCode != 500 || res.Header.Get("Content-Type") != "application/json" {
 		t.Errorf("panicking route: %d %q", res.StatusCode, res.Header.Get("Content-Type"))
@@ -303,4 +305,55 @@ func FuzzHandler(f *testing.F) {
 			t.Fatalf("%s %s: answer is not JSON: %.200q", method, target, rec.Body.Bytes())
 		}
 	})
+}
+
+// splitURL reads the URLs the runtime hands over as Go's net/url does (the reference).
+func TestSplitURLAsNetURL(t *testing.T) {
+	for _, raw := range []string{
+		"http://saltcast.test/",
+		"https://saltcast.example/api/v1/plan",
+		"http://127.0.0.1:8787/api/v1/solubility?solute=KNO3&temp_C=20%2C5",
+		"http://h/api/v1/gas/table?temp_to_C=30#frag",
+		"http://h/api%2Fv1/plan?a=%zz",
+		"http://h/api/v1/caf%C3%A9?x=1?y=2",
+		"http://h/a+b/%20c",
+		"http://h",
+		"http://h?q=1",
+		"http://user@h:1/p",
+	} {
+		u, err := url.Parse(raw)
+		if err != nil {
+			t.Fatalf("%s: %v", raw, err)
+		}
+		path, query := splitURL(raw)
+		if path != u.Path || query != u.RawQuery {
+			t.Errorf("splitURL(%q) = %q, %q; net/url: %q, %q", raw, path, query, u.Path, u.RawQuery)
+		}
+	}
+	// A bad escape in the path, which net/url refuses, is kept as it came.
+	if path, _ := splitURL("http://h/api/%zz"); path != "/api/%zz" {
+		t.Errorf("bad escape: path %q", path)
+	}
+}
+
+// LoadPage is read on the first request for the page, once, and never for an API call.
+func TestPageLoadedOnFirstUse(t *testing.T) {
+	loads := 0
+	// The CSP specification's example script and its hash, as in TestInlineScriptHashes.
+	page := "<!doctype html><title>t</title><script>alert('Hello, world.');</script>"
+	do := inProcess(NewHandler(Options{LoadPage: func() []byte { loads++; return []byte(page) }}))
+	res, _ := do(httptest.NewRequest("GET", "/api/v1/compounds", nil))
+	if res.StatusCode != 200 || loads != 0 {
+		t.Fatalf("API call: %d, page loaded %d times", res.StatusCode, loads)
+	}
+	for range 2 {
+		res, _ = do(httptest.NewRequest("GET", "/", nil))
+		got, _ := io.ReadAll(res.Body)
+		if string(got) != page || !strings.Contains(res.Header.Get("Content-Security-Policy"), "'sha256-qznLcsROx4GACP2dm0UCKCzCG+HiZ1guq6ZZDob/Tng='") {
+			t.Errorf("GET /: body %q, CSP %q", got, res.Header.Get("Content-Security-Policy"))
+		}
+	}
+	if loads != 1 {
+		t.Errorf("page loaded %d times, want 1", loads)
+	}
 }

@@ -6,11 +6,15 @@ import (
 	"bytes"
 	"errors"
 	"io"
-	"net/http"
+	"strconv"
 	"syscall/js"
-
-	"github.com/syumai/workers"
 )
+
+// ready tells glue/worker.mjs that handleRequest is set (the import it provides as
+// workers.ready, the name github.com/syumai/workers gives it).
+//
+//go:wasmimport workers ready
+func ready()
 
 func main() {
 	// glue/worker.mjs passes {env, ctx, binding, page, files}; see the limits noted there.
@@ -18,23 +22,106 @@ func main() {
 	page := runtime.Get("page") // the text module saltcast.html, a JS string
 	opt := Options{AllowOrigin: stringOf(runtime.Get("env").Get("SALTCAST_ALLOW_ORIGIN"))}
 	if page.Type() == js.TypeString {
-		opt.Page = []byte(page.String())
-		opt.WritePage = func(w http.ResponseWriter) bool {
-			raw, ok := w.(rawBodyWriter)
+		opt.LoadPage = func() []byte { return []byte(page.String()) }
+		opt.WritePage = func(w ResponseWriter) bool {
+			jw, ok := w.(*jsWriter)
 			if !ok {
 				return false
 			}
-			w.WriteHeader(http.StatusOK)
-			raw.WriteRawJSBody(page)
+			jw.WriteHeader(statusOK)
+			jw.raw, jw.rawSet = page, true
 			return true
 		}
 	}
 	opt.Files = staticFiles(runtime.Get("files"))
-	workers.ServeNonBlock(leakFree{NewHandler(opt)})
-	workers.Ready()
-	// Stay alive for the isolate's later requests instead of returning after the first one
-	// (workers.Serve's behaviour, made for its one-program-per-request glue).
+	h := newHandler(opt)
+	promise := js.Global().Get("Promise")
+	// handleRequest(request) → Promise<Response>, called by glue/worker.mjs for every request.
+	// It is set once and lives as long as the program.
+	runtime.Get("binding").Set("handleRequest", js.FuncOf(func(_ js.Value, args []js.Value) any {
+		req := args[0]
+		var executor js.Func
+		executor = js.FuncOf(func(_ js.Value, settle []js.Value) any {
+			executor.Release()
+			resolve := settle[0]
+			// A goroutine, since reading the body waits for a promise of the event loop.
+			go func() { resolve.Invoke(serveJS(h, req)) }()
+			return nil
+		})
+		return promise.New(executor)
+	}))
+	ready()
+	// Stay alive for the isolate's later requests.
 	select {}
+}
+
+// serveJS answers one runtime Request object with a runtime Response object.
+func serveJS(h *handler, req js.Value) js.Value {
+	r := &Request{Method: req.Get("method").String(), Header: jsHeaders{req.Get("headers")}}
+	r.Path, r.RawQuery = splitURL(req.Get("url").String())
+	body := req.Get("body") // a ReadableStream, or null
+	hasBody := !body.IsNull() && !body.IsUndefined()
+	if n, err := strconv.ParseInt(r.Header.Get("Content-Length"), 10, 64); err == nil {
+		r.ContentLength = n
+	} else if hasBody {
+		r.ContentLength = -1
+	}
+	if hasBody {
+		r.Body = &jsBody{stream: body}
+	}
+	w := &jsWriter{hdr: Header{}, status: statusOK}
+	h.Serve(w, r)
+	return w.response()
+}
+
+// jsHeaders reads request headers from the runtime's Headers object.
+type jsHeaders struct{ h js.Value }
+
+func (j jsHeaders) Get(name string) string { return stringOf(j.h.Call("get", name)) }
+
+// jsWriter collects the answer and makes one runtime Response of it: the body crosses from
+// Go to JS whole, as one Uint8Array (or as the runtime's own string, for the page).
+type jsWriter struct {
+	hdr         Header
+	buf         bytes.Buffer
+	status      int
+	wroteHeader bool
+	raw         js.Value
+	rawSet      bool
+}
+
+func (w *jsWriter) Header() Header { return w.hdr }
+
+func (w *jsWriter) WriteHeader(status int) {
+	if !w.wroteHeader {
+		w.status, w.wroteHeader = status, true
+	}
+}
+
+func (w *jsWriter) Write(p []byte) (int, error) {
+	w.WriteHeader(statusOK)
+	return w.buf.Write(p)
+}
+
+func (w *jsWriter) response() js.Value {
+	headers := js.Global().Get("Headers").New()
+	for name, values := range w.hdr {
+		for _, v := range values {
+			headers.Call("append", name, v)
+		}
+	}
+	init := js.Global().Get("Object").New()
+	init.Set("status", w.status)
+	init.Set("headers", headers)
+	body := js.Null()
+	switch {
+	case w.rawSet:
+		body = w.raw
+	case w.buf.Len() > 0:
+		body = js.Global().Get("Uint8Array").New(w.buf.Len())
+		js.CopyBytesToJS(body, w.buf.Bytes())
+	}
+	return js.Global().Get("Response").New(body, init)
 }
 
 // staticFiles reads the files of the installable copy that glue/worker.mjs passes, by path:
@@ -63,79 +150,6 @@ func staticFiles(files js.Value) map[string]Static {
 		out[path] = Static{Body: body, ContentType: ct}
 	}
 	return out
-}
-
-// rawBodyWriter is the response writer of github.com/syumai/workers, which can answer with a
-// JS value as the body; rawBodyGetter is its request body, which can give the JS stream.
-// (Its own interfaces are internal to that module.)
-type (
-	rawBodyWriter interface{ WriteRawJSBody(body js.Value) }
-	rawBodyGetter interface{ GetRawJSBody() js.Value }
-)
-
-// leakFree moves request and response bodies between JS and Go in one piece each.
-//
-// github.com/syumai/workers v0.33.0 streams bodies: a response through a ReadableStream whose
-// pull and cancel callbacks (js.FuncOf, with a 16 KiB buffer) are never released, and a
-// request chunk by chunk, leaking one callback per chunk. Its own glue starts a Go program
-// per request, so that never shows; with one Go program per isolate the Go memory grew from
-// 14 to 35.5 MiB and Go's table of JS references from 20 585 to 112 913 over 18 000 requests
-// (measured 2026-12-01). Moving whole bodies, both stay flat (11.25 MiB, about 2 100).
-// Saltcast's bodies are small (≤ 64 KiB in, tens of KiB out), so this costs nothing.
-type leakFree struct{ h http.Handler }
-
-func (l leakFree) ServeHTTP(w http.ResponseWriter, r *http.Request) {
-	raw, ok := w.(rawBodyWriter)
-	if !ok { // not syumai's writer: nothing to work around
-		l.h.ServeHTTP(w, r)
-		return
-	}
-	if g, ok := r.Body.(rawBodyGetter); ok {
-		r.Body = &jsBody{stream: g.GetRawJSBody()}
-	}
-	bw := &bufferedWriter{ResponseWriter: w, raw: raw, status: http.StatusOK}
-	defer bw.finish()
-	l.h.ServeHTTP(bw, r)
-}
-
-// bufferedWriter collects the response and hands it to JS as one Uint8Array.
-type bufferedWriter struct {
-	http.ResponseWriter
-	raw         rawBodyWriter
-	buf         bytes.Buffer
-	status      int
-	wroteHeader bool
-	rawSet      bool
-}
-
-func (w *bufferedWriter) WriteHeader(status int) {
-	if !w.wroteHeader {
-		w.status, w.wroteHeader = status, true
-	}
-}
-
-func (w *bufferedWriter) Write(p []byte) (int, error) {
-	w.WriteHeader(http.StatusOK)
-	return w.buf.Write(p)
-}
-
-func (w *bufferedWriter) WriteRawJSBody(body js.Value) {
-	w.rawSet = true
-	w.raw.WriteRawJSBody(body)
-}
-
-func (w *bufferedWriter) finish() {
-	w.ResponseWriter.WriteHeader(w.status)
-	if w.rawSet {
-		return
-	}
-	if w.buf.Len() == 0 {
-		w.raw.WriteRawJSBody(js.Null())
-		return
-	}
-	a := js.Global().Get("Uint8Array").New(w.buf.Len())
-	js.CopyBytesToJS(a, w.buf.Bytes())
-	w.raw.WriteRawJSBody(a)
 }
 
 // jsBody reads a request body stream in one call to glue/worker.mjs's saltcastReadBody,

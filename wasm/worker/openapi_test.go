@@ -1,3 +1,5 @@
+//go:build !(js && wasm)
+
 package main
 
 import (
@@ -45,7 +47,7 @@ func readOpenAPI(t *testing.T) openAPIDoc {
 // Every route the handler answers is described, with the same methods, and nothing else is.
 func TestOpenAPIDescribesEveryRoute(t *testing.T) {
 	doc := readOpenAPI(t)
-	h := NewHandler(Options{}).(*handler)
+	h := newHandler(Options{})
 	routes := map[string]string{"/": "GET, HEAD"}
 	for p, rt := range h.routes {
 		routes[p] = rt.methods

@@ -30,15 +30,6 @@ const files = {
   "/icons/apple-touch-icon.png": iconApple,
 };
 
-// tryCatch is called by github.com/syumai/workers to catch JS exceptions from Go.
-globalThis.tryCatch = (fn) => {
-  try {
-    return { result: fn() };
-  } catch (e) {
-    return { error: e };
-  }
-};
-
 // saltcastReadBody reads a request body stream for the Go program (main_js.go) in one promise
 // instead of one per chunk. It keeps the first `keep` bytes, reads and drops the rest up to
 // `drain` bytes in all (so a client still sending gets its 413 rather than a closed
