@@ -62,6 +62,7 @@ func withDefaults(fs []flagSpec, d map[string]string) []flagSpec {
 	}
 	return fs
 }
+
 var prepFlags = tableFlags(recipe.PrepFields.Specs())
 
 var commands = []*command{
