@@ -5,8 +5,8 @@ import (
 	"strings"
 
 	"saltcast/core/recipe"
-	"saltcast/core/water"
 	"saltcast/core/unit"
+	"saltcast/core/water"
 	"saltcast/core/wire"
 )
 
