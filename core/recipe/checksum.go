@@ -67,12 +67,12 @@ func (r Recipe) Checksum() string {
 	if err != nil { // a number that is not finite: such a recipe is refused on reading
 		return "--------"
 	}
-	return hex32(crc32(b))
+	return hex32(CRC32(b))
 }
 
 // crcTable is the table of the reflected CRC-32 of IEEE 802.3 (polynomial 0xEDB88320),
 // built at start: a dozen lines instead of hash/crc32, which costs 2.8 KB of gzip in the page
-// (measured for the carried-recipes block, which has its own copy in web/carry).
+// (measured for the carried-recipes block in web/carry, which uses this one too).
 var crcTable = func() (t [256]uint32) {
 	for i := range t {
 		c := uint32(i)
@@ -88,8 +88,9 @@ var crcTable = func() (t [256]uint32) {
 	return t
 }()
 
-// crc32 is CRC-32/ISO-HDLC: check value 0xCBF43926 for "123456789".
-func crc32(b []byte) uint32 {
+// CRC32 is CRC-32/ISO-HDLC (the CRC of zip, PNG and Ethernet): check value 0xCBF43926 for
+// "123456789". The recipe check and the carried-recipes block (web/carry) both use it.
+func CRC32(b []byte) uint32 {
 	c := ^uint32(0)
 	for _, x := range b {
 		c = crcTable[byte(c)^x] ^ c>>8

@@ -6,7 +6,7 @@ import "testing"
 // 0xCBF43926 (G. Cook, "Catalogue of parametrised CRC algorithms", entry CRC-32/ISO-HDLC;
 // the same CRC as ISO/IEC 3309 HDLC, zip and PNG).
 func TestCRC32CheckValue(t *testing.T) {
-	if got := crc32([]byte("123456789")); got != 0xCBF43926 {
+	if got := CRC32([]byte("123456789")); got != 0xCBF43926 {
 		t.Errorf("crc32(123456789) = %08x, want cbf43926", got)
 	}
 	if got := hex32(0xCBF43926); got != "cbf43926" {

@@ -532,32 +532,8 @@ func clip(s string) string {
 	return s[:n] + "…"
 }
 
-// crcTable is the table of the reflected CRC-32 of IEEE 802.3 (polynomial 0xEDB88320).
-// A dozen lines instead of hash/crc32, which costs 2.8 KB of gzip in the page (measured).
-var crcTable = func() (t [256]uint32) {
-	for i := range t {
-		c := uint32(i)
-		for range 8 {
-			if c&1 != 0 {
-				c = 0xEDB88320 ^ c>>1
-			} else {
-				c >>= 1
-			}
-		}
-		t[i] = c
-	}
-	return t
-}()
-
-// crc32 is CRC-32/ISO-HDLC (the CRC of zip, PNG and Ethernet): check value 0xCBF43926
-// for "123456789".
-func crc32(b []byte) uint32 {
-	c := ^uint32(0)
-	for _, x := range b {
-		c = crcTable[byte(c)^x] ^ c>>8
-	}
-	return ^c
-}
+// crc32 is the CRC-32 of the carried block: recipe.CRC32 (CRC-32/ISO-HDLC).
+func crc32(b []byte) uint32 { return recipe.CRC32(b) }
 
 func appendHex32(b []byte, v uint32) []byte {
 	const digits = "0123456789abcdef"
