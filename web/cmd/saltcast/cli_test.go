@@ -560,12 +560,12 @@ func TestTextPlanMatchesJSON(t *testing.T) {
 				want, tol := jv.Num, 0.0
 				switch rw.kind {
 				case recipe.Temp:
-					want = u.temp(want)
+					want = u.TempFromC(want)
 					if u.Temp != "C" {
 						tol = 0.05
 					}
 				case recipe.Mass:
-					want = u.mass(want)
+					want = u.MassFromG(want)
 				}
 				if tol == 0 { // half a unit in the last figure printed
 					tol = 0.5 * math.Pow(10, math.Floor(math.Log10(math.Abs(want)))-float64(rw.sig-1))

@@ -80,7 +80,7 @@ func n(v float64) string { return unit.FormatCompact(v, 4) }
 
 // g shows a mass given in grams, in the sheet's mass unit, to 4 significant figures.
 func (s *sheet) g(grams float64) string {
-	return unit.FormatCompact(s.u.mass(grams), 4) + " " + s.u.Mass
+	return unit.FormatCompact(s.u.MassFromG(grams), 4) + " " + s.u.Mass
 }
 
 // tc shows a temperature given in °C on the sheet's scale, to 3 significant figures.
@@ -89,7 +89,7 @@ func (s *sheet) tc(c float64) string {
 		return unit.FormatCompact(c, 3) + " " + unitSymbol(s.u.Temp)
 	}
 	// °F and K: to a tenth of a degree, as fine as 3 significant figures of a °C reading.
-	v := strconv.FormatFloat(s.u.temp(c), 'f', 1, 64)
+	v := strconv.FormatFloat(s.u.TempFromC(c), 'f', 1, 64)
 	v = strings.TrimSuffix(strings.TrimSuffix(v, "0"), ".")
 	if v == "-0" {
 		v = "0"
@@ -153,7 +153,7 @@ func SheetIn(res recipe.Result, u units) string {
 		if rc.WaterTempC.Set {
 			at = rc.WaterTempC.Value
 		}
-		water += " (" + unit.FormatCompact(s.u.volume(rc.WaterML.Value), 4) + " " + unitSymbol(s.u.Volume) + " measured at " + s.tc(at) + ")"
+		water += " (" + unit.FormatCompact(s.u.VolumeFromML(rc.WaterML.Value), 4) + " " + unitSymbol(s.u.Volume) + " measured at " + s.tc(at) + ")"
 	}
 	s.row("into water", water)
 	if r.HydrateWaterG > 0 {
@@ -306,9 +306,10 @@ func pad(s string, w int) string {
 
 // units are the units a text sheet shows: temperature "C", "F" or "K"; mass "g", "kg" or
 // "lb"; volume "mL", "L" or "gal" (US). Plans and recipes themselves are always °C, g, mL.
-type units struct{ Temp, Mass, Volume string }
+// It is unit.System, the app's too, so a quantity is converted the same way everywhere.
+type units = unit.System
 
-var defaultUnits = units{Temp: "C", Mass: "g", Volume: "mL"}
+var defaultUnits = unit.Metric
 
 // unitsOf reads --temp-unit, --mass-unit and --volume-unit (checked by parseFlags).
 func unitsOf(p *parsed) (units, error) {
@@ -323,34 +324,4 @@ func unitsOf(p *parsed) (units, error) {
 		u.Volume = v
 	}
 	return u, nil
-}
-
-func (u units) temp(c float64) float64 {
-	switch u.Temp {
-	case "F":
-		return unit.FahrenheitFromCelsius(c)
-	case "K":
-		return unit.KelvinFromCelsius(c)
-	}
-	return c
-}
-
-func (u units) mass(g float64) float64 {
-	switch u.Mass {
-	case "kg":
-		return unit.KilogramsFromGrams(g)
-	case "lb":
-		return unit.PoundsFromGrams(g)
-	}
-	return g
-}
-
-func (u units) volume(mL float64) float64 {
-	switch u.Volume {
-	case "L":
-		return unit.LitersFromMilliliters(mL)
-	case "gal":
-		return unit.USGallonsFromMilliliters(mL)
-	}
-	return mL
 }
