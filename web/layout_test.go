@@ -70,6 +70,17 @@ func TestResultsInViewWhileTyping(t *testing.T) {
 				}
 			}
 		}
+		// The Gases screen: the saturation stays in view while typing its last fields.
+		click(t, ctx, "#tab-gas")
+		for _, field := range []string{"g-salinity", "g-measured_mg_per_L", "g-to_C"} {
+			for _, block := range []string{"start", "end"} {
+				if msg := answerInView(t, ctx, field, block, map[string]string{
+					"saturation_mg_per_L": `[data-mirror="saturation_mg_per_L"] b, #gas-outcome output[data-key="saturation_mg_per_L"]`,
+				}); msg != "" {
+					t.Errorf("%s, gases, typing in %s scrolled to the %s: %s", name, field, block, msg)
+				}
+			}
+		}
 	}
 }
 
