@@ -55,3 +55,25 @@ func BenchmarkOxygen41(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkRedrawBatchOnly redraws the chart as typing a target temperature does: the
+// batch moves, the axes and curves stay, so the static layer is reused.
+func BenchmarkRedrawBatchOnly(b *testing.B) {
+	var views [2]Chart
+	for i, endC := range [...]float64{12, 13} {
+		v := benchView()
+		v.Zoom = false
+		v.Batch.End = Point{endC, 4.9 + 0.0426*endC*endC}
+		views[i], _ = Solubility(v)
+	}
+	var r Renderer
+	i := 0
+	for b.Loop() {
+		d, _, err := r.Draw(views[i%2])
+		if err != nil {
+			b.Fatal(err)
+		}
+		sink = d.Batch
+		i++
+	}
+}
