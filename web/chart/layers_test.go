@@ -36,8 +36,19 @@ func TestRendererEqualsFullRender(t *testing.T) {
 		{"dissolved at 130 °C: the batch leaves the plotted range", batchAt(16, 130, Fahrenheit), false},
 		{"back to 31 °C", batchAt(16, 31, Fahrenheit), false},
 		{"no metastable zone: curves change", func() SolubilityView { v := batchAt(16, 31, Fahrenheit); v.MetastableK = 0; return v }(), false},
-		{"decimal comma", func() SolubilityView { v := batchAt(16, 31, Fahrenheit); v.MetastableK = 0; v.DecimalComma = true; return v }(), false},
-		{"no batch", func() SolubilityView { v := batchAt(16, 31, Fahrenheit); v.MetastableK = 0; v.DecimalComma = true; v.Batch = nil; return v }(), true},
+		{"decimal comma", func() SolubilityView {
+			v := batchAt(16, 31, Fahrenheit)
+			v.MetastableK = 0
+			v.DecimalComma = true
+			return v
+		}(), false},
+		{"no batch", func() SolubilityView {
+			v := batchAt(16, 31, Fahrenheit)
+			v.MetastableK = 0
+			v.DecimalComma = true
+			v.Batch = nil
+			return v
+		}(), true},
 	}
 	var r Renderer
 	for _, st := range steps {

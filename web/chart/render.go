@@ -1,7 +1,6 @@
 package chart
 
 import (
-	"encoding/binary"
 	"math"
 	"strconv"
 	"strings"
@@ -45,10 +44,11 @@ func (d *Drawing) ViewBox() string {
 	return "0 0 " + strconv.Itoa(chartWidth) + " " + d.Height
 }
 
-// The markup between the parts of a Drawing.
+// The markup between the parts of a Drawing. Each layer's content is exactly
+// Static or Batch, so a page can set it as the layer's inner markup.
 const (
-	staticOpen = "</desc>\n<rect width=\"100%\" height=\"100%\" fill=\"#fff\"/>\n<g data-layer=\"static\">\n"
-	batchOpen  = "</g>\n<g data-layer=\"batch\">\n"
+	staticOpen = "</desc>\n<rect width=\"100%\" height=\"100%\" fill=\"#fff\"/>\n<g data-layer=\"static\">"
+	batchOpen  = "</g>\n<g data-layer=\"batch\">"
 	svgClose   = "</g>\n</svg>\n"
 )
 
@@ -236,7 +236,7 @@ func (c *Chart) layout() (*layout, error) {
 	}
 
 	// Legend: curves, bands (once per label), other lines, markers.
-	var items []legendItem
+	items := make([]legendItem, 0, len(c.Series)+len(c.Bands)+len(c.Markers))
 	for i := range c.Series {
 		s := &c.Series[i]
 		if s.Label != "" && s.Kind == Curve {
@@ -265,6 +265,7 @@ func (c *Chart) layout() (*layout, error) {
 	l.legendTop = plotBottom + fontTick + 10 + fontAxis + 22
 	x0, x1 := l.left, chartWidth-outerMargin
 	x, y := x0, l.legendTop
+	l.legend = items[:0] // laid out in place
 	for _, it := range items {
 		maxText := x1 - x0 - legendSwW - 8
 		it.label = truncate(it.label, fontLegend, maxText)
@@ -306,11 +307,12 @@ func (l *layout) py(y float64) float64 {
 // staticKey appends to key everything the static layer is drawn from.
 func (l *layout) staticKey(key []byte) []byte {
 	c := l.c
-	f := func(v float64) {
-		key = binary.LittleEndian.AppendUint64(key, math.Float64bits(v))
+	u := func(v uint64) {
+		key = append(key, byte(v), byte(v>>8), byte(v>>16), byte(v>>24), byte(v>>32), byte(v>>40), byte(v>>48), byte(v>>56))
 	}
+	f := func(v float64) { u(math.Float64bits(v)) }
 	str := func(s string) {
-		key = binary.LittleEndian.AppendUint64(key, uint64(len(s)))
+		u(uint64(len(s)))
 		key = append(key, s...)
 	}
 	if c.DecimalComma {
@@ -484,13 +486,13 @@ func (l *layout) drawBand(w *svgWriter, i int) {
 	b := l.c.Bands[i]
 	col := l.bandColour[i]
 	if len(b.Edge)+len(b.Limit) >= 3 {
-		w.s(`<polygon fill="` + col + `" fill-opacity="0.16" stroke="none" points="`)
+		w.s3(`<polygon fill="`, col, `" fill-opacity="0.16" stroke="none" points="`)
 		l.points(w, b.Edge, false)
 		l.points(w, b.Limit, true)
 		w.s("\"/>\n")
 	}
 	if len(b.Limit) >= 2 {
-		w.s(`<polyline fill="none" stroke="` + col + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round" points="`)
+		w.s3(`<polyline fill="none" stroke="`, col, `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round" points="`)
 		l.points(w, b.Limit, false)
 		w.s("\"/>\n")
 	}
@@ -510,10 +512,10 @@ func (l *layout) lineStyle(s *Series, ord int) (colour string, width float64, da
 }
 
 func (l *layout) strokeAttrs(w *svgWriter, colour string, width float64, dash string) {
-	w.s(` fill="none" stroke="` + colour + `"`)
+	w.s3(` fill="none" stroke="`, colour, `"`)
 	w.attr("stroke-width", width)
 	if dash != "" {
-		w.s(` stroke-dasharray="` + dash + `"`)
+		w.s3(` stroke-dasharray="`, dash, `"`)
 		if dash == curveDashes[len(curveDashes)-1] {
 			w.s(` stroke-linecap="round"`)
 		}
@@ -529,7 +531,7 @@ func (l *layout) drawSeries(w *svgWriter, i int) {
 	colour, width, dash := l.lineStyle(s, l.curveOrd[i])
 	if len(s.Points) == 1 {
 		// A lone point of a line: a dot, so it is not lost.
-		w.s(`<circle fill="` + colour + `"`)
+		w.s3(`<circle fill="`, colour, `"`)
 		w.attr("cx", l.px(s.Points[0].X))
 		w.attr("cy", l.py(s.Points[0].Y))
 		w.attr("r", width)
@@ -575,7 +577,7 @@ func (l *layout) midArrow(w *svgWriter, pts []Point, colour string) {
 	const length, halfW = 16.0, 7.5
 	tipX, tipY = tipX+ux*length/2, tipY+uy*length/2
 	bx, by := tipX-ux*length, tipY-uy*length
-	w.s(`<polygon fill="` + colour + `" points="`)
+	w.s3(`<polygon fill="`, colour, `" points="`)
 	w.num(tipX)
 	w.s(",")
 	w.num(tipY)
@@ -618,14 +620,14 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 	r := markerSize
 	switch shape {
 	case Circle:
-		w.s(`<circle fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.s3(`<circle fill="`, col, `" stroke="#fff" stroke-width="2"`)
 		w.attr("cx", x)
 		w.attr("cy", y)
 		w.attr("r", r)
 		w.s("/>\n")
 	case Square:
 		r *= 0.9
-		w.s(`<rect fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.s3(`<rect fill="`, col, `" stroke="#fff" stroke-width="2"`)
 		w.attr("x", x-r)
 		w.attr("y", y-r)
 		w.attr("width", 2*r)
@@ -635,7 +637,7 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 		w.s(`<path fill="none" stroke="#fff" stroke-width="7" stroke-linecap="round" d="`)
 		crossPath(w, x, y, r)
 		w.s("\"/>\n")
-		w.s(`<path fill="none" stroke="` + col + `" stroke-width="3.5" stroke-linecap="round" d="`)
+		w.s3(`<path fill="none" stroke="`, col, `" stroke-width="3.5" stroke-linecap="round" d="`)
 		crossPath(w, x, y, r)
 		w.s("\"/>\n")
 	default:
@@ -654,7 +656,7 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 			pts = [4][2]float64{{x, y + r}, {x - r, y - r*0.75}, {x + r, y - r*0.75}}
 			n = 3
 		}
-		w.s(`<polygon fill="` + col + `" stroke="#fff" stroke-width="2" stroke-linejoin="round" points="`)
+		w.s3(`<polygon fill="`, col, `" stroke="#fff" stroke-width="2" stroke-linejoin="round" points="`)
 		for i := 0; i < n; i++ {
 			if i > 0 {
 				w.s(" ")
@@ -705,7 +707,7 @@ func (l *layout) drawLegend(w *svgWriter) {
 			w.attr("y2", cy)
 			w.s("/>")
 			if it.series.Kind == Path || it.series.Kind == Jump {
-				w.s(`<polygon fill="` + colour + `" points="`)
+				w.s3(`<polygon fill="`, colour, `" points="`)
 				w.num(it.x + legendSwW)
 				w.s(",")
 				w.num(cy)
@@ -720,12 +722,12 @@ func (l *layout) drawLegend(w *svgWriter) {
 				w.s(`"/>`)
 			}
 		case 1:
-			w.s(`<rect fill="` + it.bandColour + `" fill-opacity="0.16"`)
+			w.s3(`<rect fill="`, it.bandColour, `" fill-opacity="0.16"`)
 			w.attr("x", it.x)
 			w.attr("y", cy-10)
 			w.attr("width", legendSwW)
 			w.attr("height", 20)
-			w.s(`/><line stroke="` + it.bandColour + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round"`)
+			w.s3(`/><line stroke="`, it.bandColour, `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round"`)
 			w.attr("x1", it.x+3)
 			w.attr("x2", it.x+legendSwW)
 			w.attr("y1", cy-10)
