@@ -29,8 +29,9 @@ type app struct {
 
 	got  *received      // recipes received and not yet taken in (carry.go)
 	last *recipe.Result // the last good plan, kept on screen while an input is wrong
-	// The batch chart: what draws it, the drawing #chart shows (when chartShown) and the
+	// The batch chart: what builds and draws it, the drawing #chart shows (when chartShown) and the
 	// whole SVG of #chart once asked for (lastSVG), or its placeholder.
+	chartC     chart.SolubilityCache
 	chartR     chart.Renderer
 	chartD     chart.Drawing
 	chartShown bool

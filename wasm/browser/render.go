@@ -299,7 +299,7 @@ func (a *app) chartOf(r *recipe.Result) (chart.Chart, error) {
 	if err != nil {
 		return chart.Chart{}, err
 	}
-	return chart.Solubility(view)
+	return a.chartC.Solubility(view)
 }
 
 func curveAt(c solubility.Curve) func(float64) (float64, error) {

@@ -77,3 +77,29 @@ func BenchmarkRedrawBatchOnly(b *testing.B) {
 		i++
 	}
 }
+
+// BenchmarkSolubilityRedrawBatchOnly builds the chart and redraws it as the app does while
+// a target temperature is typed: Solubility, then the renderer with the static layer kept.
+func BenchmarkSolubilityRedrawBatchOnly(b *testing.B) {
+	var views [2]SolubilityView
+	for i, endC := range [...]float64{12, 13} {
+		views[i] = benchView()
+		views[i].Zoom = false
+		views[i].Batch.End = Point{endC, 4.9 + 0.0426*endC*endC}
+	}
+	var r Renderer
+	var cache SolubilityCache
+	i := 0
+	for b.Loop() {
+		c, err := cache.Solubility(views[i%2])
+		if err != nil {
+			b.Fatal(err)
+		}
+		d, _, err := r.Draw(c)
+		if err != nil {
+			b.Fatal(err)
+		}
+		sink = d.Batch
+		i++
+	}
+}
