@@ -133,15 +133,20 @@ func recomputeTimes(t *testing.T, ctx context.Context, n int) []float64 {
 
 // TestRecomputeCompare measures the recompute of the built page against another build
 // (SALTCAST_COMPARE, a path to its page), in alternating blocks of 40 runs in two tabs
-// (SALTCAST_COMPARE_BLOCKS blocks each, 5 unless set), so
+// (SALTCAST_COMPARE_BLOCKS blocks each, 5 unless set; SALTCAST_COMPARE_THIS, a path, stands
+// for the built page if set), so
 // both see the same machine load: for before/after figures on a shared machine.
 func TestRecomputeCompare(t *testing.T) {
 	other := os.Getenv("SALTCAST_COMPARE")
 	if other == "" {
 		t.Skip("SALTCAST_COMPARE names no page to compare with")
 	}
+	this := appURL(t)
+	if p := os.Getenv("SALTCAST_COMPARE_THIS"); p != "" {
+		this = "file://" + p
+	}
 	ctxA, ctxB := tab(t), tab(t)
-	open(t, ctxA, appURL(t))
+	open(t, ctxA, this)
 	open(t, ctxB, "file://"+other)
 	var a, b []float64
 	blocks := 5
