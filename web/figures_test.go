@@ -29,8 +29,8 @@ const (
 // loads is how many times each page is opened for the open → first result median.
 const loads = 10
 
-// recomputes is how many single-input recomputes are timed for the p95.
-const recomputes = 200
+// recomputes is how many single-input recomputes are timed for the p95, after warmup.
+const recomputes, warmup = 200, 20
 
 func TestFigures(t *testing.T) {
 	app := appURL(t)
@@ -101,16 +101,25 @@ func TestFigures(t *testing.T) {
 	})()`)
 	t.Logf("in the page: text decoded and unpacked at %.1f ms, compiled at %.1f ms, first result at %.1f ms after the loader started", marks[0], marks[1], marks[2])
 
+	times := recomputeTimes(t, ctx, recomputes)
+	slices.Sort(times)
+	p95 := times[len(times)*95/100]
+	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ %.0f ms)", len(times), warmup, median(times), p95, times[len(times)-1], aimRecomputeP)
+}
+
+// recomputeTimes opens the copper sulfate demo in ctx and returns n recompute times in ms,
+// each from one input event to style and layout done, after a warm-up.
+func recomputeTimes(t *testing.T, ctx context.Context, n int) []float64 {
+	t.Helper()
 	click(t, ctx, `[data-demo="cuso4"]`)
 	// Each run changes one input, as a technician does: the water (results change, the
 	// chart does not, since it is drawn per 100 g water) or the target temperature (results
 	// and chart change). The first warmup runs let the browser's compiler settle.
-	const warmup = 20
 	times := mustEval[[]float64](t, ctx, `(function(){
 		const water = document.querySelector('#recipe [name="water_g"]');
 		const cool = document.querySelector('#recipe [name="cool_to_C"]');
 		const out = [];
-		for (let i = 0; i < `+strconv.Itoa(warmup+recomputes)+`; i++) {
+		for (let i = 0; i < `+strconv.Itoa(warmup+n)+`; i++) {
 			const t0 = performance.now();
 			if (i % 2 == 0) { water.value = String(900 + (i % 7) * 25); water.dispatchEvent(new Event("input", {bubbles: true})); }
 			else { cool.value = String(10 + (i % 9)); cool.dispatchEvent(new Event("input", {bubbles: true})); }
@@ -119,9 +128,42 @@ func TestFigures(t *testing.T) {
 		}
 		return out.slice(`+strconv.Itoa(warmup)+`);
 	})()`)
-	slices.Sort(times)
-	p95 := times[len(times)*95/100]
-	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ %.0f ms)", len(times), warmup, median(times), p95, times[len(times)-1], aimRecomputeP)
+	return times
+}
+
+// TestRecomputeCompare measures the recompute of the built page against another build
+// (SALTCAST_COMPARE, a path to its page), in alternating blocks of 40 runs in two tabs
+// (SALTCAST_COMPARE_BLOCKS blocks each, 5 unless set; SALTCAST_COMPARE_THIS, a path, stands
+// for the built page if set), so
+// both see the same machine load: for before/after figures on a shared machine.
+func TestRecomputeCompare(t *testing.T) {
+	other := os.Getenv("SALTCAST_COMPARE")
+	if other == "" {
+		t.Skip("SALTCAST_COMPARE names no page to compare with")
+	}
+	this := appURL(t)
+	if p := os.Getenv("SALTCAST_COMPARE_THIS"); p != "" {
+		this = "file://" + p
+	}
+	ctxA, ctxB := tab(t), tab(t)
+	open(t, ctxA, this)
+	open(t, ctxB, "file://"+other)
+	var a, b []float64
+	blocks := 5
+	if n, err := strconv.Atoi(os.Getenv("SALTCAST_COMPARE_BLOCKS")); err == nil && n > 0 {
+		blocks = n
+	}
+	for range blocks {
+		b = append(b, recomputeTimes(t, ctxB, 40)...)
+		a = append(a, recomputeTimes(t, ctxA, 40)...)
+	}
+	for _, r := range []struct {
+		name string
+		v    []float64
+	}{{"this build", a}, {"SALTCAST_COMPARE", b}} {
+		slices.Sort(r.v)
+		t.Logf("recompute %-16s %d runs: median %.2f ms, p95 %.2f ms, max %.2f ms", r.name, len(r.v), median(r.v), r.v[len(r.v)*95/100], r.v[len(r.v)-1])
+	}
 }
 
 // loadTime opens u in a new tab and returns the time from navigation start to the first

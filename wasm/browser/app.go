@@ -11,6 +11,7 @@ import (
 	"saltcast/core/recipe"
 	"saltcast/core/recipe/demo"
 	"saltcast/core/unit"
+	"saltcast/web/chart"
 )
 
 // localStorage keys.
@@ -26,11 +27,17 @@ type app struct {
 	store storage
 	shelf Shelf
 
-	got      *received      // recipes received and not yet taken in (carry.go)
-	last     *recipe.Result // the last good plan, kept on screen while an input is wrong
-	lastSVG  string
-	planErr  string // the field that the last plan error is shown beside
-	compound *compound.Compound
+	got  *received      // recipes received and not yet taken in (carry.go)
+	last *recipe.Result // the last good plan, kept on screen while an input is wrong
+	// The batch chart: what builds and draws it, the drawing #chart shows (when chartShown) and the
+	// whole SVG of #chart once asked for (lastSVG), or its placeholder.
+	chartC     chart.SolubilityCache
+	chartR     chart.Renderer
+	chartD     chart.Drawing
+	chartShown bool
+	chartSVG   string
+	planErr    string // the field that the last plan error is shown beside
+	compound   *compound.Compound
 
 	shown      map[string]string // what parts of the page show now (see changed)
 	sheetDirty bool              // the batch sheet shows an older plan
@@ -242,6 +249,7 @@ func (a *app) freshBatch() {
 	setText(byID("charge-form"), "")
 	setText(byID("curve-range"), "")
 	setHTML(byID("chart"), "")
+	a.chartShown, a.chartSVG = false, ""
 	setHidden(byID("programme-box"), true)
 	a.recompute()
 }

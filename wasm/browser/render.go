@@ -104,10 +104,7 @@ func (a *app) render() {
 	// The chart depends on the compound, the units and the path in g per 100 g water, not
 	// on the batch size: redraw it only when those change.
 	if a.changed("chart-input", a.chartKey(r)) {
-		a.lastSVG = a.chartSVG(r)
-		if a.changed("chart", a.lastSVG) {
-			setHTML(byID("chart"), a.lastSVG) // SVG from web/chart: every text in it is escaped
-		}
+		a.drawChart(r)
 	}
 	a.renderProgramme()
 	if !a.sheetDirty {
@@ -232,9 +229,54 @@ func chartUnit(u Units) chart.TempUnit {
 // chartPoints is how many points each solid phase's curve is drawn with.
 const chartPoints = 60
 
-// chartSVG draws the compound's curves and the batch's path; any problem becomes a
-// placeholder SVG that says what is missing, never a broken chart.
-func (a *app) chartSVG(r *recipe.Result) string {
+// drawChart draws the compound's curves and the batch's path into #chart. When only the
+// batch moved (same curves, units and axes) it replaces just the batch layer, the viewBox's
+// height and the description: the page then holds what a whole redraw would give, without
+// building and parsing the curves and axes again.
+func (a *app) drawChart(r *recipe.Result) {
+	el := byID("chart")
+	c, err := a.chartOf(r)
+	var d chart.Drawing
+	same := false
+	if err == nil {
+		d, same, err = a.chartR.Draw(c)
+	}
+	if err != nil {
+		ph := chart.Placeholder("Solubility", "No chart: "+err.Error())
+		a.chartSVG, a.chartShown = ph, false
+		if a.changed("chart", ph) {
+			setHTML(el, ph) // SVG from web/chart: every text in it is escaped
+		}
+		return
+	}
+	delete(a.shown, "chart")
+	if same && a.chartShown {
+		svg := el.Get("firstElementChild")
+		if d.Height != a.chartD.Height {
+			setAttr(svg, "viewBox", d.ViewBox())
+		}
+		if d.Desc != a.chartD.Desc {
+			setHTML(q(svg, "desc"), d.Desc) // escaped by web/chart
+		}
+		if d.Batch != a.chartD.Batch {
+			setHTML(q(svg, `g[data-layer="batch"]`), d.Batch) // SVG from web/chart
+		}
+	} else {
+		setHTML(el, d.SVG()) // SVG from web/chart: every text in it is escaped
+	}
+	a.chartD, a.chartShown, a.chartSVG = d, true, ""
+}
+
+// lastSVG is the chart as #chart shows it, whole (for the batch sheet).
+func (a *app) lastSVG() string {
+	if a.chartSVG == "" && a.chartShown {
+		a.chartSVG = a.chartD.SVG()
+	}
+	return a.chartSVG
+}
+
+// chartOf builds the chart of the compound's curves and the batch's path.
+func (a *app) chartOf(r *recipe.Result) (chart.Chart, error) {
 	view := chart.SolubilityView{Temp: chartUnit(a.u), Batch: chart.BatchFromPlan(&r.Result)}
 	if r.HasMetastable {
 		view.MetastableK = r.MetastableWidthK
@@ -255,16 +297,9 @@ func (a *app) chartSVG(r *recipe.Result) string {
 		}
 	}
 	if err != nil {
-		return chart.Placeholder("Solubility", "No chart: "+err.Error())
+		return chart.Chart{}, err
 	}
-	c, err := chart.Solubility(view)
-	if err == nil {
-		var svg string
-		if svg, err = chart.Render(c); err == nil {
-			return svg
-		}
-	}
-	return chart.Placeholder("Solubility", "No chart: "+err.Error())
+	return a.chartC.Solubility(view)
 }
 
 func curveAt(c solubility.Curve) func(float64) (float64, error) {
@@ -411,7 +446,7 @@ func (a *app) renderSheet() {
 			row(out, f.Label, text+" "+ut)
 		}
 	}
-	setHTML(byID("s-chart"), a.lastSVG)
+	setHTML(byID("s-chart"), a.lastSVG())
 
 	pt := byID("s-programme")
 	clear(pt)

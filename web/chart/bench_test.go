@@ -55,3 +55,51 @@ func BenchmarkOxygen41(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkRedrawBatchOnly redraws the chart as typing a target temperature does: the
+// batch moves, the axes and curves stay, so the static layer is reused.
+func BenchmarkRedrawBatchOnly(b *testing.B) {
+	var views [2]Chart
+	for i, endC := range [...]float64{12, 13} {
+		v := benchView()
+		v.Zoom = false
+		v.Batch.End = Point{endC, 4.9 + 0.0426*endC*endC}
+		views[i], _ = Solubility(v)
+	}
+	var r Renderer
+	i := 0
+	for b.Loop() {
+		d, _, err := r.Draw(views[i%2])
+		if err != nil {
+			b.Fatal(err)
+		}
+		sink = d.Batch
+		i++
+	}
+}
+
+// BenchmarkSolubilityRedrawBatchOnly builds the chart and redraws it as the app does while
+// a target temperature is typed: Solubility, then the renderer with the static layer kept.
+func BenchmarkSolubilityRedrawBatchOnly(b *testing.B) {
+	var views [2]SolubilityView
+	for i, endC := range [...]float64{12, 13} {
+		views[i] = benchView()
+		views[i].Zoom = false
+		views[i].Batch.End = Point{endC, 4.9 + 0.0426*endC*endC}
+	}
+	var r Renderer
+	var cache SolubilityCache
+	i := 0
+	for b.Loop() {
+		c, err := cache.Solubility(views[i%2])
+		if err != nil {
+			b.Fatal(err)
+		}
+		d, _, err := r.Draw(c)
+		if err != nil {
+			b.Fatal(err)
+		}
+		sink = d.Batch
+		i++
+	}
+}

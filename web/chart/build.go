@@ -1,7 +1,9 @@
 package chart
 
 import (
+	"cmp"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -85,6 +87,44 @@ type SolubilityView struct {
 // to the curve and follows it down to the end point. Values are converted to
 // v.Temp and v.Conc for display.
 func Solubility(v SolubilityView) (Chart, error) {
+	return (*SolubilityCache)(nil).Solubility(v)
+}
+
+// SolubilityCache keeps the curves and bands of the last solubility chart built through
+// it, so that a chart whose phases, zone, units and window are unchanged (the batch moved)
+// reuses them instead of converting every point again (not for a ConcUnit with its own
+// Convert, which cannot be compared). The charts it returns share their curves and bands
+// with it: they are read, not changed. The zero value is ready; a nil cache keeps nothing.
+type SolubilityCache struct {
+	phases       []Phase // a copy of the last view's phases
+	metastableK  float64
+	temp         TempUnit
+	concSymbol   string // a unit with its own Convert is not kept
+	comma        bool
+	winLo, winHi float64
+	series       []Series // the curves
+	bands        []Band
+	curve        []Point // all phases in °C, sorted by temperature
+	ok           bool
+}
+
+// hit reports whether the cache holds the curves of v in the window.
+func (sc *SolubilityCache) hit(v *SolubilityView, winLo, winHi float64) bool {
+	if sc == nil || !sc.ok || sc.metastableK != v.MetastableK || sc.temp != v.Temp || sc.concSymbol != v.Conc.Symbol || v.Conc.Convert != nil ||
+		sc.comma != v.DecimalComma || sc.winLo != winLo || sc.winHi != winHi || len(sc.phases) != len(v.Phases) {
+		return false
+	}
+	for i, ph := range v.Phases {
+		if ph.Form != sc.phases[i].Form || !slices.Equal(ph.Points, sc.phases[i].Points) {
+			return false
+		}
+	}
+	return true
+}
+
+// Solubility is the package's Solubility, with the curves taken from the cache when they
+// are the same.
+func (sc *SolubilityCache) Solubility(v SolubilityView) (Chart, error) {
 	if !v.Temp.valid() {
 		return Chart{}, &DataError{Where: "temperature unit", Problem: "unknown unit " + strconv.Itoa(int(v.Temp))}
 	}
@@ -140,6 +180,12 @@ func Solubility(v SolubilityView) (Chart, error) {
 
 	// Curves, and the band beside each.
 	var curve []Point // all phases in °C, for following the curve
+	if sc.hit(&v, winLo, winHi) {
+		c.Series = sc.series[:len(sc.series):len(sc.series)] // appending copies
+		c.Bands = sc.bands
+		curve = sc.curve
+		goto batch
+	}
 	for _, ph := range v.Phases {
 		where := "phase " + strconv.Quote(ph.Form)
 		for i, p := range ph.Points {
@@ -182,8 +228,19 @@ func Solubility(v SolubilityView) (Chart, error) {
 			})
 		}
 	}
-	sort.SliceStable(curve, func(i, j int) bool { return curve[i].X < curve[j].X })
+	slices.SortStableFunc(curve, func(a, b Point) int { return cmp.Compare(a.X, b.X) })
+	if sc != nil {
+		sc.ok = false
+		sc.phases = sc.phases[:0]
+		for _, ph := range v.Phases {
+			sc.phases = append(sc.phases, Phase{Form: ph.Form, Points: slices.Clone(ph.Points)})
+		}
+		sc.metastableK, sc.temp, sc.concSymbol, sc.comma, sc.winLo, sc.winHi = v.MetastableK, v.Temp, v.Conc.Symbol, v.DecimalComma, winLo, winHi
+		sc.series, sc.bands, sc.curve, sc.ok = c.Series, c.Bands, curve, true
+		c.Series = c.Series[:len(c.Series):len(c.Series)]
+	}
 
+batch:
 	if b := v.Batch; b != nil {
 		route := []Point{b.Dissolve}
 		if b.Onset != nil {

@@ -126,8 +126,8 @@ func (c *Chart) check() error {
 		n += len(b.Edge) + len(b.Limit)
 	}
 	for i, m := range c.Markers {
-		if err := checkPoint("marker "+strconv.Itoa(i+1)+" "+strconv.Quote(m.Label), Point{m.X, m.Y}); err != nil {
-			return err
+		if !finite(m.X) || !finite(m.Y) {
+			return checkPoint("marker "+strconv.Itoa(i+1)+" "+strconv.Quote(m.Label), Point{m.X, m.Y})
 		}
 		if m.Shape < 0 || m.Shape >= numShapes {
 			return &DataError{Where: "marker " + strconv.Quote(m.Label), Problem: "unknown shape " + strconv.Itoa(int(m.Shape))}

@@ -2,6 +2,7 @@ package chart
 
 import (
 	"math"
+	"strconv"
 	"strings"
 )
 
@@ -9,16 +10,132 @@ import (
 // points and a *DataError if any number is NaN or infinite; nothing is
 // drawn in either case (see Placeholder).
 func Render(c Chart) (string, error) {
-	if err := c.check(); err != nil {
-		return "", err
-	}
-	l, err := c.layout()
+	var r Renderer
+	d, _, err := r.Draw(c)
 	if err != nil {
 		return "", err
 	}
-	w := &svgWriter{b: make([]byte, 0, 8192)}
-	l.draw(w)
-	return string(w.b), nil
+	return d.SVG(), nil
+}
+
+// Drawing is a chart drawn in parts, so that a page can replace only the part
+// that changed. Its SVG is what Render returns for the same chart:
+//
+//	<svg … viewBox="ViewBox" …><title>…</title><desc>Desc</desc><rect …/>
+//	<g data-layer="static">Static</g>
+//	<g data-layer="batch">Batch</g>
+//	</svg>
+//
+// The static layer holds the title, grid, axes, bands and curves; the batch
+// layer the paths and jumps, markers, legend and notes (the legend follows
+// the markers' labels). The viewBox's height and the description follow the
+// batch too.
+type Drawing struct {
+	Head   string // from "<svg" to the space before the viewBox's height
+	Height string // the viewBox's height
+	Mid    string // from the viewBox's height to "<desc>"
+	Desc   string // the text alternative, escaped
+	Static string // the static layer's content
+	Batch  string // the batch layer's content
+}
+
+// ViewBox is the value of the root's viewBox attribute.
+func (d *Drawing) ViewBox() string {
+	return "0 0 " + strconv.Itoa(chartWidth) + " " + d.Height
+}
+
+// The markup between the parts of a Drawing. Each layer's content is exactly
+// Static or Batch, so a page can set it as the layer's inner markup.
+const (
+	staticOpen = "</desc>\n<rect width=\"100%\" height=\"100%\" fill=\"#fff\"/>\n<g data-layer=\"static\">"
+	batchOpen  = "</g>\n<g data-layer=\"batch\">"
+	svgClose   = "</g>\n</svg>\n"
+)
+
+// SVG is the whole document.
+func (d *Drawing) SVG() string {
+	return d.Head + d.Height + d.Mid + d.Desc + staticOpen + d.Static + batchOpen + d.Batch + svgClose
+}
+
+// Renderer draws charts one after another and keeps what it drew last, so
+// that a chart whose static layer (see Drawing) is the same as the last one's
+// reuses it instead of drawing it again. The zero value is ready to use.
+type Renderer struct {
+	last     Drawing
+	haveLast bool
+	key, old []byte // what the static layer was drawn from: now and last time
+	w        svgWriter
+}
+
+// Draw draws c. same reports that the static layer is the one of the last
+// chart drawn (byte for byte the same text; only Height, Desc and Batch can
+// differ). Errors are those of Render; after one the next chart is drawn
+// whole.
+func (r *Renderer) Draw(c Chart) (d Drawing, same bool, err error) {
+	if err := c.check(); err != nil {
+		r.haveLast = false
+		return Drawing{}, false, err
+	}
+	l, err := c.layout()
+	if err != nil {
+		r.haveLast = false
+		return Drawing{}, false, err
+	}
+	r.key, r.old = l.staticKey(r.old[:0]), r.key
+	same = r.haveLast && string(r.key) == string(r.old)
+	w := &r.w
+	if w.b == nil {
+		w.b = make([]byte, 0, 8192)
+	}
+	// Head and Mid.
+	w.b = w.b[:0]
+	w.s(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 `)
+	w.num(chartWidth)
+	w.s(" ")
+	if same {
+		d.Head = r.last.Head
+	} else {
+		d.Head = string(w.b)
+	}
+	w.b = w.b[:0]
+	w.num(math.Ceil(l.height))
+	d.Height = string(w.b)
+	if same {
+		d.Mid = r.last.Mid
+	} else {
+		w.b = w.b[:0]
+		w.s(`" width="100%" role="img" aria-label="`)
+		w.text(c.Title)
+		w.s(`" font-family="`)
+		w.s(fontFamily)
+		w.s(`">`)
+		w.s("\n<title>")
+		w.text(c.Title)
+		w.s("</title>\n<desc>")
+		d.Mid = string(w.b)
+	}
+	w.b = w.b[:0]
+	if c.Desc != "" {
+		w.text(c.Desc)
+	} else {
+		l.describe(w)
+	}
+	d.Desc = string(w.b)
+	if same {
+		d.Static = r.last.Static
+	} else {
+		w.b = w.b[:0]
+		l.drawStatic(w)
+		d.Static = string(w.b)
+	}
+	w.b = w.b[:0]
+	l.drawBatch(w)
+	d.Batch = string(w.b)
+	if cap(w.b) > 1<<16 {
+		w.b = nil // do not keep a large buffer after a large chart
+	}
+	r.last, r.haveLast = d, true
+	return d, same, nil
 }
 
 // layout is a chart placed on the page: scales, ticks and legend rows.
@@ -119,7 +236,7 @@ func (c *Chart) layout() (*layout, error) {
 	}
 
 	// Legend: curves, bands (once per label), other lines, markers.
-	var items []legendItem
+	items := make([]legendItem, 0, len(c.Series)+len(c.Bands)+len(c.Markers))
 	for i := range c.Series {
 		s := &c.Series[i]
 		if s.Label != "" && s.Kind == Curve {
@@ -148,6 +265,7 @@ func (c *Chart) layout() (*layout, error) {
 	l.legendTop = plotBottom + fontTick + 10 + fontAxis + 22
 	x0, x1 := l.left, chartWidth-outerMargin
 	x, y := x0, l.legendTop
+	l.legend = items[:0] // laid out in place
 	for _, it := range items {
 		maxText := x1 - x0 - legendSwW - 8
 		it.label = truncate(it.label, fontLegend, maxText)
@@ -186,30 +304,54 @@ func (l *layout) py(y float64) float64 {
 	return l.top + plotHeight - (y-l.yt.Lo)/(l.yt.Hi-l.yt.Lo)*plotHeight
 }
 
-func (l *layout) draw(w *svgWriter) {
+// staticKey appends to key everything the static layer is drawn from.
+func (l *layout) staticKey(key []byte) []byte {
 	c := l.c
-	w.s(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 `)
-	w.num(chartWidth)
-	w.s(" ")
-	w.num(math.Ceil(l.height))
-	w.s(`" width="100%" role="img" aria-label="`)
-	w.text(c.Title)
-	w.s(`" font-family="`)
-	w.s(fontFamily)
-	w.s(`">`)
-	w.s("\n<title>")
-	w.text(c.Title)
-	w.s("</title>\n<desc>")
-	if c.Desc != "" {
-		w.text(c.Desc)
-	} else {
-		w.text(l.describe())
+	u := func(v uint64) {
+		key = append(key, byte(v), byte(v>>8), byte(v>>16), byte(v>>24), byte(v>>32), byte(v>>40), byte(v>>48), byte(v>>56))
 	}
-	w.s("</desc>\n")
-	w.s(`<rect width="100%" height="100%" fill="#fff"/>`)
-	w.s("\n")
+	f := func(v float64) { u(math.Float64bits(v)) }
+	str := func(s string) {
+		u(uint64(len(s)))
+		key = append(key, s...)
+	}
+	if c.DecimalComma {
+		key = append(key, 1)
+	} else {
+		key = append(key, 0)
+	}
+	for _, v := range [...]float64{l.xt.Lo, l.xt.Hi, l.xt.Step, l.yt.Lo, l.yt.Hi, l.yt.Step, float64(l.xt.Decimals), float64(l.yt.Decimals), l.left, l.top, l.plotW} {
+		f(v)
+	}
+	str(c.Title)
+	str(l.xAxisTitle)
+	str(l.yAxisTitle)
+	pts := func(p []Point) {
+		f(float64(len(p)))
+		for _, q := range p {
+			f(q.X)
+			f(q.Y)
+		}
+	}
+	f(float64(len(c.Bands)))
+	for _, b := range c.Bands {
+		pts(b.Edge)
+		pts(b.Limit)
+	}
+	for i, s := range c.Series {
+		if s.Kind == Curve || s.Kind == Reference {
+			f(float64(i))
+			f(float64(s.Kind))
+			f(float64(l.curveOrd[i]))
+			pts(s.Points)
+		}
+	}
+	return key
+}
 
-	// Title.
+// drawStatic draws the static layer: title, grid, axes, bands and curves.
+func (l *layout) drawStatic(w *svgWriter) {
+	c := l.c
 	for i, t := range l.titleLines {
 		w.s(`<text x="`)
 		w.num(outerMargin)
@@ -224,7 +366,19 @@ func (l *layout) draw(w *svgWriter) {
 	for i := range c.Bands {
 		l.drawBand(w, i)
 	}
-	for _, k := range [...]Kind{Reference, Curve, Jump, Path} {
+	for _, k := range [...]Kind{Reference, Curve} {
+		for i := range c.Series {
+			if c.Series[i].Kind == k {
+				l.drawSeries(w, i)
+			}
+		}
+	}
+}
+
+// drawBatch draws the batch layer: paths and jumps, markers, legend and notes.
+func (l *layout) drawBatch(w *svgWriter) {
+	c := l.c
+	for _, k := range [...]Kind{Jump, Path} {
 		for i := range c.Series {
 			if c.Series[i].Kind == k {
 				l.drawSeries(w, i)
@@ -245,7 +399,6 @@ func (l *layout) draw(w *svgWriter) {
 		w.text(n)
 		w.s("</text>\n")
 	}
-	w.s("</svg>\n")
 }
 
 func (l *layout) drawGrid(w *svgWriter) {
@@ -333,13 +486,13 @@ func (l *layout) drawBand(w *svgWriter, i int) {
 	b := l.c.Bands[i]
 	col := l.bandColour[i]
 	if len(b.Edge)+len(b.Limit) >= 3 {
-		w.s(`<polygon fill="` + col + `" fill-opacity="0.16" stroke="none" points="`)
+		w.s3(`<polygon fill="`, col, `" fill-opacity="0.16" stroke="none" points="`)
 		l.points(w, b.Edge, false)
 		l.points(w, b.Limit, true)
 		w.s("\"/>\n")
 	}
 	if len(b.Limit) >= 2 {
-		w.s(`<polyline fill="none" stroke="` + col + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round" points="`)
+		w.s3(`<polyline fill="none" stroke="`, col, `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round" points="`)
 		l.points(w, b.Limit, false)
 		w.s("\"/>\n")
 	}
@@ -359,10 +512,10 @@ func (l *layout) lineStyle(s *Series, ord int) (colour string, width float64, da
 }
 
 func (l *layout) strokeAttrs(w *svgWriter, colour string, width float64, dash string) {
-	w.s(` fill="none" stroke="` + colour + `"`)
+	w.s3(` fill="none" stroke="`, colour, `"`)
 	w.attr("stroke-width", width)
 	if dash != "" {
-		w.s(` stroke-dasharray="` + dash + `"`)
+		w.s3(` stroke-dasharray="`, dash, `"`)
 		if dash == curveDashes[len(curveDashes)-1] {
 			w.s(` stroke-linecap="round"`)
 		}
@@ -378,7 +531,7 @@ func (l *layout) drawSeries(w *svgWriter, i int) {
 	colour, width, dash := l.lineStyle(s, l.curveOrd[i])
 	if len(s.Points) == 1 {
 		// A lone point of a line: a dot, so it is not lost.
-		w.s(`<circle fill="` + colour + `"`)
+		w.s3(`<circle fill="`, colour, `"`)
 		w.attr("cx", l.px(s.Points[0].X))
 		w.attr("cy", l.py(s.Points[0].Y))
 		w.attr("r", width)
@@ -424,7 +577,7 @@ func (l *layout) midArrow(w *svgWriter, pts []Point, colour string) {
 	const length, halfW = 16.0, 7.5
 	tipX, tipY = tipX+ux*length/2, tipY+uy*length/2
 	bx, by := tipX-ux*length, tipY-uy*length
-	w.s(`<polygon fill="` + colour + `" points="`)
+	w.s3(`<polygon fill="`, colour, `" points="`)
 	w.num(tipX)
 	w.s(",")
 	w.num(tipY)
@@ -467,14 +620,14 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 	r := markerSize
 	switch shape {
 	case Circle:
-		w.s(`<circle fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.s3(`<circle fill="`, col, `" stroke="#fff" stroke-width="2"`)
 		w.attr("cx", x)
 		w.attr("cy", y)
 		w.attr("r", r)
 		w.s("/>\n")
 	case Square:
 		r *= 0.9
-		w.s(`<rect fill="` + col + `" stroke="#fff" stroke-width="2"`)
+		w.s3(`<rect fill="`, col, `" stroke="#fff" stroke-width="2"`)
 		w.attr("x", x-r)
 		w.attr("y", y-r)
 		w.attr("width", 2*r)
@@ -484,7 +637,7 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 		w.s(`<path fill="none" stroke="#fff" stroke-width="7" stroke-linecap="round" d="`)
 		crossPath(w, x, y, r)
 		w.s("\"/>\n")
-		w.s(`<path fill="none" stroke="` + col + `" stroke-width="3.5" stroke-linecap="round" d="`)
+		w.s3(`<path fill="none" stroke="`, col, `" stroke-width="3.5" stroke-linecap="round" d="`)
 		crossPath(w, x, y, r)
 		w.s("\"/>\n")
 	default:
@@ -503,7 +656,7 @@ func (l *layout) drawMarker(w *svgWriter, shape Shape, x, y float64) {
 			pts = [4][2]float64{{x, y + r}, {x - r, y - r*0.75}, {x + r, y - r*0.75}}
 			n = 3
 		}
-		w.s(`<polygon fill="` + col + `" stroke="#fff" stroke-width="2" stroke-linejoin="round" points="`)
+		w.s3(`<polygon fill="`, col, `" stroke="#fff" stroke-width="2" stroke-linejoin="round" points="`)
 		for i := 0; i < n; i++ {
 			if i > 0 {
 				w.s(" ")
@@ -554,7 +707,7 @@ func (l *layout) drawLegend(w *svgWriter) {
 			w.attr("y2", cy)
 			w.s("/>")
 			if it.series.Kind == Path || it.series.Kind == Jump {
-				w.s(`<polygon fill="` + colour + `" points="`)
+				w.s3(`<polygon fill="`, colour, `" points="`)
 				w.num(it.x + legendSwW)
 				w.s(",")
 				w.num(cy)
@@ -569,12 +722,12 @@ func (l *layout) drawLegend(w *svgWriter) {
 				w.s(`"/>`)
 			}
 		case 1:
-			w.s(`<rect fill="` + it.bandColour + `" fill-opacity="0.16"`)
+			w.s3(`<rect fill="`, it.bandColour, `" fill-opacity="0.16"`)
 			w.attr("x", it.x)
 			w.attr("y", cy-10)
 			w.attr("width", legendSwW)
 			w.attr("height", 20)
-			w.s(`/><line stroke="` + it.bandColour + `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round"`)
+			w.s3(`/><line stroke="`, it.bandColour, `" stroke-width="2.5" stroke-dasharray="0.1 6" stroke-linecap="round"`)
 			w.attr("x1", it.x+3)
 			w.attr("x2", it.x+legendSwW)
 			w.attr("y1", cy-10)
@@ -593,63 +746,63 @@ func (l *layout) drawLegend(w *svgWriter) {
 	w.s("</g>\n")
 }
 
-// describe writes the text alternative of the chart: axes, lines with their
-// ranges, and every marker with its coordinates.
-func (l *layout) describe() string {
+// describe appends the text alternative of the chart, escaped: axes, lines
+// with their ranges, and every marker with its coordinates.
+func (l *layout) describe(w *svgWriter) {
 	c := l.c
 	comma := c.DecimalComma
-	var b strings.Builder
 	if c.Title != "" {
-		b.WriteString(c.Title)
-		b.WriteString(". ")
+		w.text(c.Title)
+		w.s(". ")
 	}
-	b.WriteString("Horizontal axis: ")
-	b.WriteString(l.xAxisTitle)
-	b.WriteString(", ")
-	b.WriteString(l.xt.Label(l.xt.Lo, comma))
-	b.WriteString(" to ")
-	b.WriteString(l.xt.Label(l.xt.Hi, comma))
-	b.WriteString(". Vertical axis: ")
-	b.WriteString(l.yAxisTitle)
-	b.WriteString(", ")
-	b.WriteString(l.yt.Label(l.yt.Lo, comma))
-	b.WriteString(" to ")
-	b.WriteString(l.yt.Label(l.yt.Hi, comma))
-	b.WriteString(".")
+	w.s("Horizontal axis: ")
+	w.text(l.xAxisTitle)
+	w.s(", ")
+	w.text(l.xt.Label(l.xt.Lo, comma))
+	w.s(" to ")
+	w.text(l.xt.Label(l.xt.Hi, comma))
+	w.s(". Vertical axis: ")
+	w.text(l.yAxisTitle)
+	w.s(", ")
+	w.text(l.yt.Label(l.yt.Lo, comma))
+	w.s(" to ")
+	w.text(l.yt.Label(l.yt.Hi, comma))
+	w.s(".")
 	for _, s := range c.Series {
 		if s.Label == "" || len(s.Points) == 0 {
 			continue
 		}
 		first, last := s.Points[0], s.Points[len(s.Points)-1]
-		b.WriteString(" ")
-		b.WriteString(s.Label)
-		b.WriteString(": from ")
-		b.WriteString(l.pair(first))
-		b.WriteString(" to ")
-		b.WriteString(l.pair(last))
-		b.WriteString(".")
+		w.s(" ")
+		w.text(s.Label)
+		w.s(": from ")
+		l.pair(w, first)
+		w.s(" to ")
+		l.pair(w, last)
+		w.s(".")
 	}
 	for _, m := range c.Markers {
-		b.WriteString(" ")
-		b.WriteString(m.Label)
-		b.WriteString(": ")
-		b.WriteString(l.pair(Point{m.X, m.Y}))
-		b.WriteString(".")
+		w.s(" ")
+		w.text(m.Label)
+		w.s(": ")
+		l.pair(w, Point{m.X, m.Y})
+		w.s(".")
 	}
-	return b.String()
 }
 
-// pair prints a point with its units, e.g. "35 °C, 55.1 g/100 g water".
-func (l *layout) pair(p Point) string {
-	s := formatShort(p.X, 4, l.c.DecimalComma)
+// pair appends a point with its units, e.g. "35 °C, 55.1 g/100 g water".
+func (l *layout) pair(w *svgWriter, p Point) {
+	w.text(formatShort(p.X, 4, l.c.DecimalComma))
 	if l.c.X.Unit != "" {
-		s += " " + l.c.X.Unit
+		w.s(" ")
+		w.text(l.c.X.Unit)
 	}
-	s += ", " + formatShort(p.Y, 4, l.c.DecimalComma)
+	w.s(", ")
+	w.text(formatShort(p.Y, 4, l.c.DecimalComma))
 	if l.c.Y.Unit != "" {
-		s += " " + l.c.Y.Unit
+		w.s(" ")
+		w.text(l.c.Y.Unit)
 	}
-	return s
 }
 
 // wrap breaks s into at most max lines of the given width; the last line is

@@ -11,6 +11,11 @@ type svgWriter struct{ b []byte }
 
 func (w *svgWriter) s(s string) { w.b = append(w.b, s...) }
 
+// s3 appends a, b and c, without joining them into a new string first.
+func (w *svgWriter) s3(a, b, c string) {
+	w.b = append(append(append(w.b, a...), b...), c...)
+}
+
 // num appends v with at most one decimal and no trailing ".0".
 func (w *svgWriter) num(v float64) {
 	if v > -0.05 && v < 0.05 {
