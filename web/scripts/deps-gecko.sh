@@ -15,5 +15,8 @@ fi
 echo "deps-gecko: installing firefox-esr with apt-get" >&2
 export DEBIAN_FRONTEND=noninteractive
 apt-get update -qq
-apt-get install -y -qq --no-install-recommends firefox-esr >/dev/null
+# With Debian's recommended packages (fonts, Mesa's software GL, xauth): the suites were
+# written and tested with them, and a bare X server or browser without fonts is not what
+# a tablet shows.
+apt-get install -y -qq firefox-esr >/dev/null
 [ -x /usr/bin/firefox-esr ] || { echo "deps-gecko: firefox-esr still missing after apt-get" >&2; exit 1; }

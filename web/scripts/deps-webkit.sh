@@ -19,7 +19,10 @@ fi
 echo "deps-webkit: installing ${missing[*]} with apt-get" >&2
 export DEBIAN_FRONTEND=noninteractive
 apt-get update -qq
-apt-get install -y -qq --no-install-recommends "${missing[@]}" >/dev/null
+# With Debian's recommended packages (fonts, Mesa's software GL, xauth): the suites were
+# written and tested with them, and a bare X server or browser without fonts is not what
+# a tablet shows.
+apt-get install -y -qq "${missing[@]}" >/dev/null
 for f in /usr/bin/WebKitWebDriver "$(minibrowser)" /usr/bin/Xvfb; do
 	[ -x "$f" ] || { echo "deps-webkit: $f still missing after apt-get" >&2; exit 1; }
 done
