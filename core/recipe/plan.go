@@ -70,7 +70,7 @@ func Plan(r Recipe) (Result, error) {
 	var volumeNote string
 	if r.WaterML.Set {
 		t := r.WaterTempC.Or(DefaultWaterTempC)
-		b.WaterG = r.WaterML.Value * water.DensityKgPerM3(t) / 1000
+		b.WaterG = r.WaterML.Value * WaterGPerML(t)
 		volumeNote = unit.FormatCompact(r.WaterML.Value, 6) + " mL of water at " + unit.FormatCompact(t, 4) +
 			" °C weighs " + unit.FormatCompact(b.WaterG, 6) + " g (density of pure water, Kell 1975, J. Chem. Eng. Data 20:97)"
 	}
@@ -139,3 +139,8 @@ func renameField(err error, names map[string]string, prefix string) error {
 	}
 	return &out
 }
+
+// WaterGPerML is the density of the batch water, g/mL, at tempC (pure water, Kell 1975,
+// J. Chem. Eng. Data 20:97, through core/water): how a water volume becomes grams, for the
+// planner and for the form that switches the water between volume and mass.
+func WaterGPerML(tempC float64) float64 { return water.DensityKgPerM3(tempC) / 1000 }

@@ -6,7 +6,6 @@ import (
 
 	"saltcast/core/recipe"
 	"saltcast/core/unit"
-	"saltcast/core/water"
 	"saltcast/core/wire"
 )
 
@@ -77,7 +76,7 @@ func (d *Draft) SetCustom(on bool) {
 
 // SwitchWater gives the water by basis ("mass" or "volume") and carries the amount over, as
 // the planner converts it: the grams of the volume at its temperature (water_temp_C, else
-// recipe.DefaultWaterTempC) by pure water's density (core/water), or the volume of the
+// recipe.DefaultWaterTempC) by recipe.WaterGPerML, the planner's own density, or the volume of the
 // grams at that temperature. With nothing readable to carry (the box left is empty or
 // wrong), the new box keeps what it had; an empty one then fails the plan and the page
 // marks its last result as stale.
@@ -91,7 +90,7 @@ func (d *Draft) SwitchWater(basis string) {
 	if v, ok := d.Num["water_temp_C"]; ok && d.Errs["water_temp_C"] == nil {
 		tempC = v
 	}
-	gPerML := water.DensityKgPerM3(tempC) / 1000
+	gPerML := recipe.WaterGPerML(tempC)
 	from, to, factor := "water_mL", "water_g", gPerML
 	if basis == "volume" {
 		from, to, factor = "water_g", "water_mL", 1/gPerML
