@@ -159,7 +159,9 @@ func (a *app) start() {
 	})
 	a.bindBox()
 	a.bindCarry()
+	mark("goBound")
 	a.load(start)
+	mark("goPlanned")
 	a.openPrepLink(win.Location().Hash())
 	// A link pasted into the address bar of a tab that already shows Saltcast changes only
 	// the part after the #: the page reads it then too.

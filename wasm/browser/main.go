@@ -12,8 +12,17 @@ package main
 import "syscall/js"
 
 func main() {
+	mark("goMain")
 	a := newApp()
 	a.start()
 	js.Global().Call("saltcastReady")
 	select {}
+}
+
+// mark notes the time (performance.now, ms) at a step of the start in the loader's marks,
+// which the performance figures read (web/figures_test.go).
+func mark(step string) {
+	if m := js.Global().Get("saltcastMarks"); m.Type() == js.TypeObject {
+		m.Set(step, js.Global().Get("performance").Call("now"))
+	}
 }
