@@ -134,7 +134,12 @@ func open(t testing.TB, ctx context.Context, u string) {
 	waitReady(t, ctx)
 }
 
-// waitReady waits for the page's data-ready mark. A poll that starts while a navigation is
+// settledJS is the page's start state once it is settled: "1" when the first result is on
+// screen and the work put off until after it is done (data-settled), "error" when the app
+// could not start, null before.
+const settledJS = `(function(){const d=document.documentElement, s=d.getAttribute("data-ready"); return s === "1" && !d.hasAttribute("data-settled") ? null : s})()`
+
+// waitReady waits for the page's data-ready mark and, on success, its data-settled mark. A poll that starts while a navigation is
 // still replacing the document can lose its execution context ("Cannot find context with
 // specified id"); that is retried a few times rather than failed.
 func waitReady(t testing.TB, ctx context.Context) {
@@ -142,7 +147,7 @@ func waitReady(t testing.TB, ctx context.Context) {
 	var state string
 	var err error
 	for try := 0; try < 4; try++ {
-		state, err = chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
+		state, err = chromedp.Run(ctx, chromedp.Poll[string](settledJS,
 			chromedp.WithPollingInterval(5*time.Millisecond)))
 		if err == nil || ctx.Err() != nil {
 			break

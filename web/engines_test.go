@@ -83,8 +83,8 @@ func openApp(t *testing.T, b enginetest.Browser, u string) {
 		t.Fatalf("%s: open %s: %v", b.Name(), u, err)
 	}
 	state := js[string](t, b, `new Promise(r => { const end = Date.now() + 60000; (function poll() {
-		const s = document.documentElement.getAttribute("data-ready");
-		if (s || Date.now() > end) r(s || "timeout"); else setTimeout(poll, 20); })(); })`)
+		const d = document.documentElement, s = d.getAttribute("data-ready");
+		if (s === "error" || s && d.hasAttribute("data-settled") || Date.now() > end) r(s || "timeout"); else setTimeout(poll, 20); })(); })`)
 	if state != "1" {
 		msg := js[string](t, b, `document.getElementById("load-error").textContent`)
 		t.Fatalf("%s: the page did not start: %s %s", b.Name(), state, msg)

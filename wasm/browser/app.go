@@ -44,6 +44,7 @@ type app struct {
 
 	current       recipe.Recipe // the recipe last planned
 	currentQueued bool          // keepCurrent will run
+	starting      bool          // the first plan is being shown: drawings wait (renderDrawings)
 	gasShown      bool          // the gas screen has been opened, so it follows the unit switch
 	pending       []func()
 	tick          js.Func
@@ -157,12 +158,18 @@ func (a *app) start() {
 		classSet(doc.Get("body"), "print-gas", false)
 		classSet(doc.Get("body"), "print-labels", false)
 	})
-	a.bindBox()
-	a.bindCarry()
 	mark("goBound")
+	a.starting = true
 	a.load(start)
+	a.starting = false
 	mark("goPlanned")
 	a.openPrepLink(win.Location().Hash())
+	// What the first result does not need waits until it is painted: the recipe box and the
+	// copies to carry (their lists and buttons), then the page says it is settled
+	// (data-settled), which the browser tests wait for.
+	a.later(a.bindBox)
+	a.later(a.bindCarry)
+	a.later(func() { setAttr(doc.Get("documentElement"), "data-settled", "") })
 	// A link pasted into the address bar of a tab that already shows Saltcast changes only
 	// the part after the #: the page reads it then too.
 	on(js.Global(), "hashchange", func(js.Value, event) { a.openLink(win.Location().Hash()) })

@@ -20,9 +20,12 @@ func main() {
 }
 
 // mark notes the time (performance.now, ms) at a step of the start in the loader's marks,
-// which the performance figures read (web/figures_test.go).
+// which the performance figures read (web/figures_test.go), and as a user timing mark, which
+// a DevTools trace shows.
 func mark(step string) {
 	if m := js.Global().Get("saltcastMarks"); m.Type() == js.TypeObject {
-		m.Set(step, js.Global().Get("performance").Call("now"))
+		perf := js.Global().Get("performance")
+		m.Set(step, perf.Call("now"))
+		perf.Call("mark", step)
 	}
 }

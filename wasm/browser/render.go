@@ -101,16 +101,31 @@ func (a *app) render() {
 		setText(byID("curve-range"), ct)
 	}
 
+	if a.starting {
+		// The first plan's figures, cautions and warnings go on screen first; the chart and
+		// the cooling programme follow once they are painted.
+		a.later(a.renderDrawings)
+	} else {
+		a.renderDrawings()
+	}
+	if !a.sheetDirty {
+		a.sheetDirty = true
+		a.later(a.sheetIfDirty)
+	}
+}
+
+// renderDrawings draws the chart and the cooling programme of a.last.
+func (a *app) renderDrawings() {
+	r := a.last
+	if r == nil {
+		return
+	}
 	// The chart depends on the compound, the units and the path in g per 100 g water, not
 	// on the batch size: redraw it only when those change.
 	if a.changed("chart-input", a.chartKey(r)) {
 		a.drawChart(r)
 	}
 	a.renderProgramme()
-	if !a.sheetDirty {
-		a.sheetDirty = true
-		a.later(a.sheetIfDirty)
-	}
 }
 
 // sheetIfDirty brings the batch sheet up to date. The sheet is drawn after the batch screen

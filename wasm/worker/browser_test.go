@@ -55,7 +55,7 @@ document.addEventListener("securitypolicyviolation", (e) =>
 	if err := chromedp.Do(ctx, chromedp.Navigate(s.base+"/")); err != nil {
 		t.Fatal("navigate: " + err.Error())
 	}
-	state, err := chromedp.Run(ctx, chromedp.Poll[string](`document.documentElement.getAttribute("data-ready")`,
+	state, err := chromedp.Run(ctx, chromedp.Poll[string](`(function(){const d=document.documentElement, s=d.getAttribute("data-ready"); return s === "1" && !d.hasAttribute("data-settled") ? null : s})()`,
 		chromedp.WithPollingInterval(10*time.Millisecond)))
 	if err != nil {
 		t.Fatal("waiting for the app's first result: " + err.Error())

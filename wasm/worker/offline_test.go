@@ -221,7 +221,7 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 	if err := chromedp.Do(ctx, chromedp.Navigate(a.base+"/")); err != nil {
 		t.Fatal(err)
 	}
-	waitFor(t, ctx, "the app's first result", `document.documentElement.getAttribute("data-ready") === "1"`)
+	waitFor(t, ctx, "the app's first result", `document.documentElement.getAttribute("data-ready") === "1" && document.documentElement.hasAttribute("data-settled")`)
 	waitFor(t, ctx, "the service worker to control the page",
 		`document.documentElement.getAttribute("data-offline") === "ready" && !!navigator.serviceWorker.controller`)
 	versionA := jsEval[string](t, ctx, `document.getElementById("app-version").textContent`)
@@ -260,7 +260,7 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 	if err := chromedp.Do(ctx, chromedp.Navigate(a.base+"/")); err != nil {
 		t.Fatal("offline reload: " + err.Error())
 	}
-	waitFor(t, ctx, "the app to start offline", `document.documentElement.getAttribute("data-ready") === "1"`)
+	waitFor(t, ctx, "the app to start offline", `document.documentElement.getAttribute("data-ready") === "1" && document.documentElement.hasAttribute("data-settled")`)
 	charge := func() float64 {
 		v, _ := strconv.ParseFloat(jsEval[string](t, ctx, `document.querySelector('[data-key="charge_g"]').textContent`), 64)
 		return v
@@ -300,7 +300,7 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 	if err := chromedp.Do(ctx, chromedp.Navigate(a.base+"/")); err != nil {
 		t.Fatal(err)
 	}
-	waitFor(t, ctx, "the question again after a reload", `document.documentElement.getAttribute("data-ready") === "1" &&
+	waitFor(t, ctx, "the question again after a reload", `document.documentElement.getAttribute("data-ready") === "1" && document.documentElement.hasAttribute("data-settled") &&
 		document.documentElement.getAttribute("data-offline") === "update-ready"`)
 	if got := jsEval[string](t, ctx, `document.getElementById("app-version").textContent`); got != versionA {
 		t.Errorf("without the user's yes a reload runs version %q, want the kept %q", got, versionA)
@@ -309,7 +309,7 @@ func TestServedAppOfflineAndUpdate(t *testing.T) {
 		t.Error("the new version is not waiting")
 	}
 	jsEval[bool](t, ctx, `document.getElementById("update-now").click(), true`)
-	waitFor(t, ctx, "the new version to run", `document.documentElement.getAttribute("data-ready") === "1" &&
+	waitFor(t, ctx, "the new version to run", `document.documentElement.getAttribute("data-ready") === "1" && document.documentElement.hasAttribute("data-settled") &&
 		document.getElementById("app-version").textContent === `+strconv.Quote(versionB))
 	if got := jsEval[string](t, ctx, `localStorage.getItem("saltcast.recipes") || ""`); got != saved {
 		t.Errorf("after the update the saved recipes are %q, want %q", got, saved)
