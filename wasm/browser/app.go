@@ -45,6 +45,7 @@ type app struct {
 	current       recipe.Recipe // the recipe last planned
 	currentQueued bool          // keepCurrent will run
 	starting      bool          // the first plan is being shown: drawings wait (renderDrawings)
+	prog          progTable     // the cooling programme on the batch screen
 	gasShown      bool          // the gas screen has been opened, so it follows the unit switch
 	pending       []func()
 	tick          js.Func
@@ -53,6 +54,7 @@ type app struct {
 	inputs     map[string]js.Value // recipe inputs by name
 	msgs       map[string]js.Value // the message beside each input
 	tiles      []tile              // one per Figure
+	strip      []stripOut          // the figures of the pinned result strip
 }
 
 // tile is where one Figure shows on the batch screen.
@@ -61,6 +63,28 @@ type tile struct {
 	out  js.Value // the element with data-key
 	unit js.Value // the unit beside it, if any
 	box  js.Value // the tile to hide when the plan has no such figure
+	own  bool     // box is this figure's own tile (not the tile of another it sits in)
+	text js.Value // out's text node, once written (setOut)
+}
+
+// setOut shows text in the tile's output. The output keeps one text node whose data changes,
+// so a new number is a change of text, not of the page's nodes (cheaper to restyle). Only
+// setOut writes the outputs of the batch screen's tiles and strip.
+func setOut(el js.Value, node *js.Value, text string) {
+	if exists(*node) {
+		node.Set("data", text)
+		return
+	}
+	*node = doc.Call("createTextNode", text)
+	setText(el, "")
+	el.Call("appendChild", *node)
+}
+
+// stripOut is one figure in the result strip pinned under the tabs.
+type stripOut struct {
+	key  string // the Figure's key (data-strip)
+	el   js.Value
+	text js.Value
 }
 
 func newApp() *app {
@@ -246,11 +270,11 @@ func (a *app) freshBatch() {
 	a.shown = nil
 	a.showDraft()
 	setValue(byID("save-name"), "")
-	for _, t := range a.tiles {
-		setText(t.out, "—")
+	for i := range a.tiles {
+		setOut(a.tiles[i].out, &a.tiles[i].text, "—")
 	}
-	for _, el := range qa(byID("strip"), "[data-strip]") {
-		setText(el, "—")
+	for i := range a.strip {
+		setOut(a.strip[i].el, &a.strip[i].text, "—")
 	}
 	for _, id := range []string{"cautions", "warnings", "sources"} {
 		clear(byID(id))
