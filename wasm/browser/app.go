@@ -46,6 +46,7 @@ type app struct {
 	currentQueued bool          // keepCurrent will run
 	starting      bool          // the first plan is being shown: drawings wait (renderDrawings)
 	prog          progTable     // the cooling programme on the batch screen
+	progKinds     []js.Value    // its linear/cubic choice
 	gasShown      bool          // the gas screen has been opened, so it follows the unit switch
 	pending       []func()
 	tick          js.Func

@@ -103,8 +103,15 @@ func (a *app) render() {
 		setText(byID("charge-form"), cf)
 	}
 
-	a.fillListOnce("cautions", sayAll(r.Cautions))
-	markCautions(byID("cautions"), r.CautionKinds)
+	cautions := sayAll(r.Cautions)
+	kinds := make([]string, len(r.CautionKinds))
+	for i, k := range r.CautionKinds {
+		kinds[i] = string(k)
+	}
+	if a.changed("caution-kinds", strings.Join(kinds, " ")+"\x00"+strings.Join(cautions, "\x00")) {
+		a.fillListOnce("cautions", cautions)
+		markCautions(byID("cautions"), r.CautionKinds)
+	}
 	a.fillListOnce("warnings", orNone(sayAll(r.Warnings)))
 	a.fillListOnce("sources", r.Sources)
 	if ct := a.curveText(r); a.changed("curve-range", ct) {
@@ -390,8 +397,11 @@ func (a *app) renderProgramme() {
 		return
 	}
 	setHidden(box, false)
+	if a.progKinds == nil {
+		a.progKinds = qa(doc, `[name="programme_kind"]`)
+	}
 	cubic := false
-	for _, el := range qa(doc, `[name="programme_kind"]`) {
+	for _, el := range a.progKinds {
 		if checked(el) && value(el) == "cubic" {
 			cubic = true
 		}
