@@ -10,7 +10,7 @@
 ;;
 ;; Memory, laid out by the loader:
 ;;   [0, 128)           text91's value of each ASCII character (255: not in the alphabet)
-;;   [t, t+n)           the page's text, decoded in place to the packed bytes
+;;   [t, t+n)           the page's text, decoded in place to the packed bytes (from t)
 ;;   [p, p+2*probs)     the probabilities, 16 bits each (probs = 1846 + 0x300 << (lc+lp))
 ;;   [out, out+size)    the unpacked module, compiled from here
 ;;
@@ -38,11 +38,13 @@
   (global $rep2 (mut i32) (i32.const 0))
   (global $rep3 (mut i32) (i32.const 0))
 
-  ;; text91 decodes the n characters at t in place (13 bits in every two characters, the low
-  ;; bits first; a last lone character holds 6 bits). It returns the number of bytes, or -1
-  ;; when a character is outside the alphabet or a pair's value is 8192 or more.
-  (func $text91 (export "text91") (param $t i32) (param $n i32) (result i32)
-    (local $c i32) (local $k i32) (local $i i32) (local $o i32)
+  ;; text91 decodes the n characters at t to bytes at o (13 bits in every two characters, the
+  ;; low bits first; a last lone character holds 6 bits). It returns the number of bytes, or -1
+  ;; when a character is outside the alphabet or a pair's value is 8192 or more. 16 characters
+  ;; make 13 bytes exactly, so the loader decodes the text in pieces of 16k characters, each
+  ;; to 13k bytes (in place: o ≤ t; the pieces keep the engine's better code, as in lzmaRun).
+  (func $text91 (export "text91") (param $t i32) (param $n i32) (param $o i32) (result i32)
+    (local $c i32) (local $k i32) (local $i i32) (local $start i32)
     (local $acc i32) (local $bits i32) (local $a i32) (local $b i32) (local $v i32)
     (loop $blank
       (i32.store8 (local.get $c) (i32.const 255))
@@ -59,7 +61,7 @@
           (local.set $k (i32.add (local.get $k) (i32.const 1)))))
       (local.set $c (i32.add (local.get $c) (i32.const 1)))
       (br_if $alphabet (i32.lt_u (local.get $c) (i32.const 127))))
-    (local.set $o (local.get $t))
+    (local.set $start (local.get $o))
     (block $pairsDone
       (loop $pair
         (br_if $pairsDone (i32.ge_u (i32.add (local.get $i) (i32.const 1)) (local.get $n)))
@@ -98,7 +100,7 @@
           (then
             (i32.store8 (local.get $o) (local.get $acc))
             (local.set $o (i32.add (local.get $o) (i32.const 1)))))))
-    (i32.sub (local.get $o) (local.get $t)))
+    (i32.sub (local.get $o) (local.get $start)))
 
   ;; norm keeps the range at 2^24 or more, taking the next input byte; a stream that ends
   ;; here is cut short, and the decoder stops with a trap the loader reports.
