@@ -1,7 +1,7 @@
 ;; The loader's unpacker (web/loader.js): text91 text to bytes, then an "lzma alone" stream
 ;; (xz --format=lzma) to the module, both in this module's memory. Written by hand in the
 ;; WebAssembly text format; `go generate ./web` assembles it with binaryen's wasm-as and writes
-;; the bytes into web/loader.js (TestLoaderDecoderIsAssembledFromSource checks they match).
+;; the bytes into web/loader.js (TestLoaderUnpackerIsAssembledFromSource checks they match).
 ;;
 ;; LZMA is the method of Igor Pavlov's 7-Zip; this follows its published description (the LZMA
 ;; SDK's lzma-specification.txt): a binary range coder with adaptive 11-bit probabilities,
@@ -14,7 +14,7 @@
 ;;   [p, p+2*probs)     the probabilities, 16 bits each (probs = 1846 + 0x300 << (lc+lp))
 ;;   [out, out+size)    the unpacked module, compiled from here
 ;;
-;; Probability groups, as indices (the same as the JavaScript decoder used):
+;; Probability groups, as indices into the probabilities:
 ;;   is-match 0, is-rep 192, is-rep-g0 204, is-rep-g1 216, is-rep-g2 228, is-rep0-long 240,
 ;;   position slots 432, special positions 688, align 802, match length 818,
 ;;   rep length 1332, literals 1846.
@@ -42,7 +42,7 @@
   ;; low bits first; a last lone character holds 6 bits). It returns the number of bytes, or -1
   ;; when a character is outside the alphabet or a pair's value is 8192 or more. 16 characters
   ;; make 13 bytes exactly, so the loader decodes the text in pieces of 16k characters, each
-  ;; to 13k bytes (in place: o ≤ t; the pieces keep the engine's better code, as in lzmaRun).
+  ;; to 13k bytes (in place: o <= t; the pieces keep the engine's better code, as in lzmaRun).
   (func $text91 (export "text91") (param $t i32) (param $n i32) (param $o i32) (result i32)
     (local $c i32) (local $k i32) (local $i i32) (local $start i32)
     (local $acc i32) (local $bits i32) (local $a i32) (local $b i32) (local $v i32)
