@@ -28,7 +28,8 @@
   // 91; saltcast/web/text91 writes it and says why) and unpacks an lzma stream (xz
   // --format=lzma, the size in its header) into the unpacker's memory, where the module is
   // compiled from. A gzip stream (a build without xz) is returned as it is. The unpacker runs
-  // in WebAssembly: this JavaScript took three times as long in Chromium (DEVELOPERS.md).
+  // in WebAssembly: a JavaScript decoder took two to three times as long in Chromium
+  // (DEVELOPERS.md, "Decisions measured").
   function unpack(text) {
     var bin = atob(UNPACKER), code = new Uint8Array(bin.length), i;
     for (i = 0; i < bin.length; i++) code[i] = bin.charCodeAt(i);
