@@ -4,7 +4,7 @@
 GO      ?= go
 export PATH := $(shell $(GO) env GOROOT)/lib/wasm:$(PATH)
 
-.PHONY: all build demo test test-core test-deps bench worker worker-run cli clean
+.PHONY: all build demo unpacker test test-core test-deps bench worker worker-run cli clean
 
 all: build demo
 
@@ -25,6 +25,11 @@ build:
 	@bash web/scripts/deps-build.sh
 	$(GO) run ./web/bundle -version "$(VERSION)" -out dist/saltcast.html
 	@echo "built $(CURDIR)/dist/saltcast.html"
+
+## unpacker: after changing web/unlzma.wat, assemble it into web/loader.js (needs binaryen's
+## wasm-as; the build itself does not: the bytes are committed)
+unpacker:
+	cd web && $(GO) generate -run gen_unpacker .
 
 ## test-deps: what the browser and worker tests need (chromium, firefox-esr, webkit2gtk-driver
 ## and xvfb via apt-get, workerd via npm ci)

@@ -176,13 +176,73 @@ func TestRecomputeCompare(t *testing.T) {
 // first result, then a moment for what the page puts off until after it.
 func openOlder(t *testing.T, ctx context.Context, u string) {
 	t.Helper()
+	openFirst(t, ctx, u)
+	time.Sleep(500 * time.Millisecond)
+}
+
+// openFirst opens u and waits for its first result only (data-ready), as the yardstick page,
+// which has nothing to put off, and pages built before data-settled set it.
+func openFirst(t *testing.T, ctx context.Context, u string) {
+	t.Helper()
 	if err := chromedp.Do(ctx, chromedp.Navigate(u)); err != nil {
 		t.Fatal("navigate: " + err.Error())
 	}
 	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](`document.documentElement.getAttribute("data-ready") === "1"`)); err != nil {
 		t.Fatal("waiting for the first result: " + err.Error())
 	}
-	time.Sleep(500 * time.Millisecond)
+}
+
+// TestLoadCompare opens the built page and another build (SALTCAST_COMPARE, a path to its
+// page) in turn, each in a new tab, SALTCAST_COMPARE_LOADS times each (10 unless set), so both
+// see the same machine load, and prints the medians of the loader's marks: when it started,
+// how long it took to decode the text and unpack, to compile, and open → first result. For
+// before/after figures of start-up on a shared machine.
+func TestLoadCompare(t *testing.T) {
+	other := os.Getenv("SALTCAST_COMPARE")
+	if other == "" {
+		t.Skip("SALTCAST_COMPARE names no page to compare with")
+	}
+	n := loads
+	if v, err := strconv.Atoi(os.Getenv("SALTCAST_COMPARE_LOADS")); err == nil && v > 0 {
+		n = v
+	}
+	pages := []struct{ name, url string }{{"this build", appURL(t)}, {"SALTCAST_COMPARE", "file://" + other}}
+	// For each page: loader start, unpack (text decoded and unpacked), compile, first result;
+	// ms, the first after navigation, the others after the mark before.
+	var got [2][4][]float64
+	for range n {
+		for i, p := range pages {
+			m := loadMarks(t, p.url)
+			for k := range m {
+				got[i][k] = append(got[i][k], m[k])
+			}
+		}
+	}
+	for i, p := range pages {
+		t.Logf("%-16s median of %d loads: loader starts %.1f ms, text decoded and unpacked %.1f ms, compiled %.1f ms later, first result at %.1f ms after opening",
+			p.name, n, median(got[i][0]), median(got[i][1]), median(got[i][2]), median(got[i][3]))
+		t.Logf("  unpack ms: %v", fmtMs(got[i][1]))
+		t.Logf("  open → first result ms: %v", fmtMs(got[i][3]))
+	}
+}
+
+// loadMarks opens u in a new tab and returns the loader's start (ms after navigation), its
+// unpack and compile times (ms) and the first result (ms after navigation).
+func loadMarks(t *testing.T, u string) [4]float64 {
+	t.Helper()
+	ctx, cancel := chromedp.NewContext(browser(t))
+	defer cancel()
+	tctx, tcancel := context.WithTimeout(ctx, pageTimeout)
+	defer tcancel()
+	openFirst(t, tctx, u)
+	m := mustEval[[]float64](t, tctx, `(function(){
+		const m = window.saltcastMarks;
+		return [m.start, m.unpacked - m.start, m.compiled - m.unpacked, m.ready];
+	})()`)
+	if len(m) != 4 {
+		t.Fatalf("%s: marks %v", u, m)
+	}
+	return [4]float64(m)
 }
 
 // loadTime opens u in a new tab and returns the time from navigation start to the first
@@ -193,7 +253,7 @@ func loadTime(t *testing.T, u string) float64 {
 	defer cancel()
 	tctx, tcancel := context.WithTimeout(ctx, pageTimeout)
 	defer tcancel()
-	open(t, tctx, u)
+	openFirst(t, tctx, u)
 	return mustEval[float64](t, tctx, `window.saltcastMarks.ready`)
 }
 

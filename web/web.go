@@ -33,6 +33,9 @@ var shellHTML string
 //go:embed app.css
 var appCSS string
 
+// loader.js carries the unpacker assembled from unlzma.wat (binaryen's wasm-as).
+//
+//go:generate go run gen_unpacker.go
 //go:embed loader.js
 var loaderJS string
 

@@ -2,7 +2,8 @@
 # Makes sure the browser tests and the page build have their tools: Debian's chromium (the
 # headless browser chromedp drives), xz (xz-utils: web/bundle packs the module with its LZMA,
 # and web/loader_test.go checks the loader against it), zopfli (the gzip fallback, measured by
-# make bench) and binaryen (wasm-opt, for measuring with -wasm-opt).
+# make bench) and binaryen (wasm-as: web/loader_test.go checks the unpacker's bytes in
+# web/loader.js against web/unlzma.wat; wasm-opt, for measuring with -wasm-opt).
 # Fast and silent when all are there.
 # As root it installs them with apt-get; otherwise it prints what to install and fails.
 set -euo pipefail
@@ -11,7 +12,7 @@ missing=()
 command -v chromium >/dev/null 2>&1 || missing+=(chromium)
 command -v zopfli >/dev/null 2>&1 || missing+=(zopfli)
 command -v xz >/dev/null 2>&1 || missing+=(xz-utils)
-command -v wasm-opt >/dev/null 2>&1 || missing+=(binaryen)
+{ command -v wasm-opt && command -v wasm-as; } >/dev/null 2>&1 || missing+=(binaryen)
 if [ ${#missing[@]} -eq 0 ]; then
 	exit 0
 fi

@@ -10,8 +10,8 @@
 // Bits are taken from each byte lowest first and grouped by 13; a group v (0 ≤ v < 8192 ≤
 // 91²) is written as the characters alphabet[v%91] then alphabet[v/91]. The last group, if
 // it has 6 bits or fewer, is written as one character. The padding bits are zero and never
-// reach a whole byte, so the text's length alone gives the number of bytes. web/loader.js
-// decodes the same way.
+// reach a whole byte, so the text's length alone gives the number of bytes. The loader's
+// unpacker (web/unlzma.wat) decodes the same way.
 package text91
 
 import (
