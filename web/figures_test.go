@@ -107,10 +107,15 @@ func TestFigures(t *testing.T) {
 	})()`)
 	t.Logf("in the page (ms after the loader started, which was %.0f ms after the navigation): module text decoded and unpacked %.1f, compiled %.1f, Go's main running %.1f, the form bound %.1f, first plan on screen %.1f, ready %.1f", marks[0], marks[1], marks[2], marks[3], marks[4], marks[5], marks[6])
 
-	times := recomputeTimes(t, ctx, recomputes)
-	slices.Sort(times)
-	p95 := times[len(times)*95/100]
-	t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs after %d warm-up: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ %.0f ms)", len(times), warmup, median(times), p95, times[len(times)-1], aimRecomputeP)
+	// The first keystrokes after opening run while the browser still compiles the hot code
+	// for speed (its first code is a quick baseline); the same number again shows the steady
+	// state.
+	for _, part := range []string{"after " + strconv.Itoa(warmup) + " warm-up", "the next ones (steady state)"} {
+		times := recomputeTimes(t, ctx, recomputes)
+		slices.Sort(times)
+		p95 := times[len(times)*95/100]
+		t.Logf("recompute after one input (plan, DOM, chart, style and layout; the batch sheet is drawn afterwards), %d runs %s: median %.2f ms, p95 %.2f ms, max %.2f ms (aim p95 ≤ %.0f ms)", len(times), part, median(times), p95, times[len(times)-1], aimRecomputeP)
+	}
 }
 
 // recomputeTimes opens the copper sulfate demo in ctx and returns n recompute times in ms,
