@@ -135,6 +135,36 @@ func (a *app) start() {
 	}
 
 	on(a.recipeForm, "input", a.onRecipeInput)
+	a.tick = js.FuncOf(func(js.Value, []js.Value) any {
+		p := a.pending
+		a.pending = nil
+		for _, f := range p {
+			f()
+		}
+		return nil
+	})
+	mark("goBound")
+	a.starting = true
+	a.load(start)
+	a.starting = false
+	mark("goPlanned")
+	a.openPrepLink(win.Location().Hash())
+	// What the first result does not need waits until it is painted: the tabs', buttons' and
+	// printing's listeners, the recipe box and the copies to carry (their lists and buttons), then the page says it is settled
+	// (data-settled), which the browser tests wait for.
+	a.later(a.bindControls)
+	a.later(a.bindBox)
+	a.later(a.bindCarry)
+	a.later(func() { setAttr(doc.Get("documentElement"), "data-settled", "") })
+	// A link pasted into the address bar of a tab that already shows Saltcast changes only
+	// the part after the #: the page reads it then too.
+	on(js.Global(), "hashchange", func(js.Value, event) { a.openLink(win.Location().Hash()) })
+}
+
+// bindControls listens to the unit choice, the screens' tabs, the demo and fresh-batch
+// buttons, the programme's choice and printing. start runs it in the task after the first
+// result; the recipe form itself is listened to from the start, so nothing typed is missed.
+func (a *app) bindControls() {
 	on(a.recipeForm, "submit", func(_ js.Value, ev event) { ev.PreventDefault() })
 	on(byID("units"), "change", a.onUnits)
 	for _, b := range qa(doc, ".screens [data-screen]") {
@@ -171,33 +201,10 @@ func (a *app) start() {
 		f = js.FuncOf(func(js.Value, []js.Value) any { a.sheetIfDirty(); return nil })
 		mq.Call("addEventListener", "change", f)
 	}
-	a.tick = js.FuncOf(func(js.Value, []js.Value) any {
-		p := a.pending
-		a.pending = nil
-		for _, f := range p {
-			f()
-		}
-		return nil
-	})
 	on(js.Global(), "afterprint", func(js.Value, event) {
 		classSet(doc.Get("body"), "print-gas", false)
 		classSet(doc.Get("body"), "print-labels", false)
 	})
-	mark("goBound")
-	a.starting = true
-	a.load(start)
-	a.starting = false
-	mark("goPlanned")
-	a.openPrepLink(win.Location().Hash())
-	// What the first result does not need waits until it is painted: the recipe box and the
-	// copies to carry (their lists and buttons), then the page says it is settled
-	// (data-settled), which the browser tests wait for.
-	a.later(a.bindBox)
-	a.later(a.bindCarry)
-	a.later(func() { setAttr(doc.Get("documentElement"), "data-settled", "") })
-	// A link pasted into the address bar of a tab that already shows Saltcast changes only
-	// the part after the #: the page reads it then too.
-	on(js.Global(), "hashchange", func(js.Value, event) { a.openLink(win.Location().Hash()) })
 }
 
 // openLink loads the recipe or preparation a share link carries (hash is from the # on);
