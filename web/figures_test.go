@@ -254,12 +254,7 @@ func loadMarks(t *testing.T, u string) [4]float64 {
 // result (performance.now() at the page's ready mark).
 func loadTime(t *testing.T, u string) float64 {
 	t.Helper()
-	ctx, cancel := chromedp.NewContext(browser(t))
-	defer cancel()
-	tctx, tcancel := context.WithTimeout(ctx, pageTimeout)
-	defer tcancel()
-	openFirst(t, tctx, u)
-	return mustEval[float64](t, tctx, `window.saltcastMarks.ready`)
+	return loadMarks(t, u)[3]
 }
 
 func have(tool string) bool {
