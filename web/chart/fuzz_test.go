@@ -8,6 +8,8 @@ import (
 	"time"
 )
 
+var noNI = strings.NewReplacer("N", "n", "I", "i")
+
 // FuzzRender holds two properties for any labels and numbers: Render never
 // panics, and it either refuses with an error or returns a well-formed SVG
 // in which no label opens an element.
@@ -17,6 +19,10 @@ func FuzzRender(f *testing.F) {
 	f.Add("\xff\x00]]>&amp;", 1e300, -1e300, 1e-300, 5e-324, 0.0, 0.0, uint8(7))
 	f.Add("Na2SO4·10H2O", 32.38, 49.7, 32.38, 49.7, math.NaN(), 1.0, uint8(2))
 	f.Fuzz(func(t *testing.T, label string, x0, y0, x1, y1, mx, my float64, k uint8) {
+		// The label carries no capital N or I, so "NaN" or "Inf" in the SVG can only be a
+		// number the chart wrote (a label "…NaNO3" once read as one). Bytes are replaced one
+		// for one, so invalid UTF-8 stays as it was.
+		label = noNI.Replace(label)
 		c := Chart{
 			Title:   label,
 			X:       Axis{Label: label, Unit: "°C"},
