@@ -374,36 +374,21 @@ func Page(gz []byte, wasmExec, version string) ([]byte, error) {
 // <style> a reference would not be read as the character, so a non-ASCII character there is
 // an error (write it as a \u or CSS escape).
 func ASCII(page string) ([]byte, error) {
-	var b strings.Builder
-	b.Grow(len(page) + 1024)
-	lower := strings.ToLower(page)
+	out := make([]byte, 0, len(page)+1024)
 	for i := 0; i < len(page); {
-		c := page[i]
-		if c == '<' {
-			for _, raw := range []string{"script", "style"} {
-				if strings.HasPrefix(lower[i+1:], raw) {
-					end := strings.Index(lower[i:], "</"+raw)
-					if end < 0 {
-						end = len(page) - i
-					}
-					for k := i; k < i+end; k++ {
-						if page[k] >= 0x80 {
-							return nil, errors.New("a character beyond ASCII inside <" + raw + "> at byte " + strconv.Itoa(k) + "; write it as an escape")
-						}
-					}
-					b.WriteString(page[i : i+end])
-					i += end
-					break
+		if raw := rawTextAt(page, i); raw != "" {
+			end := closeTagAt(page, i, raw)
+			for k := i; k < end; k++ {
+				if page[k] >= 0x80 {
+					return nil, errors.New("a character beyond ASCII inside <" + raw + "> at byte " + strconv.Itoa(k) + "; write it as an escape")
 				}
 			}
-			if i < len(page) && page[i] == '<' {
-				b.WriteByte('<')
-				i++
-			}
+			out = append(out, page[i:end]...)
+			i = end
 			continue
 		}
-		if c < 0x80 {
-			b.WriteByte(c)
+		if c := page[i]; c < 0x80 {
+			out = append(out, c)
 			i++
 			continue
 		}
@@ -411,10 +396,37 @@ func ASCII(page string) ([]byte, error) {
 		if r == utf8.RuneError && n <= 1 {
 			return nil, errors.New("the page is not UTF-8 at byte " + strconv.Itoa(i))
 		}
-		b.WriteString("&#" + strconv.Itoa(int(r)) + ";")
+		out = append(out, "&#"+strconv.Itoa(int(r))+";"...)
 		i += n
 	}
-	return []byte(b.String()), nil
+	return out, nil
+}
+
+// rawTextAt names the element whose text is not read for character references ("script" or
+// "style") when page opens one at byte i, or "". Names are matched in ASCII letter case only,
+// so byte offsets stay those of page.
+func rawTextAt(page string, i int) string {
+	if page[i] != '<' {
+		return ""
+	}
+	for _, name := range []string{"script", "style"} {
+		j := i + 1 + len(name)
+		if j < len(page) && strings.EqualFold(page[i+1:j], name) && strings.IndexByte(" \t\n\r/>", page[j]) >= 0 {
+			return name
+		}
+	}
+	return ""
+}
+
+// closeTagAt is where the element name opened at byte i ends: the byte of its "</name", or
+// the end of page.
+func closeTagAt(page string, i int, name string) int {
+	for j := i + 1; j+2+len(name) <= len(page); j++ {
+		if page[j] == '<' && page[j+1] == '/' && strings.EqualFold(page[j+2:j+2+len(name)], name) {
+			return j
+		}
+	}
+	return len(page)
 }
 
 // Version describes the source the page was built from: `git describe`, else the first line
