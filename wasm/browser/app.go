@@ -68,9 +68,10 @@ type tile struct {
 	text js.Value // out's text node, once written (setOut)
 }
 
-// setOut shows text in the tile's output. The output keeps one text node whose data changes,
-// so a new number is a change of text, not of the page's nodes (cheaper to restyle). Only
-// setOut writes the outputs of the batch screen's tiles and strip.
+// setOut shows text in el, a figure's output on the batch screen or in its result strip,
+// through el's own text node (node, made on the first write). Later writes change the node's
+// data, so a new number is a change of text, not of the page's nodes (cheaper to restyle).
+// Only setOut writes these outputs: another write would leave node out of the page.
 func setOut(el js.Value, node *js.Value, text string) {
 	if exists(*node) {
 		node.Set("data", text)
@@ -150,8 +151,8 @@ func (a *app) start() {
 	mark("goPlanned")
 	a.openPrepLink(win.Location().Hash())
 	// What the first result does not need waits until it is painted: the tabs', buttons' and
-	// printing's listeners, the recipe box and the copies to carry (their lists and buttons), then the page says it is settled
-	// (data-settled), which the browser tests wait for.
+	// printing's listeners, the recipe box and the copies to carry (their lists and buttons);
+	// then the page says it is settled (data-settled), which the browser tests wait for.
 	a.later(a.bindControls)
 	a.later(a.bindBox)
 	a.later(a.bindCarry)

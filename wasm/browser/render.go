@@ -420,7 +420,7 @@ func (a *app) renderProgramme() {
 			if cubic {
 				c = st.CubicC
 			}
-			rows[i] = [2]string{exact(wire.RoundSig(st.TimeMin, 4)), fixed(TempFromC(c, a.u), a.u.TempDecimals(1))}
+			rows[i] = [2]string{programmeTime(st.TimeMin), programmeTemp(c, a.u)}
 		}
 		if !exists(a.prog.body) {
 			a.prog.body = q(byID("programme"), "tbody")
@@ -466,19 +466,24 @@ func (p *progTable) show(rows [][2]string) {
 	}
 }
 
-// fillProgramme writes the rows of the cooling programme; both columns when both is set.
-func fillProgramme(body js.Value, r *recipe.Result, u Units, cubic, both bool) {
+// fillProgramme writes the rows of the cooling programme with both set-point columns (the
+// batch sheet; the batch screen shows one column through progTable).
+func fillProgramme(body js.Value, r *recipe.Result, u Units) {
 	clear(body)
 	for _, s := range r.Programme {
 		tr := add(body, "tr", "", "")
-		add(tr, "td", "", exact(wire.RoundSig(s.TimeMin, 4)))
-		if both || !cubic {
-			add(tr, "td", "", fixed(TempFromC(s.LinearC, u), u.TempDecimals(1)))
-		}
-		if both || cubic {
-			add(tr, "td", "", fixed(TempFromC(s.CubicC, u), u.TempDecimals(1)))
-		}
+		add(tr, "td", "", programmeTime(s.TimeMin))
+		add(tr, "td", "", programmeTemp(s.LinearC, u))
+		add(tr, "td", "", programmeTemp(s.CubicC, u))
 	}
+}
+
+// programmeTime and programmeTemp are how a step of the cooling programme reads, on the
+// screen and the sheet alike.
+func programmeTime(min float64) string { return exact(wire.RoundSig(min, 4)) }
+
+func programmeTemp(tempC float64, u Units) string {
+	return fixed(TempFromC(tempC, u), u.TempDecimals(1))
 }
 
 // renderSheet fills the printable batch sheet from the recipe and the plan.
@@ -540,7 +545,7 @@ func (a *app) renderSheet() {
 			setAttr(th, "scope", "col")
 		}
 		body := add(pt, "tbody", "", "")
-		fillProgramme(body, r, a.u, false, true)
+		fillProgramme(body, r, a.u)
 	}
 	setHidden(pt.Get("parentElement"), len(r.Programme) == 0)
 }
