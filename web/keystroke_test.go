@@ -6,7 +6,6 @@ import (
 	"context"
 	"strconv"
 	"testing"
-	"time"
 )
 
 // The batch screen's cooling programme is updated in place (its cells' text changes) while
@@ -38,7 +37,6 @@ func TestProgrammeInPlaceMatchesTheSheet(t *testing.T) {
 		}},
 	} {
 		step.do()
-		time.Sleep(50 * time.Millisecond) // the sheet is drawn in the task after the keystroke
 		got := programmeRows(t, ctx)
 		if got.hidden {
 			if step.name != "no cooling time" {
@@ -59,10 +57,11 @@ type programme struct {
 }
 
 // programmeRows reads the batch screen's programme (time and the set-point shown) and the
-// same two columns of the sheet's (time, then linear or cubic as the screen shows).
+// same two columns of the sheet's (time, then linear or cubic as the screen shows), in a task
+// after the sheet's, which the keystroke queued.
 func programmeRows(t *testing.T, ctx context.Context) programme {
 	t.Helper()
-	r := mustEval[[]string](t, ctx, `(function(){
+	r := mustEval[[]string](t, ctx, `new Promise(done => setTimeout(() => done((function(){
 		const cubic = document.querySelector('[name="programme_kind"][value="cubic"]').checked;
 		let stray = 0;
 		const screen = [...document.querySelectorAll("#programme tbody tr")].map(tr => [...tr.cells].map(td => {
@@ -71,7 +70,7 @@ func programmeRows(t *testing.T, ctx context.Context) programme {
 		}).join(" ")).join("\n");
 		const sheet = [...document.querySelectorAll("#s-programme tbody tr")].map(tr => tr.cells[0].textContent + " " + tr.cells[cubic ? 2 : 1].textContent).join("\n");
 		return [screen, sheet, String(stray), String(document.getElementById("programme-box").hidden)];
-	})()`)
+	})()), 0))`)
 	stray, err := strconv.Atoi(r[2])
 	if err != nil {
 		t.Fatal(err)
@@ -87,7 +86,7 @@ func TestKeystrokeWritesOnlyChanges(t *testing.T) {
 	ctx := tab(t)
 	open(t, ctx, appURL(t))
 	click(t, ctx, `[data-demo="cuso4"]`)
-	time.Sleep(50 * time.Millisecond)
+	mustEval[bool](t, ctx, `new Promise(done => setTimeout(() => done(true), 0))`) // the demo's drawings
 	bad := mustEval[[]string](t, ctx, `(function(){
 		const bad = [];
 		const mo = new MutationObserver(() => {});
