@@ -3,6 +3,7 @@ package unit
 import (
 	"strconv"
 	"strings"
+	"unicode/utf8"
 )
 
 // FieldError reports a value a user gave that Saltcast cannot use. Field is the key the value
@@ -14,9 +15,11 @@ type FieldError struct {
 	Allowed string
 }
 
-// Error reads like `water_g: "-5" is not allowed; allowed: a mass > 0 g`.
+// Error reads like `water_g: "-5" is not allowed; allowed: a mass > 0 g`. A field or value
+// longer than ClipBytes is shown clipped (a mistyped key can be as long as the whole input, and
+// the message must stay readable and within what a JSON answer may carry).
 func (e *FieldError) Error() string {
-	s := e.Field + ": " + strconv.Quote(e.Value) + " is not allowed"
+	s := Clip(e.Field) + ": " + strconv.Quote(Clip(e.Value)) + " is not allowed"
 	if e.Allowed != "" {
 		s += "; allowed: " + e.Allowed
 	}
@@ -33,4 +36,20 @@ func NumberError(field string, v float64, allowed string) *FieldError {
 // front end words an unknown key this way.
 func KeysAllowed(keys []string) string {
 	return "one of the keys: " + strings.Join(keys, ", ")
+}
+
+// ClipBytes is the most of a user's text an error message repeats, in bytes of UTF-8.
+const ClipBytes = 80
+
+// Clip shortens s to at most ClipBytes bytes, cut at a character boundary, and marks the cut
+// with "…" and the full length, so the user sees which text was meant and that it went on.
+func Clip(s string) string {
+	if len(s) <= ClipBytes {
+		return s
+	}
+	n := ClipBytes
+	for n > 0 && !utf8.RuneStart(s[n]) {
+		n--
+	}
+	return s[:n] + "… (" + strconv.Itoa(len(s)) + " bytes)"
 }

@@ -95,6 +95,33 @@ func TestFieldErrorMessage(t *testing.T) {
 	}
 }
 
+// A key or value as long as a whole request is shown clipped at a character boundary, with
+// its length, so the message stays short whatever was sent.
+func TestFieldErrorClipsLongText(t *testing.T) {
+	long := strings.Repeat("é", 30000) // 2 bytes each
+	err := &FieldError{Field: long, Value: long, Allowed: "one of the keys: a, b"}
+	msg := err.Error()
+	if len(msg) > 4*ClipBytes+100 {
+		t.Fatalf("message is %d bytes, want it clipped", len(msg))
+	}
+	if !strings.Contains(msg, "… (60000 bytes)") || !strings.HasSuffix(msg, "allowed: one of the keys: a, b") {
+		t.Errorf("message %q lacks the clip mark or the allowed text", msg)
+	}
+	for _, tc := range []struct {
+		in   string
+		want string
+	}{
+		{"water_g", "water_g"},
+		{strings.Repeat("a", ClipBytes), strings.Repeat("a", ClipBytes)},
+		{strings.Repeat("a", ClipBytes+1), strings.Repeat("a", ClipBytes) + "… (81 bytes)"},
+		{"a" + strings.Repeat("é", ClipBytes), "a" + strings.Repeat("é", ClipBytes/2-1) + "… (161 bytes)"},
+	} {
+		if got := Clip(tc.in); got != tc.want {
+			t.Errorf("Clip(%d bytes) = %q, want %q", len(tc.in), got, tc.want)
+		}
+	}
+}
+
 func TestFormatNumber(t *testing.T) {
 	tests := []struct {
 		v    float64

@@ -220,7 +220,7 @@ func ErrorJSON(err error) []byte {
 	if errors.As(err, &fe) {
 		field = fe.Field
 	}
-	e.Key("field").String(field)
+	e.Key("field").String(unit.Clip(field))
 	e.EndObject()
 	b, _ := e.Bytes()
 	return b
