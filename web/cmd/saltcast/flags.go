@@ -268,8 +268,11 @@ func flagError(err error, flags []flagSpec, p *parsed) error {
 				// explanation uses.
 				out.Value = p.raw[f.Key]
 				own := variants(f.Kind, f.Name)[0].Unit
-				if v, err := strconv.ParseFloat(p.vals[f.Key], 64); err == nil {
-					out.Allowed += " (" + p.raw[f.Key] + " " + unitSymbol(u) + " is " + unit.FormatCompact(v, 6) + " " + unitSymbol(own) + ")"
+				// The typed number as read (the quoted value above is the text itself, which
+				// may hold spaces or line breaks that must not enter the sentence).
+				typedV, err1 := unit.ParseNumber(out.Field, p.raw[f.Key])
+				if v, err := strconv.ParseFloat(p.vals[f.Key], 64); err == nil && err1 == nil {
+					out.Allowed += " (" + unit.FormatCompact(typedV, 6) + " " + unitSymbol(u) + " is " + unit.FormatCompact(v, 6) + " " + unitSymbol(own) + ")"
 				}
 			}
 		}

@@ -166,6 +166,9 @@ func TestErrors(t *testing.T) {
 		{[]string{"plan", "--solute", "KNO3", "--water-g", "100", "--dissolve-temp-C", "20", "--cool-to-C", "40", "--format", "json"}, "", 2, "--cool-to-C"},
 		{[]string{"plan", "--solute", "KNO3", "--water-g", "-5", "--dissolve-temp-C", "20"}, "", 2, `plan: --water-g: "-5"`},
 		{[]string{"plan", "--solute", "KNO3", "--water-kg", "-5", "--dissolve-temp-C", "20"}, "", 2, `plan: --water-kg: "-5"`},
+		// A value typed in another unit is explained in the flag's own unit, with the number as
+		// read, never the raw text (which may hold a line break).
+		{[]string{"plan", "--solute", "KNO3", "--water-L", "\n+0", "--dissolve-temp-C", "20"}, "", 2, `--water-L: "\n+0" is not allowed; allowed: a volume > 0, from 0.001 to 1e7 mL (0 L is 0 mL)`},
 		{[]string{"plan", "--solute", "KNO3", "--water-g", "5", "--dissolve-temp-C", "20", "--charge-g", "1", "--saturation-pct", "50"}, "", 2, "only one of --saturation-pct, --charge-g and --clear-down-to-C"},
 		{[]string{"plan", "--solute", "KNO3", "--water-g", "5"}, "", 2, "--dissolve-temp-C: "},
 		{[]string{"plan", "--solute", "KNO3", "--water-g", "5", "--water-lb", "1", "--dissolve-temp-C", "20"}, "", 2, "--water-lb"},
