@@ -78,6 +78,10 @@
     // The text stays in the page: "save a copy" rebuilds the file from it (web/pagecopy).
     var packed = unpack(node.textContent.trim());
     var go = new Go(), mod;
+    // Go collects its garbage when the heap has doubled, from 4 MB on: every ten keystrokes or
+    // so in the app, 8-12 ms each, inside the keystroke. With GOGC=400 the heap may reach
+    // 16 MB first, and the app collects in idle time (wasm/browser, collectWhenIdle).
+    go.env = { GOGC: "400" };
     if (packed[0] === 0x1f && packed[1] === 0x8b) {
       // gzip (a build without xz): one chunk straight into the decompressor; reading through
       // a Blob's stream took 107-113 ms here against 35 ms this way (see DEVELOPERS.md).

@@ -125,7 +125,7 @@ func (a *app) render() {
 	} else {
 		a.renderDrawings()
 	}
-	if !a.sheetDirty {
+	if !a.sheetDirty && !a.rehearsing { // a rehearsal shows the plan the sheet has
 		a.sheetDirty = true
 		a.later(a.sheetIfDirty)
 	}
