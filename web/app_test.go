@@ -179,6 +179,7 @@ func TestSaveReloadExportImport(t *testing.T) {
 
 	// The hostile name opened on the batch screen and on the sheet is text too.
 	click(t, ctx, `#saved [data-open="0"]`)
+	idle(t, ctx)
 	if got := mustEval[string](t, ctx, `document.getElementById("s-name").textContent`); got != hostileName {
 		t.Errorf("sheet name = %q, want %q as text", got, hostileName)
 	}

@@ -163,6 +163,14 @@ func waitReady(t testing.TB, ctx context.Context) {
 	}
 }
 
+// idle waits for the browser's next idle period after what the page has asked to run in idle
+// time (idle callbacks run in the order asked for): the app brings the hidden batch sheet up
+// to date then.
+func idle(t testing.TB, ctx context.Context) {
+	t.Helper()
+	mustEval[bool](t, ctx, `new Promise(done => (window.requestIdleCallback || (f => setTimeout(f, 60)))(() => done(true)))`)
+}
+
 // eval runs a JavaScript expression in the page and returns its value.
 func eval[T any](ctx context.Context, expr string) (T, error) {
 	return chromedp.Run(ctx, chromedp.Evaluate[T](expr, chromedp.EvalAwaitPromise))

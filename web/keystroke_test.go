@@ -57,11 +57,12 @@ type programme struct {
 }
 
 // programmeRows reads the batch screen's programme (time and the set-point shown) and the
-// same two columns of the sheet's (time, then linear or cubic as the screen shows), in a task
-// after the sheet's, which the keystroke queued.
+// same two columns of the sheet's (time, then linear or cubic as the screen shows), once the
+// browser has been idle, when the app brings the sheet up to date.
 func programmeRows(t *testing.T, ctx context.Context) programme {
 	t.Helper()
-	r := mustEval[[]string](t, ctx, `new Promise(done => setTimeout(() => done((function(){
+	idle(t, ctx)
+	r := mustEval[[]string](t, ctx, `(function(){
 		const cubic = document.querySelector('[name="programme_kind"][value="cubic"]').checked;
 		let stray = 0;
 		const screen = [...document.querySelectorAll("#programme tbody tr")].map(tr => [...tr.cells].map(td => {
@@ -70,7 +71,7 @@ func programmeRows(t *testing.T, ctx context.Context) programme {
 		}).join(" ")).join("\n");
 		const sheet = [...document.querySelectorAll("#s-programme tbody tr")].map(tr => tr.cells[0].textContent + " " + tr.cells[cubic ? 2 : 1].textContent).join("\n");
 		return [screen, sheet, String(stray), String(document.getElementById("programme-box").hidden)];
-	})()), 0))`)
+	})()`)
 	stray, err := strconv.Atoi(r[2])
 	if err != nil {
 		t.Fatal(err)

@@ -42,6 +42,8 @@ type app struct {
 
 	shown      map[string]string // what parts of the page show now (see changed)
 	sheetDirty bool              // the batch sheet shows an older plan
+	sheetIdle  js.Func           // sheetIfDirty, for the browser's idle callbacks (sheetWhenIdle)
+	onSheet    bool              // the batch sheet is the screen shown (showScreen)
 
 	current       recipe.Recipe // the recipe last planned
 	currentQueued bool          // keepCurrent will run
@@ -782,6 +784,7 @@ func (a *app) showUnitLabels() {
 }
 
 func (a *app) showScreen(name string) {
+	a.onSheet = name == "sheet"
 	for _, b := range qa(doc, ".screens [data-screen]") {
 		sel := attr(b, "data-screen") == name
 		if sel {
