@@ -344,7 +344,8 @@ func (a *app) keepCurrent() {
 	a.store.set(keyCurrent, string(a.current.Encode()))
 }
 
-// later runs f once the browser has painted what is on screen now (a zero timeout).
+// later runs f in a task of its own after this one (a zero timeout), which the browser may
+// paint before.
 func (a *app) later(f func()) {
 	if len(a.pending) == 0 {
 		js.Global().Call("setTimeout", a.tick, 0)
