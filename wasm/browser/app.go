@@ -246,10 +246,9 @@ func (a *app) openPrepLink(hash string) bool {
 	return true
 }
 
-// rehearsalRuns is how many times the recompute is rehearsed after the start. Measured in
-// Chromium (DEVELOPERS.md, "Decisions measured"): the first keystrokes after opening took
-// 15-70 ms while the browser compiled and then optimised the code they run; after 60
-// rehearsals in idle time they took 4-10 ms, like the later ones.
+// rehearsalRuns is how many times the recompute is rehearsed after the start: enough for the
+// browser to have compiled and optimised the code a keystroke runs, which it does only once
+// that code has run a while (the figures are in DEVELOPERS.md, "Decisions measured").
 const rehearsalRuns = 60
 
 // startRehearsal begins rehearsing the recompute in the browser's idle time.
@@ -279,8 +278,9 @@ func (a *app) startRehearsal() {
 // browser compiles and optimises that code before someone types rather than on their first
 // keystrokes. Nothing on the page changes: the box's own text read again gives the same plan,
 // whose figures and chart render leaves alone (changed, drawChart), and a rehearsal neither
-// stores the recipe nor redraws the sheet. It reports whether to go on: not while the results are stale (an input or the plan
-// has an error, and a keystroke then takes another path), and not once the runs are done.
+// stores the recipe nor redraws the sheet. It reports whether to go on: not while the results
+// are stale (an input or the plan has an error, and a keystroke then takes another path), and
+// not once the runs are done.
 func (a *app) rehearse() bool {
 	if a.stale || len(a.d.Errs) > 0 || a.last == nil || a.rehearsals <= 0 {
 		return false
@@ -305,8 +305,10 @@ func (a *app) rehearse() bool {
 // taking the form's common path (no unit switch, no compound look-up).
 var rehearsedInputs = [...]string{"cool_to_C", "dissolve_temp_C"}
 
-// plansPerGC is how many plans collectWhenIdle lets pass before it collects: each keystroke's
-// plan, figures and chart leave about 0.3 MB of garbage (GODEBUG=gctrace=1 in Chromium).
+// plansPerGC is how many plans collectWhenIdle lets pass before it collects: a keystroke's
+// plan, figures and chart leave about 45 KB of garbage, the batch sheet redrawn after it
+// another 0.24 MB (runtime.MemStats in Chromium), so 8 plans stay far below the 16 MB at which
+// Go would collect by itself.
 const plansPerGC = 8
 
 // collectWhenIdle has Go collect its garbage in the browser's idle time once plansPerGC plans
