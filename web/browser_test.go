@@ -163,6 +163,19 @@ func waitReady(t testing.TB, ctx context.Context) {
 	}
 }
 
+// typeInputJS defines typeInput(i), which changes one input of the batch form as a technician
+// does: the water when i is even (the results change; the chart, drawn per 100 g of water, does
+// not) and the cooling end when i is odd (the results and the chart change).
+const typeInputJS = `const typeInput = (function () {
+	const water = document.querySelector('#recipe [name="water_g"]');
+	const cool = document.querySelector('#recipe [name="cool_to_C"]');
+	return function (i) {
+		const el = i % 2 == 0 ? water : cool;
+		el.value = String(i % 2 == 0 ? 900 + (i % 7) * 25 : 10 + (i % 9));
+		el.dispatchEvent(new Event("input", {bubbles: true}));
+	};
+})();`
+
 // idle waits for the browser's next idle period after what the page has asked to run in idle
 // time (idle callbacks run in the order asked for): the app brings the hidden batch sheet up
 // to date then.

@@ -143,14 +143,12 @@ func recomputeTimesTyped(t *testing.T, ctx context.Context, n, pauseMs int) []fl
 	click(t, ctx, `[data-demo="cuso4"]`)
 	return mustEval[[]float64](t, ctx, `(async function(){
 		await new Promise(r => setTimeout(r, `+strconv.Itoa(pauseMs)+`));
-		const water = document.querySelector('#recipe [name="water_g"]');
-		const cool = document.querySelector('#recipe [name="cool_to_C"]');
+		`+typeInputJS+`
 		const out = [];
 		for (let i = 0; i < `+strconv.Itoa(n)+`; i++) {
 			await new Promise(r => setTimeout(r, `+strconv.Itoa(typingGapMs)+`));
 			const t0 = performance.now();
-			if (i % 2 == 0) { water.value = String(900 + (i % 7) * 25); water.dispatchEvent(new Event("input", {bubbles: true})); }
-			else { cool.value = String(10 + (i % 9)); cool.dispatchEvent(new Event("input", {bubbles: true})); }
+			typeInput(i);
 			document.body.offsetHeight; // include style and layout
 			out.push(performance.now() - t0);
 		}
@@ -163,17 +161,14 @@ func recomputeTimesTyped(t *testing.T, ctx context.Context, n, pauseMs int) []fl
 func recomputeTimes(t *testing.T, ctx context.Context, n int) []float64 {
 	t.Helper()
 	click(t, ctx, `[data-demo="cuso4"]`)
-	// Each run changes one input, as a technician does: the water (results change, the
-	// chart does not, since it is drawn per 100 g water) or the target temperature (results
-	// and chart change). The first warmup runs let the browser's compiler settle.
+	// Each run changes one input, as a technician does (typeInputJS). The first warmup runs
+	// let the browser's compiler settle.
 	times := mustEval[[]float64](t, ctx, `(function(){
-		const water = document.querySelector('#recipe [name="water_g"]');
-		const cool = document.querySelector('#recipe [name="cool_to_C"]');
+		`+typeInputJS+`
 		const out = [];
 		for (let i = 0; i < `+strconv.Itoa(warmup+n)+`; i++) {
 			const t0 = performance.now();
-			if (i % 2 == 0) { water.value = String(900 + (i % 7) * 25); water.dispatchEvent(new Event("input", {bubbles: true})); }
-			else { cool.value = String(10 + (i % 9)); cool.dispatchEvent(new Event("input", {bubbles: true})); }
+			typeInput(i);
 			document.body.offsetHeight; // include style and layout
 			out.push(performance.now() - t0);
 		}

@@ -25,7 +25,7 @@ func beforeScripts(t *testing.T, ctx context.Context, src string) {
 // After the start the app rehearses its recompute in idle time, so that someone's first
 // keystrokes run code the browser has already compiled and optimised. The rehearsals must not
 // show: from data-settled until the last one (the goRehearsed mark) nothing in the document
-// changes and nothing is stored, and they do end.
+// changes and nothing is stored; and they do run, all of them, and end.
 func TestRehearsalChangesNothing(t *testing.T) {
 	ctx := tab(t)
 	beforeScripts(t, ctx, `(function(){
@@ -48,6 +48,9 @@ func TestRehearsalChangesNothing(t *testing.T) {
 	open(t, ctx, appURL(t))
 	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](`window.saltcastMarks.goRehearsed !== undefined`)); err != nil {
 		t.Fatal("the rehearsals did not end: " + err.Error())
+	}
+	if n := mustEval[int](t, ctx, `window.saltcastMarks.rehearsals`); n != 60 {
+		t.Errorf("%d rehearsals ran, want all 60 (on the demo batch, whose inputs are all good)", n)
 	}
 	// The observer's last records arrive in a microtask after the last change.
 	changes := mustEval[[]string](t, ctx, `new Promise(r => setTimeout(() => r(window.__changes), 0))`)
@@ -84,12 +87,10 @@ func TestGarbageCollectedWhenIdle(t *testing.T) {
 	open(t, ctx, appURL(t))
 	click(t, ctx, `[data-demo="cuso4"]`)
 	gc := mustEval[[]string](t, ctx, `(async function(){
-		const water = document.querySelector('#recipe [name="water_g"]');
-		const cool = document.querySelector('#recipe [name="cool_to_C"]');
+		`+typeInputJS+`
 		for (let i = 0; i < 40; i++) {
 			await new Promise(r => setTimeout(r, 60));
-			if (i % 2 == 0) { water.value = String(900 + (i % 7) * 25); water.dispatchEvent(new Event("input", {bubbles: true})); }
-			else { cool.value = String(10 + (i % 9)); cool.dispatchEvent(new Event("input", {bubbles: true})); }
+			typeInput(i);
 		}
 		await new Promise(r => setTimeout(r, 500));
 		return window.__gc;

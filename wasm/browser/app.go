@@ -268,6 +268,9 @@ func (a *app) startRehearsal() {
 		} else {
 			step.Release()
 			mark("goRehearsed")
+			if m := js.Global().Get("saltcastMarks"); m.Type() == js.TypeObject {
+				m.Set("rehearsals", rehearsalRuns-a.rehearsals) // how many ran (tests read it)
+			}
 		}
 		return nil
 	})
